@@ -1,0 +1,33 @@
+import { z } from 'zod';
+
+// Read once at start-up, checked, with safe local defaults.
+const configSchema = z.object({
+  NODE_ENV: z.enum(['development', 'production', 'test']).default('development'),
+  HOST: z.string().default('127.0.0.1'),
+  PORT: z.coerce.number().int().min(1).max(65535).default(8080),
+  DATABASE_URL: z.string().default('postgres://keyoff@127.0.0.1:54329/keyoff'),
+  SMTP_HOST: z.string().default('127.0.0.1'),
+  SMTP_PORT: z.coerce.number().int().default(1025),
+  MAIL_FROM: z.string().default('Keyoff <no-reply@keyoff.example.org>'),
+  /** The app's public address (not BASE_URL: vitest sets that one to "/"). */
+  KEYOFF_URL: z.string().url().default('http://127.0.0.1:8080'),
+  /** Folder of the exported web build the server serves in production. */
+  WEB_DIST: z.string().default('dist'),
+  SERVE_WEB: z
+    .enum(['true', 'false'])
+    .optional()
+    .transform((v) => (v === undefined ? undefined : v === 'true')),
+  LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
+  RATE_LIMIT_PER_MINUTE: z.coerce.number().int().min(1).default(120),
+});
+
+export type Config = z.infer<typeof configSchema>;
+
+export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
+  const parsed = configSchema.safeParse(env);
+  if (!parsed.success) {
+    const problems = parsed.error.issues.map((i) => `${i.path.join('.')}: ${i.message}`).join('; ');
+    throw new Error(`Bad configuration: ${problems}`);
+  }
+  return parsed.data;
+}

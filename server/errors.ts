@@ -1,0 +1,26 @@
+/** The closed set of error codes the API answers with. */
+export type ErrorCode =
+  | 'bad_request'
+  | 'validation_failed'
+  | 'unauthenticated'
+  | 'forbidden'
+  | 'not_found'
+  | 'conflict'
+  | 'payload_too_large'
+  | 'rate_limited'
+  | 'no_conductor'
+  | 'internal';
+
+export type FieldError = { path: string; message: string };
+
+export class HttpError extends Error {
+  constructor(
+    readonly status: number,
+    readonly code: ErrorCode,
+    message: string,
+    readonly fields: FieldError[] = [],
+  ) {
+    super(message);
+    this.name = 'HttpError';
+  }
+}

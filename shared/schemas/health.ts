@@ -1,0 +1,9 @@
+import { z } from 'zod';
+
+export const healthSchema = z.object({
+  status: z.enum(['ok', 'degraded']),
+  database: z.object({ connected: z.boolean(), latencyMs: z.number().nullable(), error: z.string().optional() }),
+  version: z.string(),
+  uptimeS: z.number(),
+});
+export type Health = z.infer<typeof healthSchema>;
