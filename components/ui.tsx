@@ -24,12 +24,22 @@ export function Heading({ children }: { children: ReactNode }) {
   );
 }
 
-export function Body({ children, style }: { children: ReactNode; style?: TextStyle }) {
-  return <Text style={[styles.body, style]}>{children}</Text>;
+type TextProps = { children: ReactNode; style?: TextStyle; testID?: string };
+
+export function Body({ children, style, testID }: TextProps) {
+  return (
+    <Text testID={testID} style={[styles.body, style]}>
+      {children}
+    </Text>
+  );
 }
 
-export function Small({ children, style }: { children: ReactNode; style?: TextStyle }) {
-  return <Text style={[styles.small, style]}>{children}</Text>;
+export function Small({ children, style, testID }: TextProps) {
+  return (
+    <Text testID={testID} style={[styles.small, style]}>
+      {children}
+    </Text>
+  );
 }
 
 export function Button({

@@ -7,6 +7,7 @@ import type { Db } from '@/db/client';
 import type { Config } from './config';
 import { errorHandler, notFoundApi } from './middleware/error-handler';
 import { healthRouter } from './routes/health';
+import { projectionsRouter } from './routes/projections';
 import { serveWeb } from './web';
 
 export type AppDeps = { config: Config; db: Db; logger: Logger };
@@ -39,6 +40,7 @@ export function createApp({ config, db, logger }: AppDeps): Express {
   // (The auth handler mounts here, before the JSON parser.)
   app.use('/api', express.json({ limit: '1mb' }));
   app.use('/api/health', healthRouter(db, APP_VERSION));
+  app.use('/api/projections', projectionsRouter(config.RATE_LIMIT_PER_MINUTE));
   app.use('/api', notFoundApi);
 
   const serve = config.SERVE_WEB ?? config.NODE_ENV === 'production';

@@ -27,7 +27,8 @@ async function shutdown(signal: string) {
   if (stopping) return;
   stopping = true;
   logger.info({ signal }, 'shutting down');
-  const force = setTimeout(() => process.exit(1), 10_000).unref();
+  const force = setTimeout(() => process.exit(1), 10_000) as unknown as NodeJS.Timeout;
+  force.unref();
   server.close(async () => {
     await db.destroy();
     clearTimeout(force);

@@ -1,9 +1,10 @@
 import type { ReactNode } from 'react';
-import { Image, Pressable, ScrollView, StyleSheet, Text, useWindowDimensions, View } from 'react-native';
+import { Image, Pressable, ScrollView, StyleSheet, Text, View } from 'react-native';
 import { Link, usePathname, type Href } from 'expo-router';
 import { SafeAreaView } from 'react-native-safe-area-context';
 
-import { colors, space, type, WIDE_BREAKPOINT } from '@/shared/theme';
+import { useIsWide } from '@/components/use-layout';
+import { colors, space, type } from '@/shared/theme';
 
 const mark = require('@/assets/images/mark.png');
 
@@ -14,8 +15,7 @@ const destinations: { href: Href; label: string }[] = [
 
 /** Phone first: a top bar and a bottom bar; from WIDE_BREAKPOINT a side rail beside the content. */
 export function AppShell({ children }: { children: ReactNode }) {
-  const { width } = useWindowDimensions();
-  const wide = width >= WIDE_BREAKPOINT;
+  const wide = useIsWide();
   const pathname = usePathname();
 
   const nav = destinations.map((d) => {
@@ -25,7 +25,7 @@ export function AppShell({ children }: { children: ReactNode }) {
         <Pressable
           role="link"
           aria-current={active ? 'page' : undefined}
-          style={[wide ? styles.railItem : styles.tabItem, active && styles.active]}
+          style={StyleSheet.flatten([wide ? styles.railItem : styles.tabItem, active && styles.active])}
         >
           <Text style={[styles.navLabel, active && styles.navLabelActive]}>{d.label}</Text>
         </Pressable>

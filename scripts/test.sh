@@ -1,0 +1,25 @@
+#!/usr/bin/env bash
+# npm test: the same set-up as npm start against the test database, then every check and test.
+ROOT=$(cd "$(dirname "$0")/.." && pwd)
+source "$ROOT/scripts/lib.sh"
+trap cleanup EXIT
+trap 'exit 130' INT TERM
+T0=$SECONDS
+
+ensure_deps
+start_db
+export DATABASE_URL=postgres://keyoff@127.0.0.1:54329/keyoff_test
+# A fresh test database every run: drop what the last run left, then migrate and seed.
+"$(ls -d /usr/lib/postgresql/*/bin | sort -V | tail -1)/psql" -qX -h 127.0.0.1 -p 54329 -U keyoff -d keyoff_test \
+  -c "drop schema if exists public cascade; create schema public;" >/dev/null
+(cd "$ROOT" && npx tsx db/migrate.ts && npx tsx db/seed.ts)
+start_maildev
+
+cd "$ROOT"
+say "type check"; npx tsc --noEmit
+say "lint"; npx eslint . --max-warnings=0
+say "unit and integration tests"; npx vitest run
+build_web
+ensure_chromium
+say "browser tests"; npx vitest run --config vitest.e2e.config.mts
+say "all tests passed in $((SECONDS - T0)) s"

@@ -1,0 +1,52 @@
+import type { LoadInput, ProjectionInputRaw } from '../schemas/projection';
+
+// The invented demo scenario of the product: the Halloran-Okafor household, their van Wren and their
+// hatchback Stoat. Seeds, examples and tests take their data from here.
+
+export const DEMO_HOUSEHOLD = { seedKey: 'demo-halloran-okafor', name: 'Halloran-Okafor household' } as const;
+
+export const DEMO_PEOPLE = [
+  { name: 'Ines Halloran-Okafor', email: 'ines@example.org', householdRole: 'owner' },
+  { name: 'Tobi Halloran-Okafor', email: 'tobi@example.org', householdRole: 'member' },
+  { name: 'Marguerite Vance', email: 'marguerite@example.org', householdRole: 'advisor' },
+] as const;
+
+export const WREN_LOADS: LoadInput[] = [
+  { name: 'Compressor fridge (40 L)', supply: 'dc', watts: 48, dutyPercent: 35, hoursPerDay: 24, when: 'always' },
+  { name: 'LED strip lights', supply: 'dc', watts: 12, hoursPerDay: 4, startHour: 19, when: 'parked' },
+  { name: 'Roof fan', supply: 'dc', watts: 24, dutyPercent: 60, hoursPerDay: 8, startHour: 22, when: 'parked' },
+  { name: 'Two phones', supply: 'dc', watts: 10, hoursPerDay: 2, startHour: 21, quantity: 2 },
+  { name: 'Laptop', supply: 'ac', watts: 65, dutyPercent: 70, hoursPerDay: 3, startHour: 14, when: 'parked' },
+  { name: 'Diesel heater fan', supply: 'dc', amps: 1.1, hoursPerDay: 6, startHour: 23, when: 'parked' },
+];
+
+/** Wren: the five-day lake stay, starting Monday 18:00, with one 40-minute drive on Wednesday. */
+export const WREN: ProjectionInputRaw = {
+  systemVoltage: 12,
+  battery: { chemistry: 'agm', capacityAh: 100, healthPercent: 100, temperatureC: 18, startSocPercent: 100, role: 'house' },
+  inverter: { ratedW: 300, efficiencyPercent: 90, idleA: 0.45, control: 'always-on' },
+  keyOffDrawA: 0.03,
+  loads: WREN_LOADS,
+  charging: { alternatorA: 20, charger: 'relay', drivingMinutesPerDay: [0, 0, 40, 0, 0, 0, 0], drivingStartHour: 11, solarW: 0, peakSunHours: 0 },
+  plannedStayDays: 5,
+  horizonDays: 14,
+  start: { weekday: 0, hour: 18 },
+};
+
+export const STOAT_LOADS: LoadInput[] = [
+  { name: 'Phone charger', supply: 'dc', watts: 10, hoursPerDay: 2, startHour: 21 },
+  { name: 'Laptop', supply: 'ac', watts: 45, hoursPerDay: 2, startHour: 19, when: 'parked' },
+];
+
+/** Stoat: a small hatchback with a lighter-socket inverter left plugged into the starting battery. */
+export const STOAT: ProjectionInputRaw = {
+  systemVoltage: 12,
+  battery: { chemistry: 'flooded', capacityAh: 45, healthPercent: 90, temperatureC: 10, startSocPercent: 95, role: 'starter' },
+  inverter: { ratedW: 150, efficiencyPercent: 88, idleA: 0.3, control: 'always-on' },
+  keyOffDrawA: 0.04,
+  loads: STOAT_LOADS,
+  charging: { alternatorA: 30, charger: 'relay', drivingMinutesPerDay: [30, 30, 30, 30, 30, 0, 0], drivingStartHour: 8, solarW: 0, peakSunHours: 0 },
+  plannedStayDays: 2,
+  horizonDays: 14,
+  start: { weekday: 4, hour: 18 },
+};

@@ -1,0 +1,128 @@
+import { z } from 'zod';
+
+// The energy model's input: a public contract (POST /api/projections). Fields may be added; the names stay.
+// Optional fields take the defaults in shared/energy/defaults.ts (documented in docs/model.md).
+
+const num = (min: number, max: number) => z.number().finite().min(min).max(max);
+
+export const chemistrySchema = z.enum(['flooded', 'agm', 'gel', 'lifepo4']);
+export const batteryRoleSchema = z.enum(['house', 'starter']);
+export const inverterControlSchema = z.enum(['always-on', 'manual-switch', 'ignition-relay', 'low-voltage-disconnect']);
+export const supplySchema = z.enum(['dc', 'ac']);
+export const whenSchema = z.enum(['always', 'parked', 'driving']);
+export const loadStatusSchema = z.enum(['installed', 'candidate']);
+export const weekdaySchema = z.number().int().min(0).max(6);
+
+export const batterySchema = z.object({
+  chemistry: chemistrySchema,
+  capacityAh: num(1, 20_000),
+  healthPercent: num(1, 100).default(100),
+  temperatureC: num(-40, 60).default(25),
+  startSocPercent: num(0, 100).default(100),
+  role: batteryRoleSchema.default('house'),
+  cutoffSocPercent: num(0, 100).optional(),
+  // Overrides of the chemistry's defaults.
+  peukertExponent: num(1, 1.6).optional(),
+  ratedHours: num(1, 100).optional(),
+  chargeEfficiencyPercent: num(50, 100).optional(),
+  selfDischargePercentPerMonth: num(0, 50).optional(),
+  temperatureFactor: num(0.05, 1).optional(),
+  bulkAcceptanceC: num(0.01, 3).optional(),
+  taperStartSocPercent: num(50, 100).optional(),
+});
+
+export const inverterSchema = z.object({
+  ratedW: num(1, 10_000),
+  efficiencyPercent: num(50, 100).default(90),
+  idleA: num(0, 20).default(0.5),
+  control: inverterControlSchema.default('always-on'),
+  /** Low-voltage disconnect: the state of charge at which the inverter switches itself off. */
+  lvdSocPercent: num(0, 100).optional(),
+  /** Low-voltage disconnect: points above the threshold at which it switches back on. */
+  lvdReconnectPoints: num(1, 50).optional(),
+});
+
+export const loadSchema = z
+  .object({
+    name: z.string().trim().min(1).max(80),
+    supply: supplySchema,
+    watts: num(0, 10_000).optional(),
+    amps: num(0, 800).optional(),
+    dutyPercent: num(0, 100).default(100),
+    hoursPerDay: num(0, 24),
+    startHour: z.number().int().min(0).max(23).optional(),
+    weekdays: z.array(weekdaySchema).min(1).max(7).optional(),
+    when: whenSchema.default('always'),
+    status: loadStatusSchema.default('installed'),
+    quantity: z.number().int().min(1).max(100).default(1),
+  })
+  .superRefine((load, ctx) => {
+    if ((load.watts === undefined) === (load.amps === undefined)) {
+      ctx.addIssue({ code: 'custom', path: ['watts'], message: 'Give either watts or amps, not both or neither.' });
+    }
+  });
+
+export const shoreSchema = z.object({
+  amps: num(0, 200),
+  hoursPerDay: num(0, 24),
+  startHour: z.number().int().min(0).max(23).default(20),
+  weekdays: z.array(weekdaySchema).max(7).default([]),
+});
+
+export const chargingSchema = z.object({
+  alternatorA: num(0, 500).default(0),
+  /** Minutes of driving per weekday, Monday first. */
+  drivingMinutesPerDay: z.array(num(0, 1440)).length(7).default([0, 0, 0, 0, 0, 0, 0]),
+  /** Hour of day when each day's driving begins. */
+  drivingStartHour: z.number().int().min(0).max(23).default(10),
+  charger: z.enum(['relay', 'dc-dc']).default('relay'),
+  solarW: num(0, 5_000).default(0),
+  peakSunHours: num(0, 12).default(0),
+  solarDeratePercent: num(10, 100).optional(),
+  shore: shoreSchema.optional(),
+});
+
+export const projectionInputSchema = z
+  .object({
+    systemVoltage: num(6, 60).default(12),
+    battery: batterySchema,
+    inverter: inverterSchema.nullable().default(null),
+    keyOffDrawA: num(0, 10).default(0),
+    loads: z.array(loadSchema).max(200).default([]),
+    charging: chargingSchema.default({
+      alternatorA: 0,
+      drivingMinutesPerDay: [0, 0, 0, 0, 0, 0, 0],
+      drivingStartHour: 10,
+      charger: 'relay',
+      solarW: 0,
+      peakSunHours: 0,
+    }),
+    plannedStayDays: num(0, 60).default(0),
+    horizonDays: z.number().int().min(1).max(60).default(14),
+    start: z
+      .object({ weekday: weekdaySchema.default(0), hour: z.number().int().min(0).max(23).default(18) })
+      .default({ weekday: 0, hour: 18 }),
+  })
+  .superRefine((input, ctx) => {
+    if (!input.inverter) {
+      input.loads.forEach((load, i) => {
+        if (load.supply === 'ac') {
+          ctx.addIssue({ code: 'custom', path: ['loads', i, 'supply'], message: 'An AC load needs an inverter; add one or make the load DC.' });
+        }
+      });
+    }
+  });
+
+export type ProjectionInput = z.infer<typeof projectionInputSchema>;
+export type ProjectionInputRaw = z.input<typeof projectionInputSchema>;
+export type Load = z.infer<typeof loadSchema>;
+export type LoadInput = z.input<typeof loadSchema>;
+export type Chemistry = z.infer<typeof chemistrySchema>;
+export type InverterControl = z.infer<typeof inverterControlSchema>;
+
+export const compareInputSchema = z.object({
+  rig: projectionInputSchema,
+  /** Candidate loads to try; the rig's own loads with status "candidate" are tried as well. */
+  candidates: z.array(loadSchema).max(50).default([]),
+});
+export type CompareInput = z.infer<typeof compareInputSchema>;

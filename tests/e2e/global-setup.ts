@@ -1,0 +1,29 @@
+import { type ChildProcess, spawn } from 'node:child_process';
+
+// Starts the production server (API plus the exported web build) on its own port for the browser tests.
+export const E2E_PORT = 8091;
+let server: ChildProcess | undefined;
+
+export async function setup() {
+  server = spawn('node_modules/.bin/tsx', ['server/index.ts'], {
+    env: { ...process.env, NODE_ENV: 'production', PORT: String(E2E_PORT), LOG_LEVEL: 'warn' },
+    stdio: ['ignore', 'inherit', 'inherit'],
+  });
+  const deadline = Date.now() + 30_000;
+  for (;;) {
+    try {
+      const res = await fetch(`http://127.0.0.1:${E2E_PORT}/api/health`);
+      if (res.ok) break;
+    } catch {
+      // not up yet
+    }
+    if (Date.now() > deadline) throw new Error('the server did not start for the browser tests');
+    await new Promise((r) => setTimeout(r, 200));
+  }
+}
+
+export async function teardown() {
+  if (!server) return;
+  server.kill('SIGTERM');
+  await new Promise((r) => server!.once('exit', r));
+}
