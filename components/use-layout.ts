@@ -1,16 +1,21 @@
-import { useEffect, useState } from 'react';
+import { useSyncExternalStore } from 'react';
 import { useWindowDimensions } from 'react-native';
 
 import { WIDE_BREAKPOINT } from '@/shared/theme';
 
+const noSubscription = () => () => {};
+
 /**
  * Whether the window is wide enough for the side rail and two columns. The static web page is rendered
- * without a window, so the first (hydrating) render is always the phone layout; the real width applies
+ * without a window, so hydration uses the phone layout (the server snapshot) and the real width applies
  * right after, which keeps hydration free of mismatches.
  */
 export function useIsWide(): boolean {
   const { width } = useWindowDimensions();
-  const [mounted, setMounted] = useState(false);
-  useEffect(() => setMounted(true), []);
-  return mounted && width >= WIDE_BREAKPOINT;
+  const hydrated = useSyncExternalStore(
+    noSubscription,
+    () => true,
+    () => false,
+  );
+  return hydrated && width >= WIDE_BREAKPOINT;
 }

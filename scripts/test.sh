@@ -18,8 +18,13 @@ start_maildev
 cd "$ROOT"
 say "type check"; npx tsc --noEmit
 say "lint"; npx eslint . --max-warnings=0
-say "unit and integration tests"; npx vitest run
+say "unit and integration tests"; npx vitest run --reporter=default --reporter=json --outputFile.json=test-results/unit.json
 build_web
 ensure_chromium
-say "browser tests"; npx vitest run --config vitest.e2e.config.mts
+say "browser tests"; npx vitest run --config vitest.e2e.config.mts --reporter=default --reporter=json --outputFile.json=test-results/e2e.json
 say "all tests passed in $((SECONDS - T0)) s"
+node -e '
+  const r = ["unit", "e2e"].map((n) => require("./test-results/" + n + ".json"));
+  const sum = (k) => r.reduce((s, x) => s + x[k], 0);
+  console.log(`tests: ${sum("numPassedTests")} passed, ${sum("numFailedTests")} failed`);
+'
