@@ -61,11 +61,14 @@ export type DemandProfile = {
   acDriving: Float64Array;
   acActiveParked: Float64Array;
   acActiveDriving: Float64Array;
+  /** AC draw with the inverter's floor: while a load runs the inverter draws at least its idle current. */
+  acFloorParked: Float64Array;
+  acFloorDriving: Float64Array;
   acWattsParked: Float64Array;
   acWattsDriving: Float64Array;
 };
 
-export function buildDemandProfile(loads: Load[], systemVoltage: number, inverterEfficiency: number): DemandProfile {
+export function buildDemandProfile(loads: Load[], systemVoltage: number, inverterEfficiency: number, inverterIdleA = 0): DemandProfile {
   const mk = () => new Float64Array(HOURS_PER_WEEK);
   const profile: DemandProfile = {
     loads: [],
@@ -75,6 +78,8 @@ export function buildDemandProfile(loads: Load[], systemVoltage: number, inverte
     acDriving: mk(),
     acActiveParked: mk(),
     acActiveDriving: mk(),
+    acFloorParked: mk(),
+    acFloorDriving: mk(),
     acWattsParked: mk(),
     acWattsDriving: mk(),
   };
@@ -97,6 +102,10 @@ export function buildDemandProfile(loads: Load[], systemVoltage: number, inverte
       if (ac) {
         profile.acParked[h] += parkedA[h];
         profile.acDriving[h] += drivingA[h];
+        // Each AC load pays at least the idle current over its own running time (overlaps are counted
+        // twice, on the safe side), so adding a load can never lower the inverter's draw.
+        profile.acFloorParked[h] += Math.max(parkedA[h], inverterIdleA * parkedOn[h]);
+        profile.acFloorDriving[h] += Math.max(drivingA[h], inverterIdleA * drivingOn[h]);
         profile.acActiveParked[h] = Math.max(profile.acActiveParked[h], parkedOn[h]);
         profile.acActiveDriving[h] = Math.max(profile.acActiveDriving[h], drivingOn[h]);
         if (parkedOn[h] > 0) profile.acWattsParked[h] += watts;

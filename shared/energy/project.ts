@@ -62,7 +62,7 @@ function quickDays(r: Resolved, demand: DemandProfile) {
 export function project(input: ProjectionInput, options: { fixes?: boolean } = {}): Projection {
   const loads = installedLoads(input.loads);
   const r = resolve(input);
-  const demand = buildDemandProfile(loads, r.systemVoltage, r.inverter?.efficiency ?? 1);
+  const demand = buildDemandProfile(loads, r.systemVoltage, r.inverter?.efficiency ?? 1, r.inverter?.idleA ?? 0);
   const horizon = r.horizonHours;
 
   const parkedRun = run(r, demand, { withDriving: false, record: true });

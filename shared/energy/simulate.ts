@@ -199,6 +199,10 @@ export function run(r: Resolved, demand: DemandProfile, opts: RunOptions): RunRe
     const x = (soc - r.taperStartSoc) / Math.max(1e-9, 100 - r.taperStartSoc);
     return r.bulkAcceptanceA + (r.taperFloorA - r.bulkAcceptanceA) * Math.min(1, x);
   };
+  const taperStartAh = (r.taperStartSoc / 100) * full;
+  // Sub-steps per hour so that efficiency × |d acceptance / d Ah| × step stays at or below 0.5.
+  const taperSlope = Math.max(0, r.bulkAcceptanceA - r.taperFloorA) / Math.max(1e-9, full - taperStartAh);
+  const taperStiffness = (r.chargeEfficiency * taperSlope) / 0.5;
 
   for (let t = 0; t < hours; t++) {
     const how = (r.startHourOfWeek + t) % HOURS_PER_WEEK;
@@ -235,8 +239,10 @@ export function run(r: Resolved, demand: DemandProfile, opts: RunOptions): RunRe
       const dc = driving ? demand.dcDriving[how] : demand.dcParked[how];
       const acDemand = driving ? demand.acDriving[how] : demand.acParked[how];
       const acActive = driving ? demand.acActiveDriving[how] : demand.acActiveParked[how];
+      const acFloor = driving ? demand.acFloorDriving[how] : demand.acFloorParked[how];
       const ac = acOn ? acDemand : 0;
-      const idle = inv && idleOn ? inv.idleA * (1 - acActive) : 0;
+      // Idle in the part of the hour no AC load runs, and the floor's excess while one runs.
+      const idle = (inv && idleOn ? inv.idleA * (1 - acActive) : 0) + (acOn ? acFloor - acDemand : 0);
       const keyOff = driving ? 0 : r.keyOffA;
       const loadA = dc + ac + idle + keyOff;
       if (acOn) {
@@ -250,9 +256,14 @@ export function run(r: Resolved, demand: DemandProfile, opts: RunOptions): RunRe
       const before = ah;
       let chargeUsedAh: number;
       if (chargeA >= loadA) {
-        const into = Math.min(chargeA - loadA, acceptance(ah));
-        const stored = into * r.chargeEfficiency * dt;
-        ah = Math.min(full, ah + stored);
+        // In the taper the acceptance falls as the battery fills: short sub-steps keep the
+        // integration from overshooting (a lower battery never ends an hour above a fuller one).
+        const n = ah >= taperStartAh - 1e-9 || ah + chargeA * dt >= taperStartAh ? Math.min(200, Math.max(1, Math.ceil(taperStiffness * dt))) : 1;
+        const h = dt / n;
+        for (let k = 0; k < n; k++) {
+          const into = Math.min(chargeA - loadA, acceptance(ah));
+          ah = Math.min(full, ah + into * r.chargeEfficiency * h);
+        }
         chargeUsedAh = loadA * dt + (ah - before);
       } else {
         const deficit = loadA - chargeA;
@@ -260,15 +271,16 @@ export function run(r: Resolved, demand: DemandProfile, opts: RunOptions): RunRe
         chargeUsedAh = chargeA * dt;
       }
       ah -= r.selfDischargeAPerHour * dt;
+      const unclamped = ah;
       if (ah < 0) ah = 0;
 
       // Interpolate the moment of crossing inside the part-hour.
       const t0 = t + (driving ? 0 : f);
-      if (hoursToCutoff === null && ah <= cutAh && before > cutAh) {
-        hoursToCutoff = t0 + (dt * (before - cutAh)) / (before - ah);
+      if (hoursToCutoff === null && unclamped <= cutAh && before > cutAh) {
+        hoursToCutoff = t0 + (dt * (before - cutAh)) / (before - unclamped);
       }
-      if (hoursToFlat === null && ah <= 1e-9 && before > 0) {
-        hoursToFlat = t0 + (dt * before) / Math.max(1e-12, before - ah);
+      if (hoursToFlat === null && unclamped <= 1e-9 && before > 0) {
+        hoursToFlat = t0 + (dt * before) / Math.max(1e-12, before - unclamped);
       }
 
       if (week && inWeek) {
