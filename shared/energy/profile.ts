@@ -1,6 +1,14 @@
 import type { Load } from '../schemas/projection';
 
 export const HOURS_PER_WEEK = 168;
+const ALL_DAYS = [0, 1, 2, 3, 4, 5, 6];
+
+/** A plain array of numbers (small typed arrays cost more to allocate than they save here). */
+export function zeros(n: number, value = 0): number[] {
+  const out = new Array<number>(n);
+  for (let i = 0; i < n; i++) out[i] = value;
+  return out;
+}
 
 /** Battery-side current of one load while it runs, before duty cycle: W / V, or W / (V × efficiency) on AC. */
 export function loadRunningCurrentA(load: Load, systemVoltage: number, inverterEfficiency: number): number {
@@ -18,11 +26,11 @@ export function loadRunningCurrentA(load: Load, systemVoltage: number, inverterE
  * hoursPerDay from startHour on each of its weekdays (a window may run past midnight), or, without a
  * start hour, its hours spread evenly over the day.
  */
-export function scheduleFractions(load: Load): Float64Array {
-  const out = new Float64Array(HOURS_PER_WEEK);
-  const days = load.weekdays ?? [0, 1, 2, 3, 4, 5, 6];
+export function scheduleFractions(load: Load): number[] {
+  const out = zeros(HOURS_PER_WEEK);
+  const days = load.weekdays ? [...new Set(load.weekdays)] : ALL_DAYS;
   const hours = load.hoursPerDay;
-  for (const day of new Set(days)) {
+  for (const day of days) {
     if (load.startHour === undefined) {
       for (let h = 0; h < 24; h++) out[day * 24 + h] += hours / 24;
       continue;
@@ -45,31 +53,31 @@ export type LoadProfile = {
   load: Load;
   ac: boolean;
   runningA: number;
-  parkedA: Float64Array;
-  drivingA: Float64Array;
+  parkedA: number[];
+  drivingA: number[];
   /** Fraction of the hour the load is scheduled, parked and driving (for inverter idle and rating checks). */
-  parkedOn: Float64Array;
-  drivingOn: Float64Array;
+  parkedOn: number[];
+  drivingOn: number[];
 };
 
 /** The week's demand: per hour, DC and AC currents parked and driving, and how much of the hour an AC load runs. */
 export type DemandProfile = {
   loads: LoadProfile[];
-  dcParked: Float64Array;
-  dcDriving: Float64Array;
-  acParked: Float64Array;
-  acDriving: Float64Array;
-  acActiveParked: Float64Array;
-  acActiveDriving: Float64Array;
+  dcParked: number[];
+  dcDriving: number[];
+  acParked: number[];
+  acDriving: number[];
+  acActiveParked: number[];
+  acActiveDriving: number[];
   /** AC draw with the inverter's floor: while a load runs the inverter draws at least its idle current. */
-  acFloorParked: Float64Array;
-  acFloorDriving: Float64Array;
-  acWattsParked: Float64Array;
-  acWattsDriving: Float64Array;
+  acFloorParked: number[];
+  acFloorDriving: number[];
+  acWattsParked: number[];
+  acWattsDriving: number[];
 };
 
 export function buildDemandProfile(loads: Load[], systemVoltage: number, inverterEfficiency: number, inverterIdleA = 0): DemandProfile {
-  const mk = () => new Float64Array(HOURS_PER_WEEK);
+  const mk = () => zeros(HOURS_PER_WEEK);
   const profile: DemandProfile = {
     loads: [],
     dcParked: mk(),
@@ -83,36 +91,39 @@ export function buildDemandProfile(loads: Load[], systemVoltage: number, inverte
     acWattsParked: mk(),
     acWattsDriving: mk(),
   };
+  const { dcParked, dcDriving, acParked, acDriving, acActiveParked, acActiveDriving, acFloorParked, acFloorDriving, acWattsParked, acWattsDriving } = profile;
   for (const load of loads) {
     const ac = load.supply === 'ac';
     const runningA = loadRunningCurrentA(load, systemVoltage, inverterEfficiency);
-    const duty = load.dutyPercent / 100;
+    const amps = runningA * (load.dutyPercent / 100);
     const schedule = scheduleFractions(load);
-    const parkedOn = mk();
-    const drivingOn = mk();
+    // A "driving" load runs whenever the vehicle is driven; the others follow their schedule.
+    const parkedOn = load.when === 'driving' ? mk() : schedule;
+    const drivingOn = load.when === 'parked' ? mk() : load.when === 'driving' ? zeros(HOURS_PER_WEEK, 1) : schedule;
     const parkedA = mk();
     const drivingA = mk();
     const watts = load.watts !== undefined ? load.watts * load.quantity : runningA * systemVoltage * inverterEfficiency;
     for (let h = 0; h < HOURS_PER_WEEK; h++) {
-      // A "driving" load runs whenever the vehicle is driven; the others follow their schedule.
-      parkedOn[h] = load.when === 'driving' ? 0 : schedule[h];
-      drivingOn[h] = load.when === 'parked' ? 0 : load.when === 'driving' ? 1 : schedule[h];
-      parkedA[h] = runningA * duty * parkedOn[h];
-      drivingA[h] = runningA * duty * drivingOn[h];
+      const p = parkedOn[h];
+      const d = drivingOn[h];
+      const pa = amps * p;
+      const da = amps * d;
+      parkedA[h] = pa;
+      drivingA[h] = da;
       if (ac) {
-        profile.acParked[h] += parkedA[h];
-        profile.acDriving[h] += drivingA[h];
+        acParked[h] += pa;
+        acDriving[h] += da;
         // Each AC load pays at least the idle current over its own running time (overlaps are counted
         // twice, on the safe side), so adding a load can never lower the inverter's draw.
-        profile.acFloorParked[h] += Math.max(parkedA[h], inverterIdleA * parkedOn[h]);
-        profile.acFloorDriving[h] += Math.max(drivingA[h], inverterIdleA * drivingOn[h]);
-        profile.acActiveParked[h] = Math.max(profile.acActiveParked[h], parkedOn[h]);
-        profile.acActiveDriving[h] = Math.max(profile.acActiveDriving[h], drivingOn[h]);
-        if (parkedOn[h] > 0) profile.acWattsParked[h] += watts;
-        if (drivingOn[h] > 0) profile.acWattsDriving[h] += watts;
+        acFloorParked[h] += pa > inverterIdleA * p ? pa : inverterIdleA * p;
+        acFloorDriving[h] += da > inverterIdleA * d ? da : inverterIdleA * d;
+        if (p > acActiveParked[h]) acActiveParked[h] = p;
+        if (d > acActiveDriving[h]) acActiveDriving[h] = d;
+        if (p > 0) acWattsParked[h] += watts;
+        if (d > 0) acWattsDriving[h] += watts;
       } else {
-        profile.dcParked[h] += parkedA[h];
-        profile.dcDriving[h] += drivingA[h];
+        dcParked[h] += pa;
+        dcDriving[h] += da;
       }
     }
     profile.loads.push({ load, ac, runningA, parkedA, drivingA, parkedOn, drivingOn });
@@ -121,8 +132,8 @@ export function buildDemandProfile(loads: Load[], systemVoltage: number, inverte
 }
 
 /** Fraction of each hour of the week spent driving: each day's minutes from the start hour on. */
-export function drivingFractions(minutesPerDay: readonly number[], startHour: number): Float64Array {
-  const out = new Float64Array(HOURS_PER_WEEK);
+export function drivingFractions(minutesPerDay: readonly number[], startHour: number): number[] {
+  const out = zeros(HOURS_PER_WEEK);
   minutesPerDay.forEach((minutes, day) => {
     let t = day * 24 + startHour;
     let left = minutes / 60;
@@ -144,8 +155,8 @@ export function solarCurrents(
   systemVoltage: number,
   daylightStart: number,
   daylightEnd: number,
-): Float64Array {
-  const out = new Float64Array(24);
+): number[] {
+  const out = zeros(24);
   const dailyAh = (watts * peakSunHours * derate) / systemVoltage;
   if (dailyAh <= 0) return out;
   const span = daylightEnd - daylightStart;

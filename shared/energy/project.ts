@@ -1,7 +1,7 @@
 import type { CompareInput, Load, ProjectionInput } from '../schemas/projection';
 import { MODEL_DEFAULTS } from './defaults';
 import { buildDemandProfile, type DemandProfile, HOURS_PER_WEEK } from './profile';
-import { resolve, type Resolved, round, run, type StepRecord } from './simulate';
+import { resolve, type Resolved, round, run } from './simulate';
 
 export type MarginState = 'comfortable' | 'tight' | 'short';
 export type FixKind = 'cutoff-switch' | 'ignition-relay' | 'low-voltage-disconnect' | 'more-driving' | 'more-battery' | 'solar';
@@ -29,7 +29,17 @@ export type Projection = {
   standby: { inverterIdleAh: number; keyOffAh: number; selfDischargeAh: number };
   breakdown: BreakdownItem[];
   margin: { days: number | null; state: MarginState; plannedStayDays: number };
-  series: (StepRecord & { parkedSocPercent: number })[];
+  series: {
+    hour: number;
+    weekday: number;
+    hourOfDay: number;
+    socPercent: number;
+    parkedSocPercent: number;
+    ah: number;
+    netA: number;
+    drivingMinutes: number;
+    inverterOn: boolean;
+  }[];
   warnings: Warning[];
   fixes: Fix[];
   assumptions: Record<string, number | string | null>;
@@ -51,7 +61,12 @@ function installedLoads(loads: Load[]) {
   return loads.filter((l) => l.status === 'installed');
 }
 
-/** The figures Fixes and Try a load compare: days to cut-off parked and on the routine. */
+/** Days to cut-off on the routine alone (for the Fixes' searches). */
+function routineDays(r: Resolved, demand: DemandProfile) {
+  return toDays(run(r, demand, { withDriving: true, untilCutoff: true }).hoursToCutoff, r.horizonHours);
+}
+
+/** The figures Fixes compare: days to cut-off parked and on the routine. */
 function quickDays(r: Resolved, demand: DemandProfile) {
   const p = run(r, demand, { withDriving: false, untilCutoff: true });
   const q = run(r, demand, { withDriving: true, untilCutoff: true });
@@ -104,10 +119,23 @@ export function project(input: ProjectionInput, options: { fixes?: boolean } = {
   const marginDays = routineCut === null ? null : round(routineCut - input.plannedStayDays, 2);
   const margin = { days: marginDays, state: marginState(marginDays, input.plannedStayDays), plannedStayDays: input.plannedStayDays };
 
-  const series = routineRun.series!.slice(0, horizon).map((s, i) => ({
-    ...s,
-    parkedSocPercent: parkedRun.series![i].socPercent,
-  }));
+  const series: Projection['series'] = [];
+  const rt = routineRun.trace!;
+  const pt = parkedRun.trace!;
+  for (let i = 0; i < horizon; i++) {
+    const how = r.startHourOfWeek + i + 1;
+    series.push({
+      hour: i + 1,
+      weekday: Math.floor((how % HOURS_PER_WEEK) / 24),
+      hourOfDay: how % 24,
+      socPercent: round(rt.soc[i], 2),
+      parkedSocPercent: round(pt.soc[i], 2),
+      ah: round(rt.ah[i], 2),
+      netA: round(rt.netA[i], 3),
+      drivingMinutes: Math.round(rt.drivingMinutes[i]),
+      inverterOn: rt.inverterOn[i],
+    });
+  }
 
   const warnings = collectWarnings(input, r, demand, parkedRun.minSoc, routineRun.minSoc, Math.max(parkedRun.maxAcWatts, routineRun.maxAcWatts), week.acNotServedAh * perDay);
   const fixes = options.fixes === false ? [] : findFixes(input, r, demand, { parked: parked.daysToCutoff, routine: routineCut }, daily.netAh);
@@ -215,7 +243,11 @@ function findFixes(
   const horizonDays = input.horizonDays;
   const gained = (before: number | null, after: number | null) => round((after ?? horizonDays) - (before ?? horizonDays), 2);
   const fixes: Fix[] = [];
-  const netWith = (changed: ProjectionInput) => project(changed, { fixes: false }).daily.netAh;
+  const netWith = (changed: ProjectionInput) => {
+    const rc = resolve(changed);
+    const w = run(rc, demand, { withDriving: true, trackWeek: true, perLoad: false, hours: Math.max(rc.horizonHours, HOURS_PER_WEEK) }).week!;
+    return round(((w.chargeAh - w.loadAh - w.inverterIdleAh - w.keyOffAh - w.selfDischargeAh) * 24) / w.hours, 2);
+  };
   const push = (fix: Omit<Fix, 'daysGainedParked' | 'daysGainedRoutine' | 'ahPerDaySaved' | 'holds'>, after: { parked: number | null; routine: number | null }, changed: ProjectionInput) => {
     const daysGainedParked = gained(base.parked, after.parked);
     const daysGainedRoutine = gained(base.routine, after.routine);
@@ -278,7 +310,7 @@ function findFixes(
       ...input,
       charging: { ...input.charging, drivingMinutesPerDay: input.charging.drivingMinutesPerDay.map((x) => Math.max(x, m)) },
     });
-    const minutes = searchMin(0, 480, 5, (m) => quickDays(resolve(withMinutes(m)), demand).routine === null);
+    const minutes = searchMin(0, 480, 5, (m) => routineDays(resolve(withMinutes(m)), demand) === null);
     if (minutes !== null && minutes > 0) {
       const changed = withMinutes(minutes);
       push(
@@ -297,7 +329,7 @@ function findFixes(
   if (input.plannedStayDays > 0 && base.routine !== null && base.routine < input.plannedStayDays) {
     const withCapacity = (ah: number): ProjectionInput => ({ ...input, battery: { ...input.battery, capacityAh: ah } });
     const reach = (ah: number) => {
-      const d = quickDays(resolve(withCapacity(ah)), demand).routine;
+      const d = routineDays(resolve(withCapacity(ah)), demand);
       return d === null || d >= input.plannedStayDays;
     };
     const needed = searchMin(input.battery.capacityAh, Math.min(20_000, input.battery.capacityAh * 20), 10, reach);
@@ -319,7 +351,7 @@ function findFixes(
   if (routineFalls) {
     const psh = input.charging.peakSunHours > 0 ? input.charging.peakSunHours : MODEL_DEFAULTS.fixPeakSunHours;
     const withSolar = (w: number): ProjectionInput => ({ ...input, charging: { ...input.charging, solarW: w, peakSunHours: psh } });
-    const watts = searchMin(input.charging.solarW, 3000, 10, (w) => quickDays(resolve(withSolar(w)), demand).routine === null);
+    const watts = searchMin(input.charging.solarW, 3000, 10, (w) => routineDays(resolve(withSolar(w)), demand) === null);
     if (watts !== null && watts > input.charging.solarW) {
       const changed = withSolar(watts);
       push(

@@ -1,6 +1,10 @@
 import type { InverterControl, ProjectionInput } from '../schemas/projection';
 import { CHEMISTRY_DEFAULTS, MODEL_DEFAULTS, peukertEffectiveCurrent, temperatureFactor } from './defaults';
-import { type DemandProfile, drivingFractions, HOURS_PER_WEEK, solarCurrents } from './profile';
+import { type DemandProfile, drivingFractions, HOURS_PER_WEEK as WEEK, solarCurrents, zeros } from './profile';
+
+// Module-level copies: imported bindings are getters once compiled, too slow for the hot loop.
+const HOURS_PER_WEEK = WEEK;
+const peukert = peukertEffectiveCurrent;
 
 /** The input with every default filled in: what one run of the model needs, besides the demand profile. */
 export type Resolved = {
@@ -34,12 +38,12 @@ export type Resolved = {
   alternatorA: number;
   drivingMinutesPerDay: number[];
   drivingStartHour: number;
-  driving: Float64Array;
+  driving: number[];
   solarW: number;
   peakSunHours: number;
   solarDerate: number;
-  solarByHourOfDay: Float64Array;
-  shoreByHourOfWeek: Float64Array;
+  solarByHourOfDay: number[];
+  shoreByHourOfWeek: number[];
   horizonHours: number;
   startHourOfWeek: number;
 };
@@ -56,7 +60,7 @@ export function resolve(input: ProjectionInput): Resolved {
   const derate = (ch.solarDeratePercent ?? MODEL_DEFAULTS.solarDerate * 100) / 100;
   const V = input.systemVoltage;
   const inv = input.inverter;
-  const shore = new Float64Array(HOURS_PER_WEEK);
+  const shore = zeros(HOURS_PER_WEEK);
   if (ch.shore && ch.shore.amps > 0) {
     for (const day of new Set(ch.shore.weekdays)) {
       let t = day * 24 + ch.shore.startHour;
@@ -121,16 +125,8 @@ export function resolve(input: ProjectionInput): Resolved {
   };
 }
 
-export type StepRecord = {
-  hour: number;
-  weekday: number;
-  hourOfDay: number;
-  socPercent: number;
-  ah: number;
-  netA: number;
-  drivingMinutes: number;
-  inverterOn: boolean;
-};
+
+export type Trace = { soc: number[]; ah: number[]; netA: number[]; drivingMinutes: number[]; inverterOn: boolean[] };
 
 export type RunTotals = {
   loadAh: number;
@@ -140,7 +136,7 @@ export type RunTotals = {
   chargeAh: number;
   /** Ah of AC loads that were scheduled but could not run because the inverter was off. */
   acNotServedAh: number;
-  perLoadAh: Float64Array;
+  perLoadAh: number[];
   hours: number;
 };
 
@@ -149,7 +145,8 @@ export type RunResult = {
   hoursToFlat: number | null;
   minSoc: number;
   maxAcWatts: number;
-  series: StepRecord[] | null;
+  /** Per hour, on request: state of charge (%), Ah, net current, minutes driven, inverter on. */
+  trace: Trace | null;
   week: RunTotals | null;
 };
 
@@ -160,6 +157,8 @@ type RunOptions = {
   hours?: number;
   /** Stop as soon as the cut-off is reached (for the Fixes' searches). */
   untilCutoff?: boolean;
+  /** With trackWeek: also the amp-hours of each load (for the breakdown). */
+  perLoad?: boolean;
 };
 
 /**
@@ -178,8 +177,9 @@ export function run(r: Resolved, demand: DemandProfile, opts: RunOptions): RunRe
   let maxAcWatts = 0;
   const inv = r.inverter;
   let lvdOn = true;
-  const series: StepRecord[] | null = opts.record ? [] : null;
+  const trace: Trace | null = opts.record ? { soc: [], ah: [], netA: [], drivingMinutes: [], inverterOn: [] } : null;
   const trackWeek = opts.trackWeek ?? false;
+  const perLoad = opts.perLoad ?? true;
   const week: RunTotals | null = trackWeek
     ? {
         loadAh: 0,
@@ -188,7 +188,7 @@ export function run(r: Resolved, demand: DemandProfile, opts: RunOptions): RunRe
         selfDischargeAh: 0,
         chargeAh: 0,
         acNotServedAh: 0,
-        perLoadAh: new Float64Array(demand.loads.length),
+        perLoadAh: zeros(demand.loads.length),
         hours: Math.min(hours, HOURS_PER_WEEK),
       }
     : null;
@@ -267,7 +267,7 @@ export function run(r: Resolved, demand: DemandProfile, opts: RunOptions): RunRe
         chargeUsedAh = loadA * dt + (ah - before);
       } else {
         const deficit = loadA - chargeA;
-        ah -= peukertEffectiveCurrent(deficit, r.ratedCurrentA, r.peukertExponent) * dt;
+        ah -= peukert(deficit, r.ratedCurrentA, r.peukertExponent) * dt;
         chargeUsedAh = chargeA * dt;
       }
       ah -= r.selfDischargeAPerHour * dt;
@@ -290,7 +290,7 @@ export function run(r: Resolved, demand: DemandProfile, opts: RunOptions): RunRe
         week.selfDischargeAh += r.selfDischargeAPerHour * dt;
         week.chargeAh += chargeUsedAh;
         if (!acOn) week.acNotServedAh += acDemand * dt;
-        for (let i = 0; i < demand.loads.length; i++) {
+        for (let i = 0; perLoad && i < demand.loads.length; i++) {
           const lp = demand.loads[i];
           if (lp.ac && !acOn) continue;
           week.perLoadAh[i] += (driving ? lp.drivingA[how] : lp.parkedA[how]) * dt;
@@ -299,23 +299,18 @@ export function run(r: Resolved, demand: DemandProfile, opts: RunOptions): RunRe
     }
     const soc = (ah / full) * 100;
     if (soc < minSoc) minSoc = soc;
-    if (series) {
-      series.push({
-        hour: t + 1,
-        weekday: Math.floor(((r.startHourOfWeek + t + 1) % HOURS_PER_WEEK) / 24),
-        hourOfDay: (hod + 1) % 24,
-        socPercent: round(soc, 2),
-        ah: round(ah, 2),
-        netA: round(ah - ahAtHourStart, 3),
-        drivingMinutes: Math.round(f * 60),
-        inverterOn: inverterOnAny,
-      });
+    if (trace) {
+      trace.soc.push(soc);
+      trace.ah.push(ah);
+      trace.netA.push(ah - ahAtHourStart);
+      trace.drivingMinutes.push(f * 60);
+      trace.inverterOn.push(inverterOnAny);
     }
     if (opts.untilCutoff && hoursToCutoff !== null) break;
     // Without a series or weekly totals to fill, stop once both answers are known.
-    if (!series && (!week || t >= HOURS_PER_WEEK) && hoursToCutoff !== null && hoursToFlat !== null) break;
+    if (!trace && (!week || t >= HOURS_PER_WEEK) && hoursToCutoff !== null && hoursToFlat !== null) break;
   }
-  return { hoursToCutoff, hoursToFlat, minSoc, maxAcWatts, series, week };
+  return { hoursToCutoff, hoursToFlat, minSoc, maxAcWatts, trace, week };
 }
 
 export function round(x: number, digits: number): number {

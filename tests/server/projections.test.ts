@@ -1,0 +1,134 @@
+import request from 'supertest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+
+import { STOAT, WREN } from '@/shared/demo/scenario';
+import { makeTestApp } from './test-app';
+
+let ctx: Awaited<ReturnType<typeof makeTestApp>>;
+beforeAll(async () => {
+  ctx = await makeTestApp();
+});
+afterAll(async () => {
+  await ctx.db.destroy();
+});
+
+const post = (body: unknown, path = '/api/projections') => request(ctx.app).post(path).send(body as object);
+const fieldPaths = (res: request.Response) => (res.body.fields as { path: string }[]).map((f) => f.path);
+
+describe('POST /api/projections', () => {
+  it('projects the demo rig Wren with its headline figures, series and Fixes', async () => {
+    const res = await post(WREN).expect(200);
+    expect(res.body.parked.daysToCutoff).toBeGreaterThan(0);
+    expect(res.body.series).toHaveLength(14 * 24);
+    expect(res.body.margin.state).toMatch(/^(comfortable|tight|short)$/);
+    expect(res.body.fixes.map((f: { kind: string }) => f.kind)).toContain('cutoff-switch');
+    expect(res.body.standby.inverterIdleAh).toBeGreaterThan(0);
+  });
+
+  it('fills the documented defaults for a minimal rig', async () => {
+    const res = await post({ battery: { chemistry: 'lifepo4', capacityAh: 100 } }).expect(200);
+    expect(res.body.cutoffSocPercent).toBe(20);
+    expect(res.body.horizonDays).toBe(14);
+    expect(res.body.parked.daysToCutoff).toBeNull();
+  });
+
+  it('refuses a body without a battery, naming the field', async () => {
+    const res = await post({ systemVoltage: 12, loads: [] }).expect(400);
+    expect(res.body.code).toBe('validation_failed');
+    expect(fieldPaths(res)).toContain('battery');
+  });
+
+  it('names every wrong field: non-numbers, negatives and out-of-range values', async () => {
+    const res = await post({
+      systemVoltage: 'twelve',
+      battery: { chemistry: 'unobtainium', capacityAh: -100, startSocPercent: 140 },
+      loads: [{ name: 'Fridge', supply: 'dc', watts: -5, hoursPerDay: 30 }],
+      charging: { drivingMinutesPerDay: [0, 0, 0] },
+    }).expect(400);
+    expect(fieldPaths(res)).toEqual(
+      expect.arrayContaining([
+        'systemVoltage',
+        'battery.chemistry',
+        'battery.capacityAh',
+        'battery.startSocPercent',
+        'loads.0.watts',
+        'loads.0.hoursPerDay',
+        'charging.drivingMinutesPerDay',
+      ]),
+    );
+  });
+
+  it('refuses NaN and Infinity however they are sent', async () => {
+    const asText = await request(ctx.app).post('/api/projections').set('Content-Type', 'application/json').send('{"battery":{"chemistry":"agm","capacityAh":NaN}}');
+    expect(asText.status).toBe(400);
+    const asString = await post({ battery: { chemistry: 'agm', capacityAh: 'NaN' } }).expect(400);
+    expect(fieldPaths(asString)).toContain('battery.capacityAh');
+    const huge = await post({ battery: { chemistry: 'agm', capacityAh: 1e308 * 10 } }).expect(400);
+    expect(fieldPaths(huge)).toContain('battery.capacityAh');
+  });
+
+  it('refuses a load that gives both watts and amps, or neither', async () => {
+    const res = await post({
+      battery: { chemistry: 'agm', capacityAh: 100 },
+      loads: [
+        { name: 'A', supply: 'dc', watts: 5, amps: 1, hoursPerDay: 1 },
+        { name: 'B', supply: 'dc', hoursPerDay: 1 },
+      ],
+    }).expect(400);
+    expect(fieldPaths(res)).toEqual(expect.arrayContaining(['loads.0.watts', 'loads.1.watts']));
+  });
+
+  it('refuses an AC load on a rig without an inverter', async () => {
+    const res = await post({ battery: { chemistry: 'agm', capacityAh: 100 }, loads: [{ name: 'Laptop', supply: 'ac', watts: 60, hoursPerDay: 2 }] }).expect(400);
+    expect(fieldPaths(res)).toContain('loads.0.supply');
+  });
+
+  it('refuses a huge array of loads with 400 and a body over the size limit with 413', async () => {
+    const many = Array.from({ length: 201 }, (_, i) => ({ name: `Load ${i}`, supply: 'dc', watts: 1, hoursPerDay: 1 }));
+    const res = await post({ battery: { chemistry: 'agm', capacityAh: 100 }, loads: many }).expect(400);
+    expect(fieldPaths(res)).toContain('loads');
+    const giant = Array.from({ length: 20_000 }, (_, i) => ({ name: `Load number ${i} with a long name`, supply: 'dc', watts: 1, hoursPerDay: 1 }));
+    const big = await post({ battery: { chemistry: 'agm', capacityAh: 100 }, loads: giant });
+    expect(big.status).toBe(413);
+    expect(big.body.code).toBe('payload_too_large');
+  });
+
+  it('answers a body that is an array or a string with 400', async () => {
+    expect((await post([1, 2, 3])).status).toBe(400);
+    expect((await request(ctx.app).post('/api/projections').set('Content-Type', 'application/json').send('"rig"')).status).toBe(400);
+  });
+});
+
+describe('POST /api/projections/compare (Try a load)', () => {
+  it('answers both sides and the deltas for a candidate load', async () => {
+    const res = await post(
+      { rig: STOAT, candidates: [{ name: 'Cool box', supply: 'dc', watts: 40, dutyPercent: 50, hoursPerDay: 24, status: 'candidate' }] },
+      '/api/projections/compare',
+    ).expect(200);
+    expect(res.body.with.dailyAh).toBeGreaterThan(res.body.without.dailyAh);
+    // 40 W × 50 % × 24 h / 12 V = 40 Ah a day.
+    expect(res.body.candidates[0].ahPerDay).toBeCloseTo(40, 1);
+    expect(res.body.delta.dailyAh).toBeCloseTo(40, 0);
+  });
+
+  it('asks for at least one candidate', async () => {
+    const res = await post({ rig: WREN, candidates: [] }, '/api/projections/compare').expect(400);
+    expect(fieldPaths(res)).toContain('candidates');
+  });
+
+  it('names wrong fields inside the rig', async () => {
+    const res = await post({ rig: { battery: { chemistry: 'agm' } }, candidates: [] }, '/api/projections/compare').expect(400);
+    expect(fieldPaths(res)).toContain('rig.battery.capacityAh');
+  });
+});
+
+describe('rate limit', () => {
+  it('answers 429 once an address has used its projections for the minute', async () => {
+    const limited = await makeTestApp({ RATE_LIMIT_PER_MINUTE: '3' });
+    for (let i = 0; i < 3; i++) await request(limited.app).post('/api/projections').send({ battery: { chemistry: 'agm', capacityAh: 50 } }).expect(200);
+    const res = await request(limited.app).post('/api/projections').send({ battery: { chemistry: 'agm', capacityAh: 50 } });
+    expect(res.status).toBe(429);
+    expect(res.body.code).toBe('rate_limited');
+    await limited.db.destroy();
+  });
+});
