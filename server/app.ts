@@ -6,6 +6,8 @@ import type { Logger } from 'pino';
 import type { Db } from '@/db/client';
 import type { Config } from './config';
 import { errorHandler, notFoundApi } from './middleware/error-handler';
+import { rateLimitedOpen } from './middleware/rate-limit';
+import { cableRunsRouter } from './routes/cable-runs';
 import { healthRouter } from './routes/health';
 import { projectionsRouter } from './routes/projections';
 import { serveWeb } from './web';
@@ -40,7 +42,8 @@ export function createApp({ config, db, logger }: AppDeps): Express {
   // (The auth handler mounts here, before the JSON parser.)
   app.use('/api', express.json({ limit: '1mb' }));
   app.use('/api/health', healthRouter(db, APP_VERSION));
-  app.use('/api/projections', projectionsRouter(config.RATE_LIMIT_PER_MINUTE));
+  app.use('/api/projections', rateLimitedOpen(config.RATE_LIMIT_PER_MINUTE), projectionsRouter());
+  app.use('/api/cable-runs', rateLimitedOpen(config.RATE_LIMIT_PER_MINUTE), cableRunsRouter());
   app.use('/api', notFoundApi);
 
   const serve = config.SERVE_WEB ?? config.NODE_ENV === 'production';

@@ -1,23 +1,13 @@
 import { Router } from 'express';
-import { rateLimit } from 'express-rate-limit';
 
 import { compare, project } from '@/shared/energy/project';
 import { compareInputSchema, projectionInputSchema } from '@/shared/schemas/projection';
 import { HttpError } from '../errors';
 import { parsed, validate } from '../middleware/validate';
 
-/** Open routes: they store nothing, so anyone may run the model; a per-address limit keeps them fair. */
-export function projectionsRouter(perMinute: number) {
+/** Open routes: they store nothing, so anyone may run the model (rate-limited in app.ts). */
+export function projectionsRouter() {
   const router = Router();
-  router.use(
-    rateLimit({
-      windowMs: 60_000,
-      limit: perMinute,
-      standardHeaders: 'draft-8',
-      legacyHeaders: false,
-      handler: (_req, _res, next) => next(new HttpError(429, 'rate_limited', 'Too many projections; try again in a minute.')),
-    }),
-  );
   router.post('/', validate(projectionInputSchema), (_req, res) => {
     res.json(project(parsed(res, projectionInputSchema)));
   });
