@@ -257,7 +257,7 @@ export function sizeCableRun(input: CableRunSizeInput): CableRunResult {
     dropPercent: r3(a.dropPercent),
     ampacityA: r3(a.ampacityA),
     fuseA,
-    fuseKind: fuseA <= 40 ? 'blade fuse (ISO 8820-3 series) or circuit breaker' : 'bolt-down high-current fuse or circuit breaker',
+    fuseKind: fuseA <= 40 ? 'Blade fuse (ISO 8820-3 series) or circuit breaker' : 'Bolt-down high-current fuse or circuit breaker',
     breaker: {
       type: 'type III, manual reset, trip-free',
       standard: 'SAE J553',

@@ -1,0 +1,53 @@
+import path from 'node:path';
+import type { Browser, Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+
+import { BASE, launchChromium, PHONE, SHOTS, WIDE } from './browser';
+
+let browser: Browser;
+beforeAll(async () => {
+  browser = await launchChromium();
+});
+afterAll(async () => {
+  await browser?.close();
+});
+
+async function fill(page: Page, testId: string, value: string) {
+  const input = page.getByTestId(testId);
+  await input.fill(value);
+  await input.blur();
+}
+
+describe('the cable-run calculator', () => {
+  it('sizes 20 A over 7.62 m at 3 % as 4 AWG with the cautions beside it (wide)', async () => {
+    const page = await browser.newPage({ viewport: WIDE });
+    await page.goto(BASE + '/cable-runs');
+    await page.getByTestId('cable-run-calculator').waitFor();
+    await fill(page, 'field-currentA', '20');
+    await fill(page, 'field-lengthM', '7.62');
+    await page.getByTestId('size-run').click();
+    // REFERENCES.md (NEC Table 8, 75 °C): 20 A over 25 ft one way: 4 AWG drops 0.308 V (2.57 %).
+    await expect.poll(() => page.getByTestId('result-awg').textContent()).toBe('4');
+    expect(await page.getByTestId('cautions').textContent()).toMatch(/auto electrician/);
+    await page.screenshot({ path: path.join(SHOTS, 'cable-runs-wide.png'), fullPage: true });
+    await page.close();
+  });
+
+  it('shows the field error inline and sends nothing for a zero length (phone)', async () => {
+    const page = await browser.newPage({ viewport: PHONE });
+    let posted = 0;
+    page.on('request', (r) => {
+      if (r.url().includes('/api/cable-runs/size')) posted++;
+    });
+    await page.goto(BASE + '/cable-runs');
+    await page.getByTestId('cable-run-calculator').waitFor();
+    await fill(page, 'field-lengthM', '0');
+    await fill(page, 'field-currentA', 'abc');
+    await page.getByTestId('size-run').click();
+    await page.getByText('The length must be more than 0 m.').waitFor();
+    await page.getByText('Enter a number.').waitFor();
+    expect(posted).toBe(0);
+    await page.screenshot({ path: path.join(SHOTS, 'cable-runs-phone-errors.png'), fullPage: true });
+    await page.close();
+  });
+});
