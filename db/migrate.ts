@@ -1,20 +1,18 @@
-// `npm run db:migrate`: brings the database in DATABASE_URL to the latest migration.
-import { createDb } from './client';
-import { migrateToLatest } from './migrator';
-
-const url = process.env.DATABASE_URL ?? 'postgres://keyoff@127.0.0.1:54329/keyoff';
-const db = createDb(url, 1);
+// `npm run db:migrate`: better-auth's tables, then the project's migrations, in DATABASE_URL.
+import { createContext } from '@/server/context';
+import { migrateAll } from '@/server/migrate';
 
 async function main() {
-try {
-  const applied = await migrateToLatest(db);
-  console.log(applied.length ? `migrated: ${applied.join(', ')}` : 'database already up to date');
-} catch (err) {
-  console.error('migration failed:', err instanceof Error ? err.message : err);
-  process.exitCode = 1;
-} finally {
-  await db.destroy();
-}
+  const ctx = createContext();
+  try {
+    const applied = await migrateAll(ctx.auth, ctx.db);
+    console.log(applied.length ? `migrated: ${applied.join(', ')}` : 'database already up to date');
+  } catch (err) {
+    console.error('migration failed:', err instanceof Error ? err.message : err);
+    process.exitCode = 1;
+  } finally {
+    await ctx.db.destroy();
+  }
 }
 
 void main();

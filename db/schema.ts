@@ -2,17 +2,49 @@ import type { ColumnType, Generated, Insertable, Selectable, Updateable } from '
 
 type Timestamp = ColumnType<Date, Date | string | undefined, Date | string>;
 
-export interface HouseholdTable {
-  id: Generated<string>;
+// better-auth's own tables (created by its migrations; camelCase columns). Only the columns the app reads.
+export interface UserTable {
+  id: string;
   name: string;
-  /** Stable key for seeded demo data, so seeding twice changes nothing. */
-  seed_key: string | null;
-  created_at: Generated<Timestamp>;
+  email: string;
+  emailVerified: boolean;
+  role: string | null;
+  banned: boolean | null;
+  createdAt: Timestamp;
+  updatedAt: Timestamp;
+}
+
+export interface OrganizationTable {
+  id: string;
+  name: string;
+  slug: string;
+  createdAt: Timestamp;
+}
+
+export interface MemberTable {
+  id: string;
+  organizationId: string;
+  userId: string;
+  role: string;
+  createdAt: Timestamp;
+}
+
+export interface InvitationTable {
+  id: string;
+  organizationId: string;
+  email: string;
+  role: string | null;
+  status: string;
+  expiresAt: Timestamp;
+  inviterId: string;
+  createdAt: Timestamp;
 }
 
 export interface RigTable {
   id: Generated<string>;
+  /** The household: a better-auth organization. */
   household_id: string;
+  created_by: string | null;
   name: string;
   vehicle: string;
   /** Battery bank, inverter, charging, routine and stay: the model's input minus the loads (shared/schemas/projection.ts). */
@@ -26,6 +58,7 @@ export interface RigTable {
 export interface LoadTable {
   id: Generated<string>;
   rig_id: string;
+  added_by: string | null;
   name: string;
   supply: 'dc' | 'ac';
   watts: number | null;
@@ -42,14 +75,15 @@ export interface LoadTable {
 }
 
 export interface Database {
-  households: HouseholdTable;
+  user: UserTable;
+  organization: OrganizationTable;
+  member: MemberTable;
+  invitation: InvitationTable;
   rigs: RigTable;
   loads: LoadTable;
 }
 
-export type Household = Selectable<HouseholdTable>;
-export type NewHousehold = Insertable<HouseholdTable>;
-export type Rig = Selectable<RigTable>;
+export type RigRow = Selectable<RigTable>;
 export type NewRig = Insertable<RigTable>;
 export type RigUpdate = Updateable<RigTable>;
 export type LoadRow = Selectable<LoadTable>;

@@ -8,7 +8,7 @@ trap 'exit 130' INT TERM
 ensure_deps
 start_db
 export DATABASE_URL=${DATABASE_URL:-postgres://keyoff@127.0.0.1:54329/keyoff}
-(cd "$ROOT" && npx tsx db/migrate.ts && npx tsx db/seed.ts)
+(cd "$ROOT" && npx tsx db/seed-cli.ts)
 start_maildev
 cd "$ROOT"
 KEYOFF_URL=http://127.0.0.1:8081 node_modules/.bin/tsx watch server/index.ts &

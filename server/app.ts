@@ -1,26 +1,29 @@
 import express, { type Express } from 'express';
 import helmet from 'helmet';
 import { pinoHttp } from 'pino-http';
-import type { Logger } from 'pino';
+import { toNodeHandler } from 'better-auth/node';
 
-import type { Db } from '@/db/client';
-import type { Config } from './config';
+import { CLIENT_IP_HEADER } from './auth';
+import type { AppContext } from './context';
 import { errorHandler, notFoundApi } from './middleware/error-handler';
 import { rateLimitedOpen } from './middleware/rate-limit';
+import { requireSession } from './middleware/session';
+import { adminRouter } from './routes/admin';
 import { cableRunsRouter } from './routes/cable-runs';
 import { healthRouter } from './routes/health';
+import { invitationsRouter } from './routes/invitations';
+import { meRouter } from './routes/me';
 import { projectionsRouter } from './routes/projections';
+import { rigsRouter } from './routes/rigs';
 import { serveWeb } from './web';
-
-export type AppDeps = { config: Config; db: Db; logger: Logger };
 
 export const APP_VERSION = '0.1.0';
 
 /** Builds the whole HTTP app; index.ts only listens. Tests drive this over HTTP with supertest. */
-export function createApp({ config, db, logger }: AppDeps): Express {
+export function createApp(ctx: AppContext): Express {
+  const { config, db, logger, auth } = ctx;
   const app = express();
   app.disable('x-powered-by');
-  app.set('trust proxy', 'loopback');
   app.use(
     helmet({
       contentSecurityPolicy: {
@@ -30,7 +33,7 @@ export function createApp({ config, db, logger }: AppDeps): Express {
           'style-src': ["'self'", "'unsafe-inline'"],
           'img-src': ["'self'", 'data:', 'blob:'],
           'font-src': ["'self'", 'data:'],
-          'connect-src': ["'self'"],
+          'connect-src': ["'self'", ...config.TRUSTED_ORIGINS],
           'upgrade-insecure-requests': null,
         },
       },
@@ -39,11 +42,20 @@ export function createApp({ config, db, logger }: AppDeps): Express {
   );
   app.use(pinoHttp({ logger, autoLogging: { ignore: (req) => req.url === '/api/health' } }));
 
-  // (The auth handler mounts here, before the JSON parser.)
+  // The auth handler comes before the JSON parser; it sees the client's address from the socket, never from a header the client sent.
+  app.all('/api/auth/{*any}', (req, _res, next) => {
+    req.headers[CLIENT_IP_HEADER] = req.socket.remoteAddress ?? 'unknown';
+    next();
+  }, toNodeHandler(auth));
+
   app.use('/api', express.json({ limit: '1mb' }));
   app.use('/api/health', healthRouter(db, APP_VERSION));
   app.use('/api/projections', rateLimitedOpen(config.RATE_LIMIT_PER_MINUTE), projectionsRouter());
   app.use('/api/cable-runs', rateLimitedOpen(config.RATE_LIMIT_PER_MINUTE), cableRunsRouter());
+  app.use('/api/me', requireSession(auth), meRouter(ctx));
+  app.use('/api/rigs', requireSession(auth), rigsRouter(ctx));
+  app.use('/api/invitations', requireSession(auth), invitationsRouter(ctx));
+  app.use('/api/admin', requireSession(auth), adminRouter(ctx));
   app.use('/api', notFoundApi);
 
   const serve = config.SERVE_WEB ?? config.NODE_ENV === 'production';

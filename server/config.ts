@@ -8,7 +8,26 @@ const configSchema = z.object({
   DATABASE_URL: z.string().default('postgres://keyoff@127.0.0.1:54329/keyoff'),
   SMTP_HOST: z.string().default('127.0.0.1'),
   SMTP_PORT: z.coerce.number().int().default(1025),
+  SMTP_SECURE: z
+    .enum(['true', 'false'])
+    .default('false')
+    .transform((v) => v === 'true'),
+  SMTP_USER: z.string().optional(),
+  SMTP_PASSWORD: z.string().optional(),
   MAIL_FROM: z.string().default('Keyoff <no-reply@keyoff.example.org>'),
+  /** Secret that signs sessions; the default is for local use only. */
+  AUTH_SECRET: z.string().min(32).default('keyoff-local-development-secret-change-me-0123456789'),
+  /** E-mail addresses that become admins when they sign up (comma-separated). */
+  ADMIN_EMAILS: z
+    .string()
+    .default('')
+    .transform((v) => v.split(',').map((s) => s.trim().toLowerCase()).filter(Boolean)),
+  /** Extra origins allowed to call the auth routes (the Expo dev server in `npm run dev`). */
+  TRUSTED_ORIGINS: z
+    .string()
+    .default('')
+    .transform((v) => v.split(',').map((s) => s.trim()).filter(Boolean)),
+  SIGN_IN_LIMIT_PER_MINUTE: z.coerce.number().int().min(1).default(10),
   /** The app's public address (not BASE_URL: vitest sets that one to "/"). */
   KEYOFF_URL: z.string().url().default('http://127.0.0.1:8080'),
   /** Folder of the exported web build the server serves in production. */

@@ -9,6 +9,7 @@ export type ErrorCode =
   | 'payload_too_large'
   | 'rate_limited'
   | 'no_conductor'
+  | 'expired'
   | 'internal';
 
 export type FieldError = { path: string; message: string };

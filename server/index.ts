@@ -1,43 +1,41 @@
-import { pino } from 'pino';
-
-import { createDb } from '@/db/client';
-import { migrateToLatest } from '@/db/migrator';
 import { createApp } from './app';
-import { loadConfig } from './config';
+import { createContext } from './context';
+import { migrateAll } from './migrate';
 
 async function main() {
-const config = loadConfig();
-const logger = pino({ level: config.LOG_LEVEL });
-const db = createDb(config.DATABASE_URL);
+  const ctx = createContext();
+  const { config, logger, db, auth } = ctx;
+  const applied = await migrateAll(auth, db);
+  if (applied.length) logger.info({ applied }, 'migrations applied');
+  if (config.NODE_ENV === 'production' && config.AUTH_SECRET.startsWith('keyoff-local-development')) {
+    logger.warn('AUTH_SECRET is the local default: set your own before serving anyone but yourself');
+  }
 
-const applied = await migrateToLatest(db);
-if (applied.length) logger.info({ applied }, 'migrations applied');
-
-const app = createApp({ config, db, logger });
-const server = app.listen(config.PORT, config.HOST, () => {
-  logger.info(`Keyoff listening on http://${config.HOST}:${config.PORT}`);
-});
-server.on('error', (err) => {
-  logger.fatal({ err }, 'could not listen');
-  process.exit(1);
-});
-
-let stopping = false;
-async function shutdown(signal: string) {
-  if (stopping) return;
-  stopping = true;
-  logger.info({ signal }, 'shutting down');
-  const force = setTimeout(() => process.exit(1), 10_000) as unknown as NodeJS.Timeout;
-  force.unref();
-  server.close(async () => {
-    await db.destroy();
-    clearTimeout(force);
-    process.exit(0);
+  const app = createApp(ctx);
+  const server = app.listen(config.PORT, config.HOST, () => {
+    logger.info(`Keyoff listening on http://${config.HOST}:${config.PORT}`);
   });
-  server.closeIdleConnections();
-}
-process.on('SIGTERM', () => void shutdown('SIGTERM'));
-process.on('SIGINT', () => void shutdown('SIGINT'));
+  server.on('error', (err) => {
+    logger.fatal({ err }, 'could not listen');
+    process.exit(1);
+  });
+
+  let stopping = false;
+  const shutdown = (signal: string) => {
+    if (stopping) return;
+    stopping = true;
+    logger.info({ signal }, 'shutting down');
+    const force = setTimeout(() => process.exit(1), 10_000) as unknown as NodeJS.Timeout;
+    force.unref();
+    server.close(async () => {
+      await db.destroy();
+      clearTimeout(force);
+      process.exit(0);
+    });
+    server.closeIdleConnections();
+  };
+  process.on('SIGTERM', () => shutdown('SIGTERM'));
+  process.on('SIGINT', () => shutdown('SIGINT'));
 }
 
 main().catch((err) => {

@@ -3,13 +3,19 @@ import type { LoadInput, ProjectionInputRaw } from '../schemas/projection';
 // The invented demo scenario of the product: the Halloran-Okafor household, their van Wren and their
 // hatchback Stoat. Seeds, examples and tests take their data from here.
 
-export const DEMO_HOUSEHOLD = { seedKey: 'demo-halloran-okafor', name: 'Halloran-Okafor household' } as const;
+export const DEMO_HOUSEHOLD = { slug: 'halloran-okafor', name: 'Halloran-Okafor household' } as const;
+
+/** Every demo account signs in with this password (local demo data only). */
+export const DEMO_PASSWORD = 'keyoff-demo-2026';
 
 export const DEMO_PEOPLE = [
-  { name: 'Ines Halloran-Okafor', email: 'ines@example.org', householdRole: 'owner' },
-  { name: 'Tobi Halloran-Okafor', email: 'tobi@example.org', householdRole: 'member' },
-  { name: 'Marguerite Vance', email: 'marguerite@example.org', householdRole: 'advisor' },
+  { key: 'ines', name: 'Ines Halloran-Okafor', email: 'ines@example.org', accountRole: 'traveller', householdRole: 'owner' },
+  { key: 'tobi', name: 'Tobi Halloran-Okafor', email: 'tobi@example.org', accountRole: 'traveller', householdRole: 'member' },
+  { key: 'marguerite', name: 'Marguerite Vance', email: 'marguerite@example.org', accountRole: 'advisor', householdRole: 'advisor' },
+  { key: 'dara', name: 'Dara Finchley', email: 'dara@example.org', accountRole: 'traveller', householdRole: null },
+  { key: 'admin', name: 'Keyoff Admin', email: 'admin@example.org', accountRole: 'admin', householdRole: null },
 ] as const;
+export type DemoPersonKey = (typeof DEMO_PEOPLE)[number]['key'];
 
 export const WREN_LOADS: LoadInput[] = [
   { name: 'Compressor fridge (40 L)', supply: 'dc', watts: 48, dutyPercent: 35, hoursPerDay: 24, when: 'always' },
@@ -32,6 +38,9 @@ export const WREN: ProjectionInputRaw = {
   horizonDays: 14,
   start: { weekday: 0, hour: 18 },
 };
+
+/** Which member added which of Wren's loads (the rest are Ines's). */
+export const WREN_ADDED_BY: Record<string, DemoPersonKey> = { 'Two phones': 'tobi', Laptop: 'tobi' };
 
 export const STOAT_LOADS: LoadInput[] = [
   { name: 'Phone charger', supply: 'dc', watts: 10, hoursPerDay: 2, startHour: 21 },

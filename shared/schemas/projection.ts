@@ -82,8 +82,8 @@ export const chargingSchema = z.object({
   shore: shoreSchema.optional(),
 });
 
-export const projectionInputSchema = z
-  .object({
+/** The rig's power system and routine, without the loads: what a saved rig stores beside its loads. */
+export const projectionBaseSchema = z.object({
     systemVoltage: num(6, 60).default(12),
     battery: batterySchema,
     inverter: inverterSchema.nullable().default(null),
@@ -102,8 +102,13 @@ export const projectionInputSchema = z
     start: z
       .object({ weekday: weekdaySchema.default(0), hour: z.number().int().min(0).max(23).default(18) })
       .default({ weekday: 0, hour: 18 }),
-  })
-  .superRefine((input, ctx) => {
+});
+
+export const rigPowerSchema = projectionBaseSchema.omit({ loads: true });
+export type RigPower = z.infer<typeof rigPowerSchema>;
+export type RigPowerInput = z.input<typeof rigPowerSchema>;
+
+export const projectionInputSchema = projectionBaseSchema.superRefine((input, ctx) => {
     if (!input.inverter) {
       input.loads.forEach((load, i) => {
         if (load.supply === 'ac') {

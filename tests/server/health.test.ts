@@ -4,6 +4,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createApp } from '@/server/app';
 import { loadConfig } from '@/server/config';
 import { createDb } from '@/db/client';
+import { createContext } from '@/server/context';
 import { pino } from 'pino';
 import { makeTestApp } from './test-app';
 
@@ -26,7 +27,7 @@ describe('GET /api/health', () => {
   it('reports a database that cannot be reached as degraded, with 503', async () => {
     const config = loadConfig({ NODE_ENV: 'test', SERVE_WEB: 'false' });
     const db = createDb('postgres://keyoff@127.0.0.1:1/none', 1);
-    const app = createApp({ config, db, logger: pino({ level: 'silent' }) });
+    const app = createApp(createContext(process.env, { config, db, logger: pino({ level: 'silent' }) }));
     const res = await request(app).get('/api/health').expect(503);
     expect(res.body.status).toBe('degraded');
     expect(res.body.database.connected).toBe(false);
@@ -55,7 +56,7 @@ describe('errors', () => {
 });
 
 describe('the seeded demo scenario', () => {
-  it('holds the rigs Wren and Stoat with their loads, once each', async () => {
+  it('holds the rigs Wren and Stoat with their loads, once each, in the demo household', async () => {
     const rows = await ctx.db
       .selectFrom('rigs')
       .leftJoin('loads', 'loads.rig_id', 'rigs.id')

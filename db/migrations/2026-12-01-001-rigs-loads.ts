@@ -3,17 +3,11 @@ import { type Kysely, sql } from 'kysely';
 // Migrations never import app code: they describe the tables as they were on the day.
 export async function up(db: Kysely<any>): Promise<void> {
   await db.schema
-    .createTable('households')
-    .addColumn('id', 'uuid', (c) => c.primaryKey().defaultTo(sql`gen_random_uuid()`))
-    .addColumn('name', 'text', (c) => c.notNull())
-    .addColumn('seed_key', 'text', (c) => c.unique())
-    .addColumn('created_at', 'timestamptz', (c) => c.notNull().defaultTo(sql`now()`))
-    .execute();
-
-  await db.schema
     .createTable('rigs')
     .addColumn('id', 'uuid', (c) => c.primaryKey().defaultTo(sql`gen_random_uuid()`))
-    .addColumn('household_id', 'uuid', (c) => c.notNull().references('households.id').onDelete('cascade'))
+    // Households are better-auth's organizations (created before these migrations run).
+    .addColumn('household_id', 'text', (c) => c.notNull().references('organization.id').onDelete('cascade'))
+    .addColumn('created_by', 'text', (c) => c.references('user.id').onDelete('set null'))
     .addColumn('name', 'text', (c) => c.notNull())
     .addColumn('vehicle', 'text', (c) => c.notNull().defaultTo(''))
     .addColumn('power', 'jsonb', (c) => c.notNull())
@@ -28,6 +22,7 @@ export async function up(db: Kysely<any>): Promise<void> {
     .createTable('loads')
     .addColumn('id', 'uuid', (c) => c.primaryKey().defaultTo(sql`gen_random_uuid()`))
     .addColumn('rig_id', 'uuid', (c) => c.notNull().references('rigs.id').onDelete('cascade'))
+    .addColumn('added_by', 'text', (c) => c.references('user.id').onDelete('set null'))
     .addColumn('name', 'text', (c) => c.notNull())
     .addColumn('supply', 'text', (c) => c.notNull().check(sql`supply in ('dc', 'ac')`))
     .addColumn('watts', 'double precision')
@@ -49,5 +44,4 @@ export async function up(db: Kysely<any>): Promise<void> {
 export async function down(db: Kysely<any>): Promise<void> {
   await db.schema.dropTable('loads').execute();
   await db.schema.dropTable('rigs').execute();
-  await db.schema.dropTable('households').execute();
 }

@@ -1,0 +1,94 @@
+import { betterAuth } from 'better-auth';
+import { admin, organization } from 'better-auth/plugins';
+import type { Logger } from 'pino';
+
+import type { Db } from '@/db/client';
+import { accountAc, accountRoles, householdAc, householdRoles } from '@/shared/permissions';
+import type { Config } from './config';
+import { type Mailer, templates } from './mail';
+
+/** The header the server sets from the socket before the auth handler, so its rate limit sees the real client. */
+export const CLIENT_IP_HEADER = 'x-keyoff-client-ip';
+
+export const INVITATION_DAYS = 7;
+
+/**
+ * better-auth on the app's own Kysely instance: e-mail and password with verification and reset,
+ * account roles (admin plugin: traveller, advisor, admin) and households (organization plugin: owner,
+ * member, advisor).
+ */
+export function createAuth({ config, db, mailer, logger }: { config: Config; db: Db; mailer: Mailer; logger: Logger }) {
+  const send = async (mail: Parameters<Mailer['send']>[0]) => {
+    try {
+      await mailer.send(mail);
+    } catch (err) {
+      // better-auth only logs a failing hook; we log it too, with the address, and the request goes on.
+      logger.error({ err, to: mail.to }, 'mail could not be sent');
+    }
+  };
+
+  return betterAuth({
+    appName: 'Keyoff',
+    baseURL: config.KEYOFF_URL,
+    basePath: '/api/auth',
+    secret: config.AUTH_SECRET,
+    database: { db, type: 'postgres' },
+    trustedOrigins: [config.KEYOFF_URL, ...config.TRUSTED_ORIGINS],
+    emailAndPassword: {
+      enabled: true,
+      requireEmailVerification: true,
+      minPasswordLength: 10,
+      maxPasswordLength: 128,
+      resetPasswordTokenExpiresIn: 3600,
+      revokeSessionsOnPasswordReset: true,
+      sendResetPassword: async ({ user, url }) => send(templates.resetPassword(user.email, user.name, url)),
+    },
+    emailVerification: {
+      sendOnSignUp: true,
+      autoSignInAfterVerification: true,
+      expiresIn: 24 * 3600,
+      sendVerificationEmail: async ({ user, url }) => send(templates.verifyEmail(user.email, user.name, url)),
+    },
+    session: { cookieCache: { enabled: true, maxAge: 60 } },
+    rateLimit: {
+      enabled: true,
+      window: 60,
+      max: 300,
+      storage: 'memory',
+      customRules: {
+        '/sign-in/email': { window: 60, max: config.SIGN_IN_LIMIT_PER_MINUTE },
+        '/sign-up/email': { window: 60, max: config.SIGN_IN_LIMIT_PER_MINUTE },
+        '/request-password-reset': { window: 60, max: config.SIGN_IN_LIMIT_PER_MINUTE },
+      },
+    },
+    advanced: {
+      // Under vitest NODE_ENV=test silently switches the origin check off; keep it on everywhere.
+      disableOriginCheck: false,
+      ipAddress: { ipAddressHeaders: [CLIENT_IP_HEADER] },
+      useSecureCookies: config.KEYOFF_URL.startsWith('https://'),
+    },
+    databaseHooks: {
+      user: {
+        create: {
+          // The first admins come from the configuration.
+          before: async (user) => (config.ADMIN_EMAILS.includes(user.email.toLowerCase()) ? { data: { ...user, role: 'admin' } } : { data: user }),
+        },
+      },
+    },
+    plugins: [
+      admin({ ac: accountAc, roles: accountRoles, defaultRole: 'traveller', adminRoles: ['admin'] }),
+      organization({
+        ac: householdAc,
+        roles: householdRoles,
+        creatorRole: 'owner',
+        invitationExpiresIn: INVITATION_DAYS * 24 * 3600,
+        cancelPendingInvitationsOnReInvite: true,
+        requireEmailVerificationOnInvitation: true,
+        sendInvitationEmail: async ({ id, email, role, organization: household, inviter }) =>
+          send(templates.invitation(email, inviter.user.name, household.name, role, `${config.KEYOFF_URL}/invitations/${id}`)),
+      }),
+    ],
+  });
+}
+
+export type Auth = ReturnType<typeof createAuth>;

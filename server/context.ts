@@ -1,0 +1,18 @@
+import { pino, type Logger } from 'pino';
+
+import { createDb, type Db } from '@/db/client';
+import { type Auth, createAuth } from './auth';
+import { type Config, loadConfig } from './config';
+import { createMailer, type Mailer } from './mail';
+
+/** Everything the app is built from, made once: configuration, logger, database, mailer, auth. */
+export type AppContext = { config: Config; logger: Logger; db: Db; mailer: Mailer; auth: Auth };
+
+export function createContext(env: NodeJS.ProcessEnv = process.env, overrides: Partial<AppContext> = {}): AppContext {
+  const config = overrides.config ?? loadConfig(env);
+  const logger = overrides.logger ?? pino({ level: config.LOG_LEVEL });
+  const db = overrides.db ?? createDb(config.DATABASE_URL);
+  const mailer = overrides.mailer ?? createMailer(config, logger);
+  const auth = overrides.auth ?? createAuth({ config, db, mailer, logger });
+  return { config, logger, db, mailer, auth };
+}

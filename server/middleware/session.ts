@@ -1,0 +1,25 @@
+import type { NextFunction, Request, Response } from 'express';
+import { fromNodeHeaders } from 'better-auth/node';
+
+import type { Auth } from '../auth';
+import { HttpError } from '../errors';
+
+export type SessionData = NonNullable<Awaited<ReturnType<Auth['api']['getSession']>>>;
+
+/** Reads the better-auth session; 401 without one. Handlers read it with `session(res)`. */
+export function requireSession(auth: Auth) {
+  return async (req: Request, res: Response, next: NextFunction) => {
+    const data = await auth.api.getSession({ headers: fromNodeHeaders(req.headers) });
+    if (!data) return next(new HttpError(401, 'unauthenticated', 'Sign in to continue.'));
+    res.locals.session = data;
+    next();
+  };
+}
+
+export const session = (res: Response) => res.locals.session as SessionData;
+
+/** Only accounts with the admin role. */
+export function requireAdmin(req: Request, res: Response, next: NextFunction) {
+  if (session(res).user.role !== 'admin') return next(new HttpError(403, 'forbidden', 'Only an admin can do this.'));
+  next();
+}

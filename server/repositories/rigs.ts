@@ -1,0 +1,122 @@
+import type { Kysely, Transaction } from 'kysely';
+
+import type { Db } from '@/db/client';
+import type { Database, LoadRow, NewLoad, RigRow } from '@/db/schema';
+
+type Exec = Db | Transaction<Database> | Kysely<Database>;
+
+/** The rig and the caller's role in its household; null when either the rig or the membership is missing. */
+export async function findRigWithRole(db: Exec, rigId: string, userId: string) {
+  const row = await db
+    .selectFrom('rigs')
+    .innerJoin('member', (j) => j.onRef('member.organizationId', '=', 'rigs.household_id').on('member.userId', '=', userId))
+    .innerJoin('organization', 'organization.id', 'rigs.household_id')
+    .selectAll('rigs')
+    .select(['member.role as role', 'organization.name as household_name'])
+    .where('rigs.id', '=', rigId)
+    .executeTakeFirst();
+  return row ?? null;
+}
+
+export async function listRigsForUser(db: Exec, userId: string) {
+  return db
+    .selectFrom('rigs')
+    .innerJoin('member', (j) => j.onRef('member.organizationId', '=', 'rigs.household_id').on('member.userId', '=', userId))
+    .innerJoin('organization', 'organization.id', 'rigs.household_id')
+    .selectAll('rigs')
+    .select(['member.role as role', 'organization.name as household_name'])
+    .orderBy('rigs.updated_at', 'desc')
+    .execute();
+}
+
+export async function loadsOfRigs(db: Exec, rigIds: string[]): Promise<(LoadRow & { added_by_name: string | null })[]> {
+  if (!rigIds.length) return [];
+  return db
+    .selectFrom('loads')
+    .leftJoin('user', 'user.id', 'loads.added_by')
+    .selectAll('loads')
+    .select('user.name as added_by_name')
+    .where('loads.rig_id', 'in', rigIds)
+    .orderBy('loads.position')
+    .orderBy('loads.created_at')
+    .execute();
+}
+
+export async function insertRig(
+  db: Exec,
+  rig: { householdId: string; createdBy: string; name: string; vehicle: string; power: unknown },
+  loads: Omit<NewLoad, 'rig_id'>[],
+): Promise<RigRow> {
+  return db.transaction().execute(async (trx) => {
+    const row = await trx
+      .insertInto('rigs')
+      .values({ household_id: rig.householdId, created_by: rig.createdBy, name: rig.name, vehicle: rig.vehicle, power: JSON.stringify(rig.power) })
+      .returningAll()
+      .executeTakeFirstOrThrow();
+    if (loads.length) await trx.insertInto('loads').values(loads.map((l) => ({ ...l, rig_id: row.id }))).execute();
+    return row;
+  });
+}
+
+export async function householdRole(db: Exec, householdId: string, userId: string): Promise<string | null> {
+  const row = await db.selectFrom('member').select('role').where('organizationId', '=', householdId).where('userId', '=', userId).executeTakeFirst();
+  return row?.role ?? null;
+}
+
+export async function householdsOfUser(db: Exec, userId: string) {
+  return db
+    .selectFrom('member')
+    .innerJoin('organization', 'organization.id', 'member.organizationId')
+    .select(['organization.id as id', 'organization.name as name', 'member.role as role'])
+    .where('member.userId', '=', userId)
+    .orderBy('organization.createdAt')
+    .execute();
+}
+
+export async function householdPeople(db: Exec, householdId: string) {
+  const members = await db
+    .selectFrom('member')
+    .innerJoin('user', 'user.id', 'member.userId')
+    .select(['member.id as id', 'member.userId as userId', 'member.role as role', 'member.createdAt as joinedAt', 'user.name as name', 'user.email as email'])
+    .where('member.organizationId', '=', householdId)
+    .orderBy('member.createdAt')
+    .execute();
+  const invitations = await db
+    .selectFrom('invitation')
+    .select(['id', 'email', 'role', 'status', 'expiresAt', 'createdAt'])
+    .where('organizationId', '=', householdId)
+    .where('status', '=', 'pending')
+    .orderBy('createdAt')
+    .execute();
+  return { members, invitations };
+}
+
+export async function findMember(db: Exec, householdId: string, memberId: string) {
+  return (await db.selectFrom('member').selectAll().where('organizationId', '=', householdId).where('id', '=', memberId).executeTakeFirst()) ?? null;
+}
+
+export async function countOwners(db: Exec, householdId: string): Promise<number> {
+  const rows = await db.selectFrom('member').select('role').where('organizationId', '=', householdId).execute();
+  return rows.filter((r) => r.role.split(',').includes('owner')).length;
+}
+
+export async function findInvitation(db: Exec, invitationId: string) {
+  return (
+    (await db
+      .selectFrom('invitation')
+      .innerJoin('organization', 'organization.id', 'invitation.organizationId')
+      .leftJoin('user', 'user.id', 'invitation.inviterId')
+      .select([
+        'invitation.id as id',
+        'invitation.email as email',
+        'invitation.role as role',
+        'invitation.status as status',
+        'invitation.expiresAt as expiresAt',
+        'invitation.organizationId as householdId',
+        'organization.name as householdName',
+        'user.name as inviterName',
+      ])
+      .where('invitation.id', '=', invitationId)
+      .executeTakeFirst()) ?? null
+  );
+}

@@ -1,0 +1,24 @@
+import { Router } from 'express';
+import { fromNodeHeaders } from 'better-auth/node';
+
+import { accountRoleBodySchema, userParamsSchema } from '@/shared/schemas/people';
+import { viaAuth } from '../auth-errors';
+import type { AppContext } from '../context';
+import { requireAdmin } from '../middleware/session';
+import { parsed, validate } from '../middleware/validate';
+
+/** /api/admin: account roles. An admin sees accounts, never a budget they were not invited to. */
+export function adminRouter({ auth }: AppContext) {
+  const router = Router();
+  router.use(requireAdmin);
+  router.get('/users', async (req, res) => {
+    const result = await viaAuth(() => auth.api.listUsers({ headers: fromNodeHeaders(req.headers), query: { limit: 200, sortBy: 'createdAt' } }));
+    res.json({ users: result.users.map((u) => ({ id: u.id, name: u.name, email: u.email, role: u.role ?? 'traveller', emailVerified: u.emailVerified })) });
+  });
+  router.put('/users/:userId/role', validate(userParamsSchema, 'params'), validate(accountRoleBodySchema), async (req, res) => {
+    const { userId } = parsed(res, userParamsSchema, 'params');
+    await viaAuth(() => auth.api.setRole({ headers: fromNodeHeaders(req.headers), body: { userId, role: parsed(res, accountRoleBodySchema).role } }), 'role');
+    res.status(204).end();
+  });
+  return router;
+}

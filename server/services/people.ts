@@ -1,0 +1,80 @@
+import type { Db } from '@/db/client';
+import type { Auth } from '../auth';
+import { viaAuth } from '../auth-errors';
+import { HttpError } from '../errors';
+import { countOwners, findInvitation, findMember, householdPeople } from '../repositories/rigs';
+
+type Headers = globalThis.Headers;
+const isOwner = (role: string) => role.split(',').includes('owner');
+
+export async function listPeople(db: Db, householdId: string) {
+  const { members, invitations } = await householdPeople(db, householdId);
+  return {
+    members: members.map((m) => ({ ...m, joinedAt: new Date(m.joinedAt as unknown as Date).toISOString() })),
+    invitations: invitations.map((i) => ({
+      ...i,
+      expiresAt: new Date(i.expiresAt as unknown as Date).toISOString(),
+      createdAt: new Date(i.createdAt as unknown as Date).toISOString(),
+      expired: new Date(i.expiresAt as unknown as Date).getTime() < Date.now(),
+    })),
+  };
+}
+
+export async function invite(auth: Auth, headers: Headers, householdId: string, email: string, role: string, resend = false) {
+  const invitation = await viaAuth(() => auth.api.createInvitation({ headers, body: { email, role: role as 'member', organizationId: householdId, resend } }), 'email');
+  return { id: invitation.id, email: invitation.email, role: invitation.role, status: invitation.status, expiresAt: new Date(invitation.expiresAt).toISOString() };
+}
+
+export async function resendInvitation(db: Db, auth: Auth, headers: Headers, householdId: string, invitationId: string) {
+  const inv = await findInvitation(db, invitationId);
+  if (!inv || inv.householdId !== householdId || inv.status !== 'pending') throw new HttpError(404, 'not_found', 'No such pending invitation.');
+  return invite(auth, headers, householdId, inv.email, inv.role ?? 'member', true);
+}
+
+export async function revokeInvitation(db: Db, auth: Auth, headers: Headers, householdId: string, invitationId: string) {
+  const inv = await findInvitation(db, invitationId);
+  if (!inv || inv.householdId !== householdId || inv.status !== 'pending') throw new HttpError(404, 'not_found', 'No such pending invitation.');
+  await viaAuth(() => auth.api.cancelInvitation({ headers, body: { invitationId } }));
+}
+
+export async function changeRole(db: Db, auth: Auth, headers: Headers, householdId: string, memberId: string, role: string) {
+  const member = await findMember(db, householdId, memberId);
+  if (!member) throw new HttpError(404, 'not_found', 'No such person in this household.');
+  if (isOwner(member.role) && role !== 'owner' && (await countOwners(db, householdId)) <= 1) {
+    throw new HttpError(409, 'conflict', 'A household needs an owner: make someone else owner first.', [{ path: 'role', message: 'The last owner keeps the owner role.' }]);
+  }
+  await viaAuth(() => auth.api.updateMemberRole({ headers, body: { memberId, role: role as 'member', organizationId: householdId } }), 'role');
+}
+
+export async function removePerson(db: Db, auth: Auth, headers: Headers, householdId: string, memberId: string) {
+  const member = await findMember(db, householdId, memberId);
+  if (!member) throw new HttpError(404, 'not_found', 'No such person in this household.');
+  if (isOwner(member.role) && (await countOwners(db, householdId)) <= 1) {
+    throw new HttpError(409, 'conflict', 'The last owner cannot be removed.');
+  }
+  await viaAuth(() => auth.api.removeMember({ headers, body: { memberIdOrEmail: memberId, organizationId: householdId } }));
+}
+
+export async function leave(db: Db, auth: Auth, headers: Headers, householdId: string, role: string) {
+  if (isOwner(role) && (await countOwners(db, householdId)) <= 1) {
+    throw new HttpError(409, 'conflict', 'The last owner cannot leave: make someone else owner first.');
+  }
+  await viaAuth(() => auth.api.leaveOrganization({ headers, body: { organizationId: householdId } }));
+}
+
+/** An invitation as its invitee sees it: only to the address it was sent to, only once, only in time. */
+export async function invitationForInvitee(db: Db, invitationId: string, email: string) {
+  const inv = await findInvitation(db, invitationId);
+  if (!inv) throw new HttpError(404, 'not_found', 'No such invitation.');
+  if (inv.email.toLowerCase() !== email.toLowerCase()) {
+    throw new HttpError(403, 'forbidden', `This invitation was sent to another address. Sign in as ${inv.email.replace(/^(.).*(@.*)$/, '$1…$2')} to accept it.`);
+  }
+  if (inv.status !== 'pending') throw new HttpError(409, 'conflict', inv.status === 'accepted' ? 'This invitation has already been used.' : 'This invitation was withdrawn.');
+  if (new Date(inv.expiresAt as unknown as Date).getTime() < Date.now()) throw new HttpError(410, 'expired', 'This invitation has expired; ask for a new one.');
+  return { id: inv.id, householdName: inv.householdName, inviterName: inv.inviterName, role: inv.role, expiresAt: new Date(inv.expiresAt as unknown as Date).toISOString() };
+}
+
+export async function acceptInvitation(db: Db, auth: Auth, headers: Headers, invitationId: string, email: string) {
+  await invitationForInvitee(db, invitationId, email);
+  await viaAuth(() => auth.api.acceptInvitation({ headers, body: { invitationId } }));
+}

@@ -1,0 +1,126 @@
+import type { Db } from '@/db/client';
+import type { LoadRow } from '@/db/schema';
+import { project } from '@/shared/energy/project';
+import { can, type HouseholdRole } from '@/shared/permissions';
+import { type Load, projectionInputSchema, type RigPower, rigPowerSchema } from '@/shared/schemas/projection';
+import type { RigCreateInput } from '@/shared/schemas/rig';
+import type { Auth } from '../auth';
+import { viaAuth } from '../auth-errors';
+import { HttpError } from '../errors';
+import { householdRole, insertRig, listRigsForUser, loadsOfRigs } from '../repositories/rigs';
+
+export type SavedLoad = Load & { id: string; addedBy: { id: string; name: string } | null };
+
+export function loadFromRow(row: LoadRow & { added_by_name?: string | null }): SavedLoad {
+  return {
+    id: row.id,
+    name: row.name,
+    supply: row.supply,
+    ...(row.amps !== null ? { amps: row.amps } : { watts: row.watts ?? 0 }),
+    dutyPercent: row.duty_percent,
+    hoursPerDay: row.hours_per_day,
+    startHour: row.start_hour,
+    when: row.when,
+    status: row.status,
+    quantity: row.quantity,
+    addedBy: row.added_by ? { id: row.added_by, name: row.added_by_name ?? '' } : null,
+  };
+}
+
+export function loadToRow(load: Load, position: number, addedBy: string | null) {
+  return {
+    name: load.name,
+    supply: load.supply,
+    watts: load.amps === undefined ? (load.watts ?? 0) : null,
+    amps: load.amps ?? null,
+    duty_percent: load.dutyPercent,
+    hours_per_day: load.hoursPerDay,
+    start_hour: load.startHour ?? 0,
+    when: load.when,
+    status: load.status,
+    quantity: load.quantity,
+    position,
+    added_by: addedBy,
+  };
+}
+
+/** What the role may do, for the client to hide controls (the server checks every request anyway). */
+export function permissionsOf(role: string) {
+  return {
+    edit: can(role, { rig: ['update'] }),
+    delete: can(role, { rig: ['delete'] }),
+    manageLoads: can(role, { load: ['create'] }),
+    managePeople: can(role, { people: ['manage'] }),
+    comment: can(role, { note: ['create'] }),
+  };
+}
+
+type RigRowWithRole = Awaited<ReturnType<typeof listRigsForUser>>[number];
+
+export function rigDto(row: RigRowWithRole, loads: SavedLoad[]) {
+  const power = rigPowerSchema.parse(row.power);
+  return {
+    id: row.id,
+    name: row.name,
+    vehicle: row.vehicle,
+    householdId: row.household_id,
+    householdName: row.household_name,
+    role: row.role as HouseholdRole,
+    permissions: permissionsOf(row.role),
+    version: row.version,
+    updatedAt: new Date(row.updated_at as unknown as Date).toISOString(),
+    power,
+    loads,
+  };
+}
+export type RigDto = ReturnType<typeof rigDto>;
+
+export function modelInput(power: RigPower, loads: Load[]) {
+  return projectionInputSchema.parse({ ...power, loads: loads.map(({ ...l }) => l) });
+}
+
+export async function listRigs(db: Db, userId: string) {
+  const rows = await listRigsForUser(db, userId);
+  const loads = await loadsOfRigs(
+    db,
+    rows.map((r) => r.id),
+  );
+  return rows.map((row) => {
+    const dto = rigDto(row, loads.filter((l) => l.rig_id === row.id).map(loadFromRow));
+    const p = project(modelInput(dto.power, dto.loads), { fixes: false });
+    const { loads: rigLoads, power: _power, ...summary } = dto;
+    return {
+      ...summary,
+      loadCount: rigLoads.length,
+      daysParked: p.parked.daysToCutoff,
+      daysOnRoutine: p.routine.daysToCutoff,
+      holds: p.routine.holds,
+      marginState: p.margin.state,
+      horizonDays: p.horizonDays,
+    };
+  });
+}
+
+export async function createRig(db: Db, auth: Auth, userId: string, input: RigCreateInput) {
+  let householdId = input.householdId;
+  if (householdId) {
+    const role = await householdRole(db, householdId, userId);
+    if (!role) throw new HttpError(404, 'not_found', 'No such household.', [{ path: 'householdId', message: 'No such household.' }]);
+    if (!can(role, { rig: ['update'] })) throw new HttpError(403, 'forbidden', 'Only an owner can add a rig to this household.');
+  } else {
+    const slug = `${input.name.toLowerCase().replace(/[^a-z0-9]+/g, '-').slice(0, 30)}-${crypto.randomUUID().slice(0, 8)}`;
+    const household = await viaAuth(() => auth.api.createOrganization({ body: { name: `${input.name} household`, slug, userId } }));
+    householdId = household!.id;
+  }
+  // Checks the whole input the model will see (an AC load without an inverter, say) before saving.
+  const parsed = projectionInputSchema.safeParse({ ...input.power, loads: input.loads });
+  if (!parsed.success) {
+    throw new HttpError(400, 'validation_failed', 'Some fields are not valid.', parsed.error.issues.map((i) => ({ path: i.path.join('.'), message: i.message })));
+  }
+  const row = await insertRig(
+    db,
+    { householdId, createdBy: userId, name: input.name, vehicle: input.vehicle, power: input.power },
+    input.loads.map((l, i) => loadToRow(l, i, userId)),
+  );
+  return row.id;
+}

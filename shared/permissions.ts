@@ -1,0 +1,64 @@
+import { createAccessControl } from 'better-auth/plugins/access';
+import { defaultStatements as accountStatements, adminAc, userAc } from 'better-auth/plugins/admin/access';
+import { defaultStatements as householdBaseStatements, memberAc, ownerAc } from 'better-auth/plugins/organization/access';
+
+/**
+ * Who may do what on a rig: the one permissions table, used by the server's middleware on every route and
+ * by the client to hide what a role cannot do. Household roles: owner, member, advisor.
+ * Anyone who is not in a rig's household gets nothing (the API answers 404 so rigs cannot be discovered).
+ */
+export const householdStatements = {
+  ...householdBaseStatements,
+  rig: ['read', 'update', 'delete'],
+  load: ['create', 'update', 'delete'],
+  reading: ['create', 'update', 'delete'],
+  cableRun: ['create', 'update', 'delete'],
+  note: ['create'],
+  people: ['read', 'manage'],
+} as const;
+
+export const householdAc = createAccessControl(householdStatements);
+
+export const householdRoles = {
+  owner: householdAc.newRole({
+    ...ownerAc.statements,
+    rig: ['read', 'update', 'delete'],
+    load: ['create', 'update', 'delete'],
+    reading: ['create', 'update', 'delete'],
+    cableRun: ['create', 'update', 'delete'],
+    note: ['create'],
+    people: ['read', 'manage'],
+  }),
+  member: householdAc.newRole({
+    ...memberAc.statements,
+    rig: ['read'],
+    load: ['create', 'update', 'delete'],
+    reading: ['create', 'update', 'delete'],
+    cableRun: ['create', 'update', 'delete'],
+    note: ['create'],
+    people: ['read'],
+  }),
+  // An installer or auto electrician: reads everything and comments; changes nothing.
+  advisor: householdAc.newRole({ rig: ['read'], note: ['create'], people: ['read'] }),
+};
+
+export type HouseholdRole = keyof typeof householdRoles;
+export const HOUSEHOLD_ROLES = Object.keys(householdRoles) as HouseholdRole[];
+export type Resource = keyof typeof householdStatements;
+export type Permission = { [R in Resource]?: (typeof householdStatements)[R][number][] };
+
+/** Whether a household role may do something; a missing or unknown role may do nothing. */
+export function can(role: string | null | undefined, permission: Permission): boolean {
+  if (!role || !(role in householdRoles)) return false;
+  return householdRoles[role as HouseholdRole].authorize(permission as never).success;
+}
+
+// Account roles (better-auth's admin plugin): traveller by default, advisor, admin.
+export const accountAc = createAccessControl(accountStatements);
+export const accountRoles = {
+  traveller: accountAc.newRole({ ...userAc.statements }),
+  advisor: accountAc.newRole({ ...userAc.statements }),
+  admin: accountAc.newRole({ ...adminAc.statements }),
+};
+export type AccountRole = keyof typeof accountRoles;
+export const ACCOUNT_ROLES = Object.keys(accountRoles) as AccountRole[];
