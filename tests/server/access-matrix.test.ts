@@ -1,0 +1,149 @@
+import type { Express } from 'express';
+import type { Test } from 'supertest';
+import request from 'supertest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+
+import { householdFixture, uniqueEmail, WREN_POWER } from './helpers';
+import { makeTestApp, TEST_ORIGIN } from './test-app';
+
+type Role = 'anonymous' | 'outsider' | 'advisor' | 'member' | 'owner' | 'admin';
+const ROLES: Role[] = ['anonymous', 'outsider', 'advisor', 'member', 'owner', 'admin'];
+
+let ctx: Awaited<ReturnType<typeof makeTestApp>>;
+let fx: Awaited<ReturnType<typeof householdFixture>>;
+
+beforeAll(async () => {
+  ctx = await makeTestApp();
+  fx = await householdFixture(ctx);
+});
+afterAll(async () => {
+  await ctx.db.destroy();
+});
+
+/** Every route the API has, as Express holds them: method and full path. */
+function listRoutes(app: Express): string[] {
+  const out: string[] = [];
+  const walk = (stack: any[], prefix: string) => {
+    for (const layer of stack) {
+      if (layer.route) {
+        for (const method of Object.keys(layer.route.methods)) out.push(`${method.toUpperCase()} ${prefix}${layer.route.path}`);
+      } else if (layer.handle?.stack) {
+        walk(layer.handle.stack, prefix + (layer.rawPath ?? ''));
+      }
+    }
+  };
+  walk((app as any).router.stack, '');
+  return out.filter((r) => r.includes(' /api/') && !r.includes('/api/auth/'));
+}
+
+type Ctx = { rigId: string };
+type Entry = {
+  send: (agent: ReturnType<typeof request.agent> | ReturnType<typeof request>, c: Ctx) => Test | Promise<Test>;
+  expect: Record<Role, number>;
+  /** Runs after a request that changed the fixture, to put it back. */
+  restore?: (role: Role, status: number) => Promise<void>;
+};
+
+const all = (status: number): Record<Role, number> => ({ anonymous: status, outsider: status, advisor: status, member: status, owner: status, admin: status });
+// Reading a rig: household roles only; outsiders and even admins get 404 (no discovering rigs).
+const readRig = { anonymous: 401, outsider: 404, advisor: 200, member: 200, owner: 200, admin: 404 };
+const ownerOnly = (ok: number) => ({ anonymous: 401, outsider: 404, advisor: 403, member: 403, owner: ok, admin: 404 });
+
+async function pendingInvitation() {
+  const res = await fx.agents.owner.post(`/api/rigs/${fx.rigId}/invitations`).set('Origin', TEST_ORIGIN).send({ email: uniqueEmail('invitee'), role: 'member' });
+  return res.body.id as string;
+}
+async function throwawayMember() {
+  const { user } = await ctx.auth.api.signUpEmail({ body: { name: 'Throwaway', email: uniqueEmail('throwaway'), password: 'a-long-test-password' } });
+  const m = await ctx.auth.api.addMember({ body: { userId: user.id, role: 'member', organizationId: fx.householdId } });
+  return m!.id;
+}
+const memberIdOf = async (userId: string) =>
+  (await ctx.db.selectFrom('member').select('id').where('organizationId', '=', fx.householdId).where('userId', '=', userId).executeTakeFirstOrThrow()).id;
+
+const MATRIX: Record<string, Entry> = {
+  'GET /api/health/': { send: (a) => a.get('/api/health'), expect: all(200) },
+  'POST /api/projections/': { send: (a) => a.post('/api/projections').send({ battery: { chemistry: 'agm', capacityAh: 100 } }), expect: all(200) },
+  'POST /api/projections/compare': {
+    send: (a) => a.post('/api/projections/compare').send({ rig: { battery: { chemistry: 'agm', capacityAh: 100 } }, candidates: [{ name: 'Fan', supply: 'dc', watts: 20, hoursPerDay: 4 }] }),
+    expect: all(200),
+  },
+  'POST /api/cable-runs/size': { send: (a) => a.post('/api/cable-runs/size').send({ currentA: 10, lengthM: 2 }), expect: all(200) },
+  'GET /api/me/': { send: (a) => a.get('/api/me'), expect: { ...all(200), anonymous: 401 } },
+  'GET /api/rigs/': { send: (a) => a.get('/api/rigs'), expect: { ...all(200), anonymous: 401 } },
+  'POST /api/rigs/': {
+    send: (a) => a.post('/api/rigs').set('Origin', TEST_ORIGIN).send({ name: 'Another van', power: WREN_POWER }),
+    expect: { ...all(201), anonymous: 401 },
+  },
+  'GET /api/rigs/:rigId': { send: (a, c) => a.get(`/api/rigs/${c.rigId}`), expect: readRig },
+  'GET /api/rigs/:rigId/people': { send: (a, c) => a.get(`/api/rigs/${c.rigId}/people`), expect: readRig },
+  'POST /api/rigs/:rigId/invitations': {
+    send: (a, c) => a.post(`/api/rigs/${c.rigId}/invitations`).set('Origin', TEST_ORIGIN).send({ email: uniqueEmail('matrix'), role: 'member' }),
+    expect: ownerOnly(201),
+  },
+  'POST /api/rigs/:rigId/invitations/:invitationId/resend': {
+    send: async (a, c) => a.post(`/api/rigs/${c.rigId}/invitations/${await pendingInvitation()}/resend`).set('Origin', TEST_ORIGIN),
+    expect: ownerOnly(200),
+  },
+  'DELETE /api/rigs/:rigId/invitations/:invitationId': {
+    send: async (a, c) => a.delete(`/api/rigs/${c.rigId}/invitations/${await pendingInvitation()}`).set('Origin', TEST_ORIGIN),
+    expect: ownerOnly(204),
+  },
+  'PATCH /api/rigs/:rigId/members/:memberId': {
+    send: async (a, c) => a.patch(`/api/rigs/${c.rigId}/members/${await memberIdOf(fx.users.member.id)}`).set('Origin', TEST_ORIGIN).send({ role: 'member' }),
+    expect: ownerOnly(204),
+  },
+  'DELETE /api/rigs/:rigId/members/:memberId': {
+    send: async (a, c) => a.delete(`/api/rigs/${c.rigId}/members/${await throwawayMember()}`).set('Origin', TEST_ORIGIN),
+    expect: ownerOnly(204),
+  },
+  'POST /api/rigs/:rigId/leave': {
+    send: (a, c) => a.post(`/api/rigs/${c.rigId}/leave`).set('Origin', TEST_ORIGIN),
+    // The last owner cannot leave (409); a member or an advisor can, and is put back afterwards.
+    expect: { anonymous: 401, outsider: 404, advisor: 204, member: 204, owner: 409, admin: 404 },
+    restore: async (role, status) => {
+      if (status !== 204) return;
+      const user = role === 'advisor' ? fx.users.advisor : fx.users.member;
+      await ctx.auth.api.addMember({ body: { userId: user.id, role: role as 'member', organizationId: fx.householdId } });
+    },
+  },
+  'GET /api/invitations/:invitationId': {
+    // Sent to somebody else: every signed-in account is refused.
+    send: async (a) => a.get(`/api/invitations/${await pendingInvitation()}`),
+    expect: { ...all(403), anonymous: 401 },
+  },
+  'POST /api/invitations/:invitationId/accept': {
+    send: async (a) => a.post(`/api/invitations/${await pendingInvitation()}/accept`).set('Origin', TEST_ORIGIN),
+    expect: { ...all(403), anonymous: 401 },
+  },
+  'GET /api/admin/users': { send: (a) => a.get('/api/admin/users'), expect: { ...all(403), anonymous: 401, admin: 200 } },
+  'PUT /api/admin/users/:userId/role': {
+    send: (a) => a.put(`/api/admin/users/${fx.users.outsider.id}/role`).set('Origin', TEST_ORIGIN).send({ role: 'traveller' }),
+    expect: { ...all(403), anonymous: 401, admin: 204 },
+  },
+};
+
+describe('the access matrix', () => {
+  it('has an entry for every API route there is', () => {
+    const routes = listRoutes(ctx.app).sort();
+    expect(routes).toEqual(Object.keys(MATRIX).sort());
+  });
+
+  for (const [route, entry] of Object.entries(MATRIX)) {
+    it(`${route}: ${ROLES.map((r) => `${r} ${entry.expect[r]}`).join(', ')}`, async () => {
+      const got: Partial<Record<Role, number>> = {};
+      for (const role of ROLES) {
+        const agent = role === 'anonymous' ? request(ctx.app) : fx.agents[role];
+        const res = await entry.send(agent, { rigId: fx.rigId });
+        got[role] = res.status;
+        await entry.restore?.(role, res.status);
+      }
+      expect(got).toEqual(entry.expect);
+    });
+  }
+
+  it('answers 404 for a rig id that does not exist or is not an id, for everyone', async () => {
+    await fx.agents.owner.get('/api/rigs/00000000-0000-4000-8000-000000000000').expect(404);
+    await fx.agents.owner.get('/api/rigs/not-an-id').expect(404);
+  });
+});
