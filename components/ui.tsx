@@ -4,8 +4,12 @@ import { Pressable, StyleSheet, Text, type TextStyle, View, type ViewStyle } fro
 
 import { colors, radius, space, type } from '@/shared/theme';
 
-export function Card({ children, style }: { children: ReactNode; style?: ViewStyle }) {
-  return <View style={[styles.card, style]}>{children}</View>;
+export function Card({ children, style, testID }: { children: ReactNode; style?: ViewStyle; testID?: string }) {
+  return (
+    <View testID={testID} style={[styles.card, style]}>
+      {children}
+    </View>
+  );
 }
 
 export function Title({ children }: { children: ReactNode }) {

@@ -1,11 +1,17 @@
 import { Slot } from 'expo-router';
 
+import { AccountMenu } from '@/features/auth/components/account-menu';
+import { SessionGate } from '@/features/auth/components/session-gate';
 import { AppShell } from '@/features/shell/components/app-shell';
 
 export default function AppLayout() {
   return (
-    <AppShell>
-      <Slot />
-    </AppShell>
+    <SessionGate>
+      {(me) => (
+        <AppShell account={<AccountMenu me={me} />} accountCompact={<AccountMenu me={me} compact />}>
+          <Slot />
+        </AppShell>
+      )}
+    </SessionGate>
   );
 }

@@ -1,5 +1,8 @@
-import { HomeScreen } from '@/features/home/components/home-screen';
+import { useRouter } from 'expo-router';
+
+import { RigsScreen } from '@/features/rigs/components/rigs-screen';
 
 export default function Home() {
-  return <HomeScreen />;
+  const router = useRouter();
+  return <RigsScreen onNewRig={() => router.push('/rigs/new')} />;
 }

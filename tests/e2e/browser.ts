@@ -23,3 +23,13 @@ export function launchChromium(): Promise<Browser> {
 
 export const PHONE = { width: 390, height: 844 };
 export const WIDE = { width: 1280, height: 800 };
+
+/** Signs in through the sign-in screen and waits for the rigs (home) screen. */
+export async function signInAs(page: import('playwright-core').Page, email: string, password = 'keyoff-demo-2026') {
+  await page.goto(BASE + '/sign-in');
+  await page.getByTestId('sign-in-screen').waitFor();
+  await page.getByTestId('field-email').fill(email);
+  await page.getByTestId('field-password').fill(password);
+  await page.getByTestId('sign-in-submit').click();
+  await page.getByTestId('home-screen').waitFor();
+}

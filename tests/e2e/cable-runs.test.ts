@@ -2,7 +2,7 @@ import path from 'node:path';
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 
-import { BASE, launchChromium, PHONE, SHOTS, WIDE } from './browser';
+import { BASE, launchChromium, PHONE, SHOTS, signInAs, WIDE } from './browser';
 
 let browser: Browser;
 beforeAll(async () => {
@@ -21,6 +21,7 @@ async function fill(page: Page, testId: string, value: string) {
 describe('the cable-run calculator', () => {
   it('sizes 20 A over 7.62 m at 3 % as 4 AWG with the cautions beside it (wide)', async () => {
     const page = await browser.newPage({ viewport: WIDE });
+    await signInAs(page, 'tobi@example.org');
     await page.goto(BASE + '/cable-runs');
     await page.getByTestId('cable-run-calculator').waitFor();
     await fill(page, 'field-currentA', '20');
@@ -39,6 +40,7 @@ describe('the cable-run calculator', () => {
     page.on('request', (r) => {
       if (r.url().includes('/api/cable-runs/size')) posted++;
     });
+    await signInAs(page, 'tobi@example.org');
     await page.goto(BASE + '/cable-runs');
     await page.getByTestId('cable-run-calculator').waitFor();
     await fill(page, 'field-lengthM', '0');

@@ -3,7 +3,7 @@ import path from 'node:path';
 import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 
-import { BASE, launchChromium, PHONE, SHOTS, WIDE } from './browser';
+import { BASE, launchChromium, PHONE, SHOTS, signInAs, WIDE } from './browser';
 
 let browser: Browser;
 beforeAll(async () => {
@@ -14,32 +14,52 @@ afterAll(async () => {
   await browser?.close();
 });
 
-describe('the home screen', () => {
+describe('the home screen (Rigs)', () => {
   for (const [label, viewport] of [
     ['phone', PHONE],
     ['wide', WIDE],
   ] as const) {
-    it(`renders in Nunito with the service state at ${label} size`, async () => {
+    it(`renders the demo rigs in Nunito at ${label} size for a signed-in member`, async () => {
       const page = await browser.newPage({ viewport });
       const errors: string[] = [];
       page.on('pageerror', (e) => errors.push(e.message));
-      await page.goto(BASE + '/');
-      await page.getByTestId('home-screen').waitFor();
-      await expect.poll(() => page.getByTestId('health-status').textContent()).toContain('database connected');
+      await signInAs(page, 'ines@example.org');
+      await page.getByTestId('days-parked-Wren').waitFor();
+      expect(await page.getByTestId('signed-in-as').textContent()).toContain('Ines');
       await page.evaluate(() => document.fonts.ready);
       const title = page.getByRole('heading', { level: 1 }).first();
-      const family = await title.evaluate((el) => getComputedStyle(el).fontFamily);
-      expect(family).toContain('Nunito');
+      expect(await title.evaluate((el) => getComputedStyle(el).fontFamily)).toContain('Nunito');
       // The font file itself loaded, not a fallback under Nunito's name.
       expect(await page.evaluate(() => document.fonts.check('16px Nunito_700Bold'))).toBe(true);
-      const shell = label === 'wide' ? 'shell-wide' : 'shell-phone';
-      await expect(page.getByTestId(shell)).toBeDefined();
-      expect(await page.getByTestId(shell).count()).toBe(1);
+      expect(await page.getByTestId(label === 'wide' ? 'shell-wide' : 'shell-phone').count()).toBe(1);
       await page.screenshot({ path: path.join(SHOTS, `home-${label}.png`), fullPage: true });
       expect(errors).toEqual([]);
       await page.close();
     });
   }
+
+  it('sends a signed-out visitor to sign in, and back to where they were going after', async () => {
+    const page = await browser.newPage({ viewport: PHONE });
+    await page.goto(BASE + '/cable-runs');
+    await page.getByTestId('sign-in-screen').waitFor();
+    expect(new URL(page.url()).searchParams.get('next')).toBe('/cable-runs');
+    await page.getByTestId('field-email').fill('tobi@example.org');
+    await page.getByTestId('field-password').fill('keyoff-demo-2026');
+    await page.getByTestId('sign-in-submit').click();
+    await page.getByTestId('cable-run-calculator').waitFor();
+    await page.close();
+  });
+
+  it('says a sign-in failed without telling whether the address exists', async () => {
+    const page = await browser.newPage({ viewport: PHONE });
+    await page.goto(BASE + '/sign-in');
+    await page.getByTestId('field-email').fill('nobody-here@example.org');
+    await page.getByTestId('field-password').fill('wrong-password');
+    await page.getByTestId('sign-in-submit').click();
+    expect(await page.getByTestId('sign-in-error').textContent()).toBe('That e-mail and password do not match an account.');
+    await page.screenshot({ path: path.join(SHOTS, 'sign-in-failed-phone.png') });
+    await page.close();
+  });
 
   it('shows the not-found page for an unknown path', async () => {
     const page = await browser.newPage({ viewport: PHONE });

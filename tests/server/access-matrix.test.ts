@@ -38,7 +38,7 @@ function listRoutes(app: Express): string[] {
 
 type Ctx = { rigId: string };
 type Entry = {
-  send: (agent: ReturnType<typeof request.agent> | ReturnType<typeof request>, c: Ctx) => Test | Promise<Test>;
+  send: (agent: ReturnType<typeof request.agent> | ReturnType<typeof request>, c: Ctx) => Test | Promise<request.Response>;
   expect: Record<Role, number>;
   /** Runs after a request that changed the fixture, to put it back. */
   restore?: (role: Role, status: number) => Promise<void>;

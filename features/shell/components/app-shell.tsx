@@ -9,12 +9,12 @@ import { colors, space, type } from '@/shared/theme';
 const mark = require('@/assets/images/mark.png');
 
 const destinations: { href: Href; label: string }[] = [
-  { href: '/', label: 'Home' },
+  { href: '/', label: 'Rigs' },
   { href: '/cable-runs', label: 'Cable runs' },
 ];
 
 /** Phone first: a top bar and a bottom bar; from WIDE_BREAKPOINT a side rail beside the content. */
-export function AppShell({ children }: { children: ReactNode }) {
+export function AppShell({ children, account, accountCompact }: { children: ReactNode; account?: ReactNode; accountCompact?: ReactNode }) {
   const wide = useIsWide();
   const pathname = usePathname();
 
@@ -42,6 +42,8 @@ export function AppShell({ children }: { children: ReactNode }) {
             <Text style={styles.brandName}>Keyoff</Text>
           </View>
           {nav}
+          <View style={{ flex: 1 }} />
+          {account}
         </View>
         <ScrollView style={styles.content} contentContainerStyle={styles.contentInnerWide}>
           {children}
@@ -55,6 +57,8 @@ export function AppShell({ children }: { children: ReactNode }) {
       <View style={styles.topBar}>
         <Image source={mark} style={styles.markSmall} accessibilityLabel="Keyoff" />
         <Text style={styles.brandName}>Keyoff</Text>
+        <View style={{ flex: 1 }} />
+        {accountCompact}
       </View>
       <ScrollView style={styles.content} contentContainerStyle={styles.contentInner}>
         {children}

@@ -1,0 +1,5 @@
+import { ForgotPasswordScreen } from '@/features/auth/components/forgot-password-screen';
+
+export default function Route() {
+  return <ForgotPasswordScreen />;
+}

@@ -1,0 +1,5 @@
+import { SignUpScreen } from '@/features/auth/components/sign-up-screen';
+
+export default function Route() {
+  return <SignUpScreen />;
+}

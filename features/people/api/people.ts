@@ -1,0 +1,51 @@
+import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+
+import { apiFetch } from '@/lib/api-client';
+import type { InvitationCreateForm } from '@/shared/schemas/people';
+
+export type Person = { id: string; userId: string; role: string; joinedAt: string; name: string; email: string };
+export type PendingInvitation = { id: string; email: string; role: string | null; status: string; expiresAt: string; expired: boolean };
+export type People = { members: Person[]; invitations: PendingInvitation[] };
+export type RigHeader = { id: string; name: string; role: string; householdName: string; permissions: { managePeople: boolean } };
+
+export const peopleKeys = {
+  all: ['people'] as const,
+  rig: (rigId: string) => [...peopleKeys.all, rigId] as const,
+  rigHeader: (rigId: string) => [...peopleKeys.all, rigId, 'rig'] as const,
+  invitation: (invitationId: string) => [...peopleKeys.all, 'invitation', invitationId] as const,
+};
+
+export const peopleQueryOptions = (rigId: string) =>
+  queryOptions({ queryKey: peopleKeys.rig(rigId), queryFn: () => apiFetch<People>(`/api/rigs/${rigId}/people`) });
+export const usePeopleQuery = (rigId: string) => useQuery(peopleQueryOptions(rigId));
+
+export const useRigHeaderQuery = (rigId: string) =>
+  useQuery({ queryKey: peopleKeys.rigHeader(rigId), queryFn: () => apiFetch<RigHeader>(`/api/rigs/${rigId}`) });
+
+function usePeopleMutation<V>(rigId: string, fn: (v: V) => Promise<unknown>) {
+  const client = useQueryClient();
+  return useMutation({ mutationFn: fn, onSuccess: () => client.invalidateQueries({ queryKey: peopleKeys.rig(rigId) }) });
+}
+
+export const useInvitationCreateMutation = (rigId: string) =>
+  usePeopleMutation(rigId, (form: InvitationCreateForm) => apiFetch(`/api/rigs/${rigId}/invitations`, { method: 'POST', json: form }));
+export const useInvitationResendMutation = (rigId: string) =>
+  usePeopleMutation(rigId, (id: string) => apiFetch(`/api/rigs/${rigId}/invitations/${id}/resend`, { method: 'POST', json: {} }));
+export const useInvitationRevokeMutation = (rigId: string) =>
+  usePeopleMutation(rigId, (id: string) => apiFetch(`/api/rigs/${rigId}/invitations/${id}`, { method: 'DELETE' }));
+export const useMemberRoleMutation = (rigId: string) =>
+  usePeopleMutation(rigId, ({ memberId, role }: { memberId: string; role: string }) => apiFetch(`/api/rigs/${rigId}/members/${memberId}`, { method: 'PATCH', json: { role } }));
+export const useMemberRemoveMutation = (rigId: string) =>
+  usePeopleMutation(rigId, (memberId: string) => apiFetch(`/api/rigs/${rigId}/members/${memberId}`, { method: 'DELETE' }));
+export const useLeaveMutation = (rigId: string) => useMutation({ mutationFn: () => apiFetch(`/api/rigs/${rigId}/leave`, { method: 'POST', json: {} }) });
+
+export type InvitationView = { id: string; householdName: string; inviterName: string | null; role: string | null; expiresAt: string };
+export const useInvitationQuery = (invitationId: string) =>
+  useQuery({ queryKey: peopleKeys.invitation(invitationId), queryFn: () => apiFetch<InvitationView>(`/api/invitations/${invitationId}`), retry: false });
+export function useInvitationAcceptMutation(invitationId: string) {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: () => apiFetch(`/api/invitations/${invitationId}/accept`, { method: 'POST', json: {} }),
+    onSuccess: () => client.invalidateQueries(),
+  });
+}

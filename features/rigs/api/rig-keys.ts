@@ -1,0 +1,6 @@
+/** Every query key of the rigs feature; invalidation goes through these. */
+export const rigKeys = {
+  all: ['rigs'] as const,
+  list: () => [...rigKeys.all, 'list'] as const,
+  detail: (rigId: string) => [...rigKeys.all, 'detail', rigId] as const,
+};

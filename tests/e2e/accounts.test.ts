@@ -1,0 +1,69 @@
+import path from 'node:path';
+import type { Browser } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+
+import { BASE, launchChromium, PHONE, SHOTS, signInAs, WIDE } from './browser';
+
+const MAILDEV = 'http://127.0.0.1:1080';
+
+let browser: Browser;
+beforeAll(async () => {
+  browser = await launchChromium();
+});
+afterAll(async () => {
+  await browser?.close();
+});
+
+async function linkFor(address: string, subject: RegExp): Promise<string> {
+  for (let i = 0; i < 50; i++) {
+    const all = (await (await fetch(`${MAILDEV}/api/email`)).json()) as { subject: string; text: string; to: { address: string }[] }[];
+    const mail = all.reverse().find((m) => m.to.some((t) => t.address === address) && subject.test(m.subject));
+    if (mail) return mail.text.match(/https?:\/\/\S+/g)!.pop()!;
+    await new Promise((r) => setTimeout(r, 100));
+  }
+  throw new Error(`no mail for ${address}`);
+}
+
+describe('accounts in the browser', () => {
+  it('signs up, confirms the address through the link caught by maildev, and lands on the home screen', async () => {
+    const page = await browser.newPage({ viewport: PHONE });
+    const email = `traveller-${Date.now()}@example.org`;
+    await page.goto(BASE + '/sign-up');
+    await page.getByTestId('field-name').fill('Juno Traveller');
+    await page.getByTestId('field-email').fill(email);
+    await page.getByTestId('field-password').fill('short');
+    await page.getByTestId('sign-up-submit').click();
+    await page.getByText('Use at least 10 characters.').waitFor();
+    await page.getByTestId('field-password').fill('a-long-enough-password');
+    await page.getByTestId('sign-up-submit').click();
+    await page.getByTestId('check-inbox-screen').waitFor();
+    await page.screenshot({ path: path.join(SHOTS, 'check-inbox-phone.png') });
+
+    const link = await linkFor(email, /Confirm your e-mail/);
+    // The link points at the app's configured address; the browser tests serve it on their own port.
+    await page.goto(BASE + new URL(link).pathname + new URL(link).search);
+    await page.getByTestId('home-screen').waitFor();
+    await page.getByTestId('rigs-empty').waitFor();
+    expect(await page.getByTestId('signed-in-as').textContent()).toContain('Juno');
+    await page.close();
+  });
+
+  it('shows the owner the People of Wren with invite controls, and the advisor without them', async () => {
+    const owner = await browser.newPage({ viewport: WIDE });
+    await signInAs(owner, 'ines@example.org');
+    await owner.getByTestId('people-Wren').click();
+    await owner.getByTestId('people-screen').waitFor();
+    await owner.getByTestId('member-marguerite@example.org').waitFor();
+    expect(await owner.getByTestId('invite-form').count()).toBe(1);
+    await owner.screenshot({ path: path.join(SHOTS, 'people-wide.png'), fullPage: true });
+    await owner.close();
+
+    const advisor = await browser.newPage({ viewport: PHONE });
+    await signInAs(advisor, 'marguerite@example.org');
+    await advisor.getByTestId('people-Wren').click();
+    await advisor.getByTestId('people-screen').waitFor();
+    expect(await advisor.getByTestId('invite-form').count()).toBe(0);
+    await advisor.screenshot({ path: path.join(SHOTS, 'people-advisor-phone.png'), fullPage: true });
+    await advisor.close();
+  });
+});
