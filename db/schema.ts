@@ -51,8 +51,8 @@ export interface RigTable {
   power: ColumnType<unknown, string, string>;
   version: Generated<number>;
   seed_key: string | null;
-  created_at: Generated<Timestamp>;
-  updated_at: Generated<Timestamp>;
+  created_at: Timestamp;
+  updated_at: Timestamp;
 }
 
 export interface LoadTable {
@@ -65,13 +65,14 @@ export interface LoadTable {
   amps: number | null;
   duty_percent: number;
   hours_per_day: number;
-  start_hour: number;
+  start_hour: number | null;
+  weekdays: number[] | null;
   when: 'always' | 'parked' | 'driving';
   status: 'installed' | 'candidate';
   quantity: number;
   position: number;
-  created_at: Generated<Timestamp>;
-  updated_at: Generated<Timestamp>;
+  created_at: Timestamp;
+  updated_at: Timestamp;
 }
 
 export interface Database {

@@ -29,7 +29,8 @@ export async function up(db: Kysely<any>): Promise<void> {
     .addColumn('amps', 'double precision')
     .addColumn('duty_percent', 'double precision', (c) => c.notNull().defaultTo(100))
     .addColumn('hours_per_day', 'double precision', (c) => c.notNull())
-    .addColumn('start_hour', 'integer', (c) => c.notNull().defaultTo(0))
+    .addColumn('start_hour', 'integer') // null: the hours are spread over the day
+    .addColumn('weekdays', sql`integer[]`) // null: every day
     .addColumn('when', 'text', (c) => c.notNull().defaultTo('always').check(sql`"when" in ('always', 'parked', 'driving')`))
     .addColumn('status', 'text', (c) => c.notNull().defaultTo('installed').check(sql`status in ('installed', 'candidate')`))
     .addColumn('quantity', 'integer', (c) => c.notNull().defaultTo(1))

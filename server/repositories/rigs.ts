@@ -120,3 +120,64 @@ export async function findInvitation(db: Exec, invitationId: string) {
       .executeTakeFirst()) ?? null
   );
 }
+
+/** Applies a change only if the rig is still at the version the editor saw; returns null when it is not. */
+export async function updateRigIfVersion(db: Exec, rigId: string, version: number, patch: { name?: string; vehicle?: string; power?: unknown }) {
+  return (
+    (await db
+      .updateTable('rigs')
+      .set({
+        ...(patch.name !== undefined ? { name: patch.name } : {}),
+        ...(patch.vehicle !== undefined ? { vehicle: patch.vehicle } : {}),
+        ...(patch.power !== undefined ? { power: JSON.stringify(patch.power) } : {}),
+        version: version + 1,
+        updated_at: new Date(),
+      })
+      .where('id', '=', rigId)
+      .where('version', '=', version)
+      .returning(['id', 'version'])
+      .executeTakeFirst()) ?? null
+  );
+}
+
+/** Every load change moves the rig on a version, so the Rigs screen shows the last change. */
+export async function touchRig(db: Exec, rigId: string) {
+  await db
+    .updateTable('rigs')
+    .set((eb) => ({ version: eb('version', '+', 1), updated_at: new Date() }))
+    .where('id', '=', rigId)
+    .execute();
+}
+
+export async function deleteRig(db: Exec, rigId: string) {
+  await db.deleteFrom('rigs').where('id', '=', rigId).execute();
+}
+
+export async function insertLoad(db: Db, rigId: string, load: Omit<NewLoad, 'rig_id' | 'position'>) {
+  return db.transaction().execute(async (trx) => {
+    const max = await trx.selectFrom('loads').select((eb) => eb.fn.max('position').as('p')).where('rig_id', '=', rigId).executeTakeFirst();
+    const row = await trx
+      .insertInto('loads')
+      .values({ ...load, rig_id: rigId, position: (Number(max?.p ?? -1) || 0) + 1 })
+      .returningAll()
+      .executeTakeFirstOrThrow();
+    await touchRig(trx, rigId);
+    return row;
+  });
+}
+
+export async function updateLoad(db: Db, rigId: string, loadId: string, load: Omit<NewLoad, 'rig_id' | 'position' | 'added_by'>) {
+  return db.transaction().execute(async (trx) => {
+    const row = await trx.updateTable('loads').set({ ...load, updated_at: new Date() }).where('id', '=', loadId).where('rig_id', '=', rigId).returningAll().executeTakeFirst();
+    if (row) await touchRig(trx, rigId);
+    return row ?? null;
+  });
+}
+
+export async function deleteLoad(db: Db, rigId: string, loadId: string) {
+  return db.transaction().execute(async (trx) => {
+    const row = await trx.deleteFrom('loads').where('id', '=', loadId).where('rig_id', '=', rigId).returning('id').executeTakeFirst();
+    if (row) await touchRig(trx, rigId);
+    return !!row;
+  });
+}

@@ -2,14 +2,14 @@ import { Router } from 'express';
 import { fromNodeHeaders } from 'better-auth/node';
 
 import { invitationCreateSchema, invitationParamsSchema, memberParamsSchema, memberRoleSchema } from '@/shared/schemas/people';
-import { rigCreateSchema } from '@/shared/schemas/rig';
+import { loadSchema } from '@/shared/schemas/projection';
+import { loadParamsSchema, rigCreateSchema, rigUpdateSchema, tryLoadsSchema } from '@/shared/schemas/rig';
 import type { AppContext } from '../context';
 import { rigAccess, rigOf } from '../middleware/rig-access';
 import { session } from '../middleware/session';
 import { parsed, validate } from '../middleware/validate';
-import { loadsOfRigs } from '../repositories/rigs';
 import * as people from '../services/people';
-import { createRig, listRigs, loadFromRow, rigDto } from '../services/rigs';
+import * as rigs from '../services/rigs';
 
 /** /api/rigs: every route below runs after requireSession (app.ts) and one rigAccess check. */
 export function rigsRouter({ db, auth }: AppContext) {
@@ -17,18 +17,46 @@ export function rigsRouter({ db, auth }: AppContext) {
   const headers = (req: { headers: Record<string, string | string[] | undefined> }) => fromNodeHeaders(req.headers);
 
   router.get('/', async (_req, res) => {
-    res.json({ rigs: await listRigs(db, session(res).user.id) });
+    res.json({ rigs: await rigs.listRigs(db, session(res).user.id) });
   });
 
   router.post('/', validate(rigCreateSchema), async (_req, res) => {
-    const id = await createRig(db, auth, session(res).user.id, parsed(res, rigCreateSchema));
+    const id = await rigs.createRig(db, auth, session(res).user.id, parsed(res, rigCreateSchema));
     res.status(201).location(`/api/rigs/${id}`).json({ id });
   });
 
   router.get('/:rigId', rigAccess(db, { rig: ['read'] }), async (_req, res) => {
-    const rig = rigOf(res);
-    const loads = (await loadsOfRigs(db, [rig.id])).map(loadFromRow);
-    res.json(rigDto(rig, loads));
+    res.json(await rigs.readRig(db, rigOf(res)));
+  });
+
+  router.patch('/:rigId', rigAccess(db, { rig: ['update'] }), validate(rigUpdateSchema), async (_req, res) => {
+    res.json(await rigs.changeRig(db, rigOf(res), parsed(res, rigUpdateSchema)));
+  });
+
+  router.delete('/:rigId', rigAccess(db, { rig: ['delete'] }), async (_req, res) => {
+    await rigs.removeRig(db, rigOf(res).id);
+    res.status(204).end();
+  });
+
+  router.get('/:rigId/outlook', rigAccess(db, { rig: ['read'] }), async (_req, res) => {
+    res.json(await rigs.rigOutlook(db, rigOf(res)));
+  });
+
+  router.post('/:rigId/try', rigAccess(db, { rig: ['read'] }), validate(tryLoadsSchema), async (_req, res) => {
+    res.json(await rigs.tryLoads(db, rigOf(res), parsed(res, tryLoadsSchema).candidates));
+  });
+
+  router.post('/:rigId/loads', rigAccess(db, { load: ['create'] }), validate(loadSchema), async (_req, res) => {
+    res.status(201).json(await rigs.addLoad(db, rigOf(res), session(res).user.id, parsed(res, loadSchema)));
+  });
+
+  router.patch('/:rigId/loads/:loadId', rigAccess(db, { load: ['update'] }), validate(loadParamsSchema, 'params'), validate(loadSchema), async (_req, res) => {
+    res.json(await rigs.editLoad(db, rigOf(res), parsed(res, loadParamsSchema, 'params').loadId, parsed(res, loadSchema)));
+  });
+
+  router.delete('/:rigId/loads/:loadId', rigAccess(db, { load: ['delete'] }), validate(loadParamsSchema, 'params'), async (_req, res) => {
+    await rigs.removeLoad(db, rigOf(res).id, parsed(res, loadParamsSchema, 'params').loadId);
+    res.status(204).end();
   });
 
   router.get('/:rigId/people', rigAccess(db, { people: ['read'] }), async (_req, res) => {

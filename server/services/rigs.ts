@@ -1,13 +1,13 @@
 import type { Db } from '@/db/client';
 import type { LoadRow } from '@/db/schema';
-import { project } from '@/shared/energy/project';
+import { compare, project } from '@/shared/energy/project';
 import { can, type HouseholdRole } from '@/shared/permissions';
 import { type Load, projectionInputSchema, type RigPower, rigPowerSchema } from '@/shared/schemas/projection';
-import type { RigCreateInput } from '@/shared/schemas/rig';
+import type { RigCreateInput, RigUpdateInput } from '@/shared/schemas/rig';
 import type { Auth } from '../auth';
 import { viaAuth } from '../auth-errors';
 import { HttpError } from '../errors';
-import { householdRole, insertRig, listRigsForUser, loadsOfRigs } from '../repositories/rigs';
+import { deleteLoad, deleteRig, householdRole, insertLoad, insertRig, listRigsForUser, loadsOfRigs, updateLoad, updateRigIfVersion } from '../repositories/rigs';
 
 export type SavedLoad = Load & { id: string; addedBy: { id: string; name: string } | null };
 
@@ -19,7 +19,8 @@ export function loadFromRow(row: LoadRow & { added_by_name?: string | null }): S
     ...(row.amps !== null ? { amps: row.amps } : { watts: row.watts ?? 0 }),
     dutyPercent: row.duty_percent,
     hoursPerDay: row.hours_per_day,
-    startHour: row.start_hour,
+    ...(row.start_hour !== null ? { startHour: row.start_hour } : {}),
+    ...(row.weekdays ? { weekdays: row.weekdays } : {}),
     when: row.when,
     status: row.status,
     quantity: row.quantity,
@@ -35,7 +36,8 @@ export function loadToRow(load: Load, position: number, addedBy: string | null) 
     amps: load.amps ?? null,
     duty_percent: load.dutyPercent,
     hours_per_day: load.hoursPerDay,
-    start_hour: load.startHour ?? 0,
+    start_hour: load.startHour ?? null,
+    weekdays: load.weekdays ?? null,
     when: load.when,
     status: load.status,
     quantity: load.quantity,
@@ -75,8 +77,8 @@ export function rigDto(row: RigRowWithRole, loads: SavedLoad[]) {
 }
 export type RigDto = ReturnType<typeof rigDto>;
 
-export function modelInput(power: RigPower, loads: Load[]) {
-  return projectionInputSchema.parse({ ...power, loads: loads.map(({ ...l }) => l) });
+export function modelInput(power: RigPower, loads: (Load | SavedLoad)[]) {
+  return projectionInputSchema.parse({ ...power, loads: loads.map((l) => ('id' in l ? stripLoad(l) : l)) });
 }
 
 export async function listRigs(db: Db, userId: string) {
@@ -123,4 +125,74 @@ export async function createRig(db: Db, auth: Auth, userId: string, input: RigCr
     input.loads.map((l, i) => loadToRow(l, i, userId)),
   );
   return row.id;
+}
+
+function validateModel(power: RigPower, loads: Load[], fieldPrefix = '') {
+  const parsed = projectionInputSchema.safeParse({ ...power, loads });
+  if (!parsed.success) {
+    throw new HttpError(400, 'validation_failed', 'Some fields are not valid.', parsed.error.issues.map((i) => ({ path: fieldPrefix + i.path.join('.'), message: i.message })));
+  }
+  return parsed.data;
+}
+
+export async function readRig(db: Db, rig: RigRowWithRole) {
+  const loads = (await loadsOfRigs(db, [rig.id])).map(loadFromRow);
+  return rigDto(rig, loads);
+}
+
+/** The saved rig through the model: the Outlook, Fixes included. */
+export async function rigOutlook(db: Db, rig: RigRowWithRole) {
+  const dto = await readRig(db, rig);
+  return { rigId: dto.id, version: dto.version, ...project(modelInput(dto.power, dto.loads)) };
+}
+
+export async function tryLoads(db: Db, rig: RigRowWithRole, candidates: Load[]) {
+  const dto = await readRig(db, rig);
+  if (!candidates.length && !dto.loads.some((l) => l.status === 'candidate')) {
+    throw new HttpError(400, 'validation_failed', 'Give at least one candidate load to try.', [{ path: 'candidates', message: 'Add a candidate load to try.' }]);
+  }
+  const model = validateModel(dto.power, dto.loads.map(stripLoad));
+  validateModel(dto.power, [...dto.loads.map(stripLoad), ...candidates], 'with.');
+  return compare({ rig: model, candidates });
+}
+
+const stripLoad = ({ id: _id, addedBy: _by, ...load }: SavedLoad): Load => load;
+
+export async function changeRig(db: Db, rig: RigRowWithRole, input: RigUpdateInput) {
+  if (input.power) {
+    const loads = (await loadsOfRigs(db, [rig.id])).map(loadFromRow).map(stripLoad);
+    validateModel(input.power, loads, 'power.');
+  }
+  const updated = await updateRigIfVersion(db, rig.id, input.version, { name: input.name, vehicle: input.vehicle, power: input.power });
+  if (!updated) {
+    throw new HttpError(409, 'conflict', 'Someone else changed this rig since you opened it. Reload to see their change, then make yours again.', [
+      { path: 'version', message: `This rig is now at version ${rig.version}; your edit started from version ${input.version}.` },
+    ]);
+  }
+  return updated;
+}
+
+export async function addLoad(db: Db, rig: RigRowWithRole, userId: string, load: Load) {
+  const dto = await readRig(db, rig);
+  validateModel(dto.power, [...dto.loads.map(stripLoad), load].map((l) => ({ ...l, status: 'installed' as const })));
+  const { position: _p, ...row } = loadToRow(load, 0, userId);
+  return loadFromRow(await insertLoad(db, rig.id, row));
+}
+
+export async function editLoad(db: Db, rig: RigRowWithRole, loadId: string, load: Load) {
+  const dto = await readRig(db, rig);
+  if (!dto.loads.some((l) => l.id === loadId)) throw new HttpError(404, 'not_found', 'No such load on this rig.');
+  validateModel(dto.power, dto.loads.map((l) => (l.id === loadId ? load : stripLoad(l))).map((l) => ({ ...l, status: 'installed' as const })));
+  const { position: _p, added_by: _a, ...row } = loadToRow(load, 0, null);
+  const updated = await updateLoad(db, rig.id, loadId, row);
+  if (!updated) throw new HttpError(404, 'not_found', 'No such load on this rig.');
+  return loadFromRow(updated);
+}
+
+export async function removeLoad(db: Db, rigId: string, loadId: string) {
+  if (!(await deleteLoad(db, rigId, loadId))) throw new HttpError(404, 'not_found', 'No such load on this rig.');
+}
+
+export async function removeRig(db: Db, rigId: string) {
+  await deleteRig(db, rigId);
 }

@@ -43,7 +43,7 @@ export const inverterSchema = z.object({
 });
 
 export const loadSchema = z
-  .object({
+  .strictObject({
     name: z.string().trim().min(1).max(80),
     supply: supplySchema,
     watts: num(0, 10_000).optional(),

@@ -58,6 +58,18 @@ async function throwawayMember() {
   const m = await ctx.auth.api.addMember({ body: { userId: user.id, role: 'member', organizationId: fx.householdId } });
   return m!.id;
 }
+async function throwawayRig() {
+  const res = await fx.agents.owner.post('/api/rigs').set('Origin', TEST_ORIGIN).send({ name: 'Spare', householdId: fx.householdId, power: WREN_POWER });
+  return res.body.id as string;
+}
+async function throwawayLoad() {
+  const res = await fx.agents.owner.post(`/api/rigs/${fx.rigId}/loads`).set('Origin', TEST_ORIGIN).send(LOAD);
+  return res.body.id as string;
+}
+const currentVersion = async () => (await fx.agents.owner.get(`/api/rigs/${fx.rigId}`)).body.version as number;
+const LOAD = { name: 'Fan', supply: 'dc', watts: 20, hoursPerDay: 4 };
+const editRole = (ok: number) => ({ anonymous: 401, outsider: 404, advisor: 403, member: ok, owner: ok, admin: 404 });
+
 const memberIdOf = async (userId: string) =>
   (await ctx.db.selectFrom('member').select('id').where('organizationId', '=', fx.householdId).where('userId', '=', userId).executeTakeFirstOrThrow()).id;
 
@@ -77,6 +89,25 @@ const MATRIX: Record<string, Entry> = {
   },
   'GET /api/rigs/:rigId': { send: (a, c) => a.get(`/api/rigs/${c.rigId}`), expect: readRig },
   'GET /api/rigs/:rigId/people': { send: (a, c) => a.get(`/api/rigs/${c.rigId}/people`), expect: readRig },
+  'PATCH /api/rigs/:rigId': {
+    send: async (a, c) => a.patch(`/api/rigs/${c.rigId}`).set('Origin', TEST_ORIGIN).send({ version: await currentVersion(), vehicle: 'Matrix van' }),
+    expect: ownerOnly(200),
+  },
+  'DELETE /api/rigs/:rigId': {
+    send: async (a) => a.delete(`/api/rigs/${await throwawayRig()}`).set('Origin', TEST_ORIGIN),
+    expect: ownerOnly(204),
+  },
+  'GET /api/rigs/:rigId/outlook': { send: (a, c) => a.get(`/api/rigs/${c.rigId}/outlook`), expect: readRig },
+  'POST /api/rigs/:rigId/try': { send: (a, c) => a.post(`/api/rigs/${c.rigId}/try`).set('Origin', TEST_ORIGIN).send({ candidates: [LOAD] }), expect: readRig },
+  'POST /api/rigs/:rigId/loads': { send: (a, c) => a.post(`/api/rigs/${c.rigId}/loads`).set('Origin', TEST_ORIGIN).send(LOAD), expect: editRole(201) },
+  'PATCH /api/rigs/:rigId/loads/:loadId': {
+    send: async (a, c) => a.patch(`/api/rigs/${c.rigId}/loads/${await throwawayLoad()}`).set('Origin', TEST_ORIGIN).send({ ...LOAD, watts: 25 }),
+    expect: editRole(200),
+  },
+  'DELETE /api/rigs/:rigId/loads/:loadId': {
+    send: async (a, c) => a.delete(`/api/rigs/${c.rigId}/loads/${await throwawayLoad()}`).set('Origin', TEST_ORIGIN),
+    expect: editRole(204),
+  },
   'POST /api/rigs/:rigId/invitations': {
     send: (a, c) => a.post(`/api/rigs/${c.rigId}/invitations`).set('Origin', TEST_ORIGIN).send({ email: uniqueEmail('matrix'), role: 'member' }),
     expect: ownerOnly(201),

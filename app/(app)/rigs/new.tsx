@@ -4,5 +4,5 @@ import { NewRigScreen } from '@/features/rigs/components/new-rig-screen';
 
 export default function NewRig() {
   const router = useRouter();
-  return <NewRigScreen onCreated={() => router.replace('/')} />;
+  return <NewRigScreen onCreated={(rigId) => router.replace({ pathname: '/rigs/[rigId]', params: { rigId } })} />;
 }

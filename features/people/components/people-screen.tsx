@@ -4,7 +4,7 @@ import { ActivityIndicator, Pressable, StyleSheet, Text, View } from 'react-nati
 
 import { ChoiceField } from '@/components/form';
 import { TextField } from '@/components/text-field';
-import { Body, Button, Card, Heading, Small, Title } from '@/components/ui';
+import { Body, Button, Card, Heading, Small } from '@/components/ui';
 import { useIsWide } from '@/components/use-layout';
 import { type InvitationCreateForm, invitationCreateSchema } from '@/shared/schemas/people';
 import { colors, space, type } from '@/shared/theme';
@@ -38,10 +38,7 @@ export function PeopleScreen({ rigId, myUserId, onLeft }: { rigId: string; myUse
   const owner = rig.data.permissions.managePeople;
   return (
     <View style={{ gap: space.lg }} testID="people-screen">
-      <Title>People · {rig.data.name}</Title>
-      <Small>
-        {rig.data.householdName}. You are {rig.data.role}.
-      </Small>
+      <Heading>People</Heading>
       <View style={[{ gap: space.lg }, wide && { flexDirection: 'row', alignItems: 'flex-start' }]}>
         <Card style={wide ? { flex: 3 } : undefined} testID="members">
           <Heading>In the household</Heading>

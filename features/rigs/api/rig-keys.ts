@@ -3,4 +3,5 @@ export const rigKeys = {
   all: ['rigs'] as const,
   list: () => [...rigKeys.all, 'list'] as const,
   detail: (rigId: string) => [...rigKeys.all, 'detail', rigId] as const,
+  outlook: (rigId: string) => [...rigKeys.all, 'outlook', rigId] as const,
 };

@@ -62,11 +62,18 @@ function RigCard({ rig, wide }: { rig: RigSummary; wide: boolean }) {
       <Small>
         {rig.loadCount} loads · changed {formatWhen(rig.updatedAt)}
       </Small>
-      <Link href={{ pathname: '/rigs/[rigId]/people', params: { rigId: rig.id } }} asChild>
-        <Pressable role="link" testID={`people-${rig.name}`}>
-          <Text style={styles.link}>People</Text>
-        </Pressable>
-      </Link>
+      <View style={{ flexDirection: 'row', gap: space.lg }}>
+        <Link href={{ pathname: '/rigs/[rigId]', params: { rigId: rig.id } }} asChild>
+          <Pressable role="link" testID={`open-${rig.name}`}>
+            <Text style={styles.link}>Open the Outlook</Text>
+          </Pressable>
+        </Link>
+        <Link href={{ pathname: '/rigs/[rigId]/people', params: { rigId: rig.id } }} asChild>
+          <Pressable role="link" testID={`people-${rig.name}`}>
+            <Text style={styles.link}>People</Text>
+          </Pressable>
+        </Link>
+      </View>
     </Card>
   );
 }

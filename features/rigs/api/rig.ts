@@ -1,0 +1,52 @@
+import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+
+import { apiFetch } from '@/lib/api-client';
+import type { Comparison, Projection } from '@/shared/energy/project';
+import type { Load, LoadInput, RigPower } from '@/shared/schemas/projection';
+import type { RigUpdateForm } from '@/shared/schemas/rig';
+import { rigKeys } from './rig-keys';
+
+export type SavedLoad = Load & { id: string; addedBy: { id: string; name: string } | null };
+export type Rig = {
+  id: string;
+  name: string;
+  vehicle: string;
+  householdId: string;
+  householdName: string;
+  role: 'owner' | 'member' | 'advisor';
+  permissions: { edit: boolean; delete: boolean; manageLoads: boolean; managePeople: boolean; comment: boolean };
+  version: number;
+  updatedAt: string;
+  power: RigPower;
+  loads: SavedLoad[];
+};
+export type Outlook = Projection & { rigId: string; version: number };
+
+export const rigQueryOptions = (rigId: string) => queryOptions({ queryKey: rigKeys.detail(rigId), queryFn: () => apiFetch<Rig>(`/api/rigs/${rigId}`) });
+export const useRigQuery = (rigId: string) => useQuery(rigQueryOptions(rigId));
+
+export const outlookQueryOptions = (rigId: string) =>
+  queryOptions({ queryKey: rigKeys.outlook(rigId), queryFn: () => apiFetch<Outlook>(`/api/rigs/${rigId}/outlook`) });
+export const useOutlookQuery = (rigId: string) => useQuery(outlookQueryOptions(rigId));
+
+/** Every change to a rig invalidates the rig, its Outlook and the Rigs list. */
+function useRigMutation<V, R>(rigId: string, fn: (v: V) => Promise<R>) {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: fn,
+    onSuccess: () => Promise.all([client.invalidateQueries({ queryKey: rigKeys.detail(rigId) }), client.invalidateQueries({ queryKey: rigKeys.outlook(rigId) }), client.invalidateQueries({ queryKey: rigKeys.list() })]),
+  });
+}
+
+export const useRigUpdateMutation = (rigId: string) => useRigMutation(rigId, (form: RigUpdateForm) => apiFetch<{ id: string; version: number }>(`/api/rigs/${rigId}`, { method: 'PATCH', json: form }));
+export const useRigDeleteMutation = (rigId: string) => {
+  const client = useQueryClient();
+  return useMutation({ mutationFn: () => apiFetch(`/api/rigs/${rigId}`, { method: 'DELETE' }), onSuccess: () => client.invalidateQueries({ queryKey: rigKeys.all }) });
+};
+export const useLoadCreateMutation = (rigId: string) => useRigMutation(rigId, (load: LoadInput) => apiFetch<SavedLoad>(`/api/rigs/${rigId}/loads`, { method: 'POST', json: load }));
+export const useLoadUpdateMutation = (rigId: string) =>
+  useRigMutation(rigId, ({ id, load }: { id: string; load: LoadInput }) => apiFetch<SavedLoad>(`/api/rigs/${rigId}/loads/${id}`, { method: 'PATCH', json: load }));
+export const useLoadDeleteMutation = (rigId: string) => useRigMutation(rigId, (id: string) => apiFetch(`/api/rigs/${rigId}/loads/${id}`, { method: 'DELETE' }));
+
+export const useTryLoadsMutation = (rigId: string) =>
+  useMutation({ mutationFn: (candidates: LoadInput[]) => apiFetch<Comparison>(`/api/rigs/${rigId}/try`, { method: 'POST', json: { candidates } }) });

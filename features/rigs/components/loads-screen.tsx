@@ -1,0 +1,184 @@
+import { useMemo, useState } from 'react';
+import { ActivityIndicator, Pressable, ScrollView, StyleSheet, Text, View } from 'react-native';
+
+import { Body, Button, Card, Heading, Small } from '@/components/ui';
+import { useIsWide } from '@/components/use-layout';
+import { loadRunningCurrentA } from '@/shared/energy/profile';
+import type { Load } from '@/shared/schemas/projection';
+import { colors, space, type } from '@/shared/theme';
+import { type SavedLoad, useLoadCreateMutation, useLoadDeleteMutation, useLoadUpdateMutation, useOutlookQuery, useRigQuery } from '../api/rig';
+import { EMPTY_LOAD, LoadForm } from './load-form';
+
+type SortKey = 'name' | 'member' | 'supply' | 'watts' | 'hours' | 'duty' | 'ah' | 'share';
+const COLUMNS: { key: SortKey; label: string; width: number }[] = [
+  { key: 'name', label: 'Load', width: 170 },
+  { key: 'member', label: 'Added by', width: 110 },
+  { key: 'supply', label: 'Supply', width: 60 },
+  { key: 'watts', label: 'W / A', width: 70 },
+  { key: 'hours', label: 'h/day', width: 60 },
+  { key: 'duty', label: 'Duty', width: 60 },
+  { key: 'ah', label: 'Ah/day', width: 70 },
+  { key: 'share', label: 'Share', width: 60 },
+];
+
+/** Loads: the rig's devices, sortable, filterable by member; add, edit and delete. */
+export function LoadsScreen({ rigId }: { rigId: string }) {
+  const rig = useRigQuery(rigId);
+  const outlook = useOutlookQuery(rigId);
+  const wide = useIsWide();
+  const [sort, setSort] = useState<{ key: SortKey; desc: boolean }>({ key: 'ah', desc: true });
+  const [member, setMember] = useState<string | null>(null);
+  const [editing, setEditing] = useState<SavedLoad | 'new' | null>(null);
+  const [confirming, setConfirming] = useState<string | null>(null);
+  const create = useLoadCreateMutation(rigId);
+  const update = useLoadUpdateMutation(rigId);
+  const remove = useLoadDeleteMutation(rigId);
+
+  const rows = useMemo(() => {
+    if (!rig.data) return [];
+    const V = rig.data.power.systemVoltage;
+    const eff = (rig.data.power.inverter?.efficiencyPercent ?? 90) / 100;
+    const byName = new Map((outlook.data?.breakdown ?? []).map((b) => [b.name, b]));
+    const list = rig.data.loads
+      .filter((l) => l.status === 'installed')
+      .filter((l) => !member || l.addedBy?.id === member)
+      .map((l) => {
+        const b = byName.get(l.name);
+        return { load: l, amps: loadRunningCurrentA(l, V, eff), ah: b?.ahPerDay ?? 0, share: b?.share ?? 0 };
+      });
+    const val = (r: (typeof list)[number]): string | number =>
+      ({ name: r.load.name.toLowerCase(), member: r.load.addedBy?.name ?? '', supply: r.load.supply, watts: r.load.watts ?? r.amps * V, hours: r.load.hoursPerDay, duty: r.load.dutyPercent, ah: r.ah, share: r.share })[sort.key];
+    return list.sort((a, b) => (val(a) < val(b) ? -1 : val(a) > val(b) ? 1 : 0) * (sort.desc ? -1 : 1));
+  }, [rig.data, outlook.data, sort, member]);
+
+  if (rig.isPending) return <ActivityIndicator color={colors.night} />;
+  if (rig.isError) return <Body style={{ color: colors.short }}>{rig.error.message}</Body>;
+  const canEdit = rig.data.permissions.manageLoads;
+  const members = [...new Map(rig.data.loads.filter((l) => l.addedBy).map((l) => [l.addedBy!.id, l.addedBy!.name])).entries()];
+  const maxWatts = rig.data.power.systemVoltage * 400;
+  const save = (load: Load) => {
+    if (editing === 'new') create.mutate(load, { onSuccess: () => setEditing(null) });
+    else if (editing) update.mutate({ id: editing.id, load }, { onSuccess: () => setEditing(null) });
+  };
+  const formError = (editing === 'new' ? create.error : update.error)?.message ?? null;
+
+  return (
+    <View style={[{ gap: space.lg }, wide && { flexDirection: 'row', alignItems: 'flex-start' }]} testID="loads-screen">
+      <Card style={wide ? { flex: 3 } : undefined}>
+        <View style={styles.head}>
+          <Heading>Loads</Heading>
+          {canEdit && !editing ? <Button testID="add-load" label="Add a load" onPress={() => setEditing('new')} /> : null}
+        </View>
+        <View style={styles.filters} role="radiogroup" aria-label="Show loads added by">
+          {[[null, 'Everyone'] as const, ...members].map(([id, name]) => (
+            <Pressable key={id ?? 'all'} role="radio" aria-checked={member === id} onPress={() => setMember(id)} style={[styles.chip, member === id && styles.chipOn]} testID={`filter-${name}`}>
+              <Text style={[styles.chipText, member === id && styles.chipTextOn]}>{name}</Text>
+            </Pressable>
+          ))}
+        </View>
+        <ScrollView horizontal>
+          <View role="table">
+            <View style={styles.tr} role="row">
+              {COLUMNS.map((c) => (
+                <Pressable
+                  key={c.key}
+                  role="columnheader"
+                  aria-sort={sort.key === c.key ? (sort.desc ? 'descending' : 'ascending') : 'none'}
+                  onPress={() => setSort((s) => ({ key: c.key, desc: s.key === c.key ? !s.desc : c.key !== 'name' }))}
+                  style={{ width: c.width }}
+                  testID={`sort-${c.key}`}
+                >
+                  <Text style={styles.th}>
+                    {c.label}
+                    {sort.key === c.key ? (sort.desc ? ' ↓' : ' ↑') : ''}
+                  </Text>
+                </Pressable>
+              ))}
+              {canEdit ? <View style={{ width: 150 }} /> : null}
+            </View>
+            {rows.map(({ load, amps, ah, share }) => (
+              <View key={load.id} style={styles.tr} role="row" testID={`load-${load.name}`}>
+                <Text style={[styles.td, { width: 170 }]}>{load.quantity > 1 ? `${load.name} ×${load.quantity}` : load.name}</Text>
+                <Text style={[styles.td, { width: 110 }]}>{load.addedBy?.name.split(' ')[0] ?? '—'}</Text>
+                <Text style={[styles.td, { width: 60 }]}>{load.supply.toUpperCase()}</Text>
+                <Text style={[styles.td, { width: 70 }]}>{load.watts !== undefined ? `${load.watts} W` : `${amps.toFixed(1)} A`}</Text>
+                <Text style={[styles.td, { width: 60 }]}>{load.hoursPerDay}</Text>
+                <Text style={[styles.td, { width: 60 }]}>{load.dutyPercent} %</Text>
+                <Text style={[styles.td, { width: 70 }]}>{ah.toFixed(1)}</Text>
+                <Text style={[styles.td, { width: 60 }]}>{Math.round(share * 100)} %</Text>
+                {canEdit ? (
+                  <View style={[styles.actions, { width: 150 }]}>
+                    {confirming === load.id ? (
+                      <>
+                        <Pressable role="button" onPress={() => remove.mutate(load.id, { onSuccess: () => setConfirming(null) })} style={styles.chip} testID={`confirm-delete-${load.name}`}>
+                          <Text style={[styles.chipText, { color: colors.short }]}>Delete</Text>
+                        </Pressable>
+                        <Pressable role="button" onPress={() => setConfirming(null)} style={styles.chip}>
+                          <Text style={styles.chipText}>Keep</Text>
+                        </Pressable>
+                      </>
+                    ) : (
+                      <>
+                        <Pressable role="button" aria-label={`Edit ${load.name}`} onPress={() => setEditing(load)} style={styles.chip}>
+                          <Text style={styles.chipText}>Edit</Text>
+                        </Pressable>
+                        <Pressable role="button" aria-label={`Delete ${load.name}`} onPress={() => setConfirming(load.id)} style={styles.chip} testID={`delete-${load.name}`}>
+                          <Text style={styles.chipText}>Delete</Text>
+                        </Pressable>
+                      </>
+                    )}
+                  </View>
+                ) : null}
+              </View>
+            ))}
+          </View>
+        </ScrollView>
+        {rows.length === 0 ? <Small>No loads{member ? ' added by this member' : ''} yet.</Small> : null}
+        {outlook.data ? (
+          <Small>
+            Standby: inverter idle {outlook.data.standby.inverterIdleAh.toFixed(1)} Ah/day, key-off draw {outlook.data.standby.keyOffAh.toFixed(1)}, self-discharge {outlook.data.standby.selfDischargeAh.toFixed(1)}.
+          </Small>
+        ) : null}
+      </Card>
+      {editing ? (
+        <View style={wide ? { flex: 2 } : undefined}>
+          <LoadForm
+            key={editing === 'new' ? 'new' : editing.id}
+            title={editing === 'new' ? 'Add a load' : `Edit ${editing.name}`}
+            initial={editing === 'new' ? EMPTY_LOAD : asWatts(stripSaved(editing), rig.data.power.systemVoltage)}
+            submitLabel={editing === 'new' ? 'Add' : 'Save'}
+            busy={create.isPending || update.isPending}
+            error={formError}
+            onSubmit={save}
+            onCancel={() => setEditing(null)}
+            maxWatts={maxWatts}
+          />
+        </View>
+      ) : null}
+    </View>
+  );
+}
+
+function stripSaved({ id: _id, addedBy: _a, ...load }: SavedLoad): Load {
+  return load;
+}
+
+/** The form edits watts; a load saved in amps is shown as its watts at the system voltage. */
+function asWatts(load: Load, systemVoltage: number): Load {
+  if (load.amps === undefined) return load;
+  const { amps, ...rest } = load;
+  return { ...rest, watts: Math.round(amps * systemVoltage * 10) / 10 };
+}
+
+const styles = StyleSheet.create({
+  head: { flexDirection: 'row', justifyContent: 'space-between', alignItems: 'center' },
+  filters: { flexDirection: 'row', flexWrap: 'wrap', gap: space.xs },
+  tr: { flexDirection: 'row', alignItems: 'center', borderBottomWidth: 1, borderBottomColor: colors.line, paddingVertical: space.sm },
+  th: { ...type.small, fontFamily: 'Nunito_700Bold', color: colors.ink },
+  td: { ...type.small, color: colors.ink, paddingRight: space.sm },
+  actions: { flexDirection: 'row', gap: space.xs },
+  chip: { borderWidth: 1, borderColor: colors.line, borderRadius: 999, paddingHorizontal: space.md, paddingVertical: space.xs },
+  chipOn: { backgroundColor: colors.night, borderColor: colors.night },
+  chipText: { ...type.small, color: colors.ink, fontFamily: 'Nunito_700Bold' },
+  chipTextOn: { color: colors.paper },
+});

@@ -1,0 +1,154 @@
+import { ActivityIndicator, StyleSheet, Text, View } from 'react-native';
+
+import { formatDays } from '@/components/format';
+import { MarginBadge } from '@/components/margin-badge';
+import { Body, Button, Card, Heading, Small } from '@/components/ui';
+import { useIsWide } from '@/components/use-layout';
+import { colors, radius, space, type } from '@/shared/theme';
+import { type Outlook, useOutlookQuery } from '../api/rig';
+import { SocChart } from './chart/soc-chart';
+
+const FIX_TITLE: Record<string, string> = {
+  'cutoff-switch': 'Cut-off switch on the inverter',
+  'ignition-relay': 'Ignition-keyed relay',
+  'low-voltage-disconnect': 'Low-voltage disconnect',
+  'more-driving': 'More driving',
+  'more-battery': 'More battery',
+  solar: 'Solar',
+};
+
+/** Outlook: the headline figures, margin, the charge chart, the biggest drains, warnings and Fixes. */
+export function OutlookScreen({ rigId }: { rigId: string }) {
+  const outlook = useOutlookQuery(rigId);
+  const wide = useIsWide();
+  if (outlook.isPending) return <ActivityIndicator color={colors.night} />;
+  if (outlook.isError)
+    return (
+      <Card>
+        <Body style={{ color: colors.short }}>The Outlook could not be computed: {outlook.error.message}</Body>
+        <Button label="Try again" onPress={() => outlook.refetch()} />
+      </Card>
+    );
+  const o = outlook.data;
+  return (
+    <View style={{ gap: space.lg }} testID="outlook-screen">
+      <View style={[styles.figures, wide && { flexWrap: 'nowrap' }]}>
+        <Figure label="Days parked" value={formatDays(o.parked.daysToCutoff, o.horizonDays)} hint="to the cut-off, not driving at all" testID="figure-days-parked" />
+        <Figure label="Days on your routine" value={o.routine.holds ? 'Holds' : formatDays(o.routine.daysToCutoff, o.horizonDays)} hint={o.routine.holds ? 'the week puts back what it uses' : 'to the cut-off, driving as you do'} testID="figure-days-routine" />
+        <Card style={styles.figureCard}>
+          <Text style={styles.figureLabel}>Margin for a {o.margin.plannedStayDays}-day stay</Text>
+          <MarginBadge state={o.margin.state} />
+          <Small>{o.margin.days === null ? 'The cut-off is beyond the horizon.' : `${o.margin.days >= 0 ? '+' : ''}${o.margin.days.toFixed(1)} days`}</Small>
+        </Card>
+      </View>
+      <View style={[{ gap: space.lg }, wide && { flexDirection: 'row', alignItems: 'flex-start' }]}>
+        <View style={[{ gap: space.lg }, wide && { flex: 3 }]}>
+          <Card>
+            <Heading>State of charge, {o.horizonDays} days</Heading>
+            <SocChart series={o.series} cutoffSocPercent={o.cutoffSocPercent} />
+            <Small>
+              Dark line: on your routine. Grey: parked. Red line: cut-off at {o.cutoffSocPercent} %. Amber bands: driving.
+            </Small>
+          </Card>
+          {o.warnings.length ? (
+            <Card testID="warnings">
+              <Heading>Warnings</Heading>
+              {o.warnings.map((w) => (
+                <Body key={w.code} style={{ color: colors.short }}>
+                  ▲ {w.message}
+                </Body>
+              ))}
+            </Card>
+          ) : null}
+          <Fixes outlook={o} />
+        </View>
+        <View style={wide ? { flex: 2 } : undefined}>
+          <Drains outlook={o} />
+        </View>
+      </View>
+    </View>
+  );
+}
+
+function Figure({ label, value, hint, testID }: { label: string; value: string; hint: string; testID: string }) {
+  return (
+    <Card style={styles.figureCard}>
+      <Text style={styles.figureLabel}>{label}</Text>
+      <Text style={styles.figureValue} testID={testID}>
+        {value}
+      </Text>
+      <Small>{hint}</Small>
+    </Card>
+  );
+}
+
+function Drains({ outlook }: { outlook: Outlook }) {
+  const top = outlook.breakdown.slice(0, 8);
+  const max = Math.max(...top.map((b) => b.ahPerDay), 0.001);
+  return (
+    <Card testID="drains">
+      <Heading>Biggest drains</Heading>
+      <Small>
+        {outlook.daily.consumptionAh.toFixed(1)} Ah a day used, {outlook.daily.chargeAh.toFixed(1)} Ah put back.
+      </Small>
+      {top.map((b) => (
+        <View key={b.name} style={{ gap: 2 }}>
+          <View style={styles.drainRow}>
+            <Text style={styles.drainName}>
+              {b.name}
+              {b.kind === 'standby' ? ' (standby)' : ''}
+            </Text>
+            <Text style={styles.drainValue}>
+              {b.ahPerDay.toFixed(1)} Ah/day · {Math.round(b.share * 100)} %
+            </Text>
+          </View>
+          <View style={styles.barTrack}>
+            <View style={[styles.bar, { width: `${(b.ahPerDay / max) * 100}%`, backgroundColor: b.kind === 'standby' ? colors.lampDeep : colors.nightSoft }]} />
+          </View>
+        </View>
+      ))}
+    </Card>
+  );
+}
+
+function Fixes({ outlook }: { outlook: Outlook }) {
+  return (
+    <Card testID="fixes">
+      <Heading>Fixes</Heading>
+      {outlook.fixes.length === 0 ? <Small>Nothing to fix: no change gains days.</Small> : null}
+      {outlook.fixes.map((f) => (
+        <View key={f.kind} style={styles.fix} testID={`fix-${f.kind}`}>
+          <Text style={styles.fixTitle}>
+            {FIX_TITLE[f.kind] ?? f.kind}: {f.holds ? 'the routine holds' : `+${f.daysGainedRoutine.toFixed(1)} days on your routine`}
+            {f.daysGainedParked > 0 ? `, +${f.daysGainedParked.toFixed(1)} days parked` : ''}
+          </Text>
+          <Body>{f.summary}</Body>
+          <Small>Cost in convenience: {f.convenience}</Small>
+        </View>
+      ))}
+      {outlook.fixes.some((f) => ['cutoff-switch', 'ignition-relay', 'low-voltage-disconnect', 'solar', 'more-battery'].includes(f.kind)) ? (
+        <View style={styles.caution} role="note">
+          <Small style={{ color: colors.ink }}>
+            Wiring changes: fit protection as close to the battery as possible, use proper terminals and strain relief, disconnect the battery before work, and follow local codes and a qualified auto
+            electrician. These figures are estimates, not a guarantee.
+          </Small>
+        </View>
+      ) : null}
+    </Card>
+  );
+}
+
+const styles = StyleSheet.create({
+  figures: { flexDirection: 'row', flexWrap: 'wrap', gap: space.lg },
+  figureCard: { flexGrow: 1, flexBasis: 200, gap: space.xs },
+  figureLabel: { ...type.small, color: colors.inkSoft, fontFamily: 'Nunito_700Bold' },
+  figureValue: { ...type.figure, color: colors.night },
+  drainRow: { flexDirection: 'row', justifyContent: 'space-between', gap: space.sm },
+  drainName: { ...type.body, color: colors.ink, flexShrink: 1 },
+  drainValue: { ...type.small, color: colors.inkSoft },
+  barTrack: { height: 8, backgroundColor: colors.paper, borderRadius: 4 },
+  bar: { height: 8, borderRadius: 4 },
+  fix: { gap: 2, paddingVertical: space.sm, borderBottomWidth: 1, borderBottomColor: colors.line },
+  fixTitle: { ...type.heading, fontSize: 15, color: colors.ink },
+  caution: { backgroundColor: '#FFF4DC', borderColor: colors.lampDeep, borderWidth: 1, borderRadius: radius.md, padding: space.md },
+});

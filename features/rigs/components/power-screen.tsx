@@ -1,0 +1,106 @@
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useState } from 'react';
+import { useForm } from 'react-hook-form';
+import { ActivityIndicator, Switch, Text, View } from 'react-native';
+
+import { ChoiceField, NumberField } from '@/components/form';
+import { Body, Button, Card, Heading, Small } from '@/components/ui';
+import { useIsWide } from '@/components/use-layout';
+import { ApiError } from '@/lib/api-client';
+import { type RigPower, type RigPowerInput, rigPowerSchema } from '@/shared/schemas/projection';
+import { colors, space, type } from '@/shared/theme';
+import { type Rig, useRigQuery, useRigUpdateMutation } from '../api/rig';
+
+const DAYS = ['Mon', 'Tue', 'Wed', 'Thu', 'Fri', 'Sat', 'Sun'];
+const INVERTER = { ratedW: 300, efficiencyPercent: 90, idleA: 0.5, control: 'always-on' } as const;
+
+/** Power: battery bank, inverter and its control, charging, the weekly routine, the stay and the horizon. */
+export function PowerScreen({ rigId }: { rigId: string }) {
+  const rig = useRigQuery(rigId);
+  if (rig.isPending) return <ActivityIndicator color={colors.night} />;
+  if (rig.isError) return <Body style={{ color: colors.short }}>{rig.error.message}</Body>;
+  return <PowerForm key={rig.data.version} rig={rig.data} />;
+}
+
+function PowerForm({ rig }: { rig: Rig }) {
+  const wide = useIsWide();
+  const update = useRigUpdateMutation(rig.id);
+  const readOnly = !rig.permissions.edit;
+  const form = useForm<RigPowerInput, unknown, RigPower>({ resolver: zodResolver(rigPowerSchema), defaultValues: rig.power, mode: 'onTouched' });
+  const [hasInverter, setHasInverter] = useState(rig.power.inverter !== null);
+  const toggle = (on: boolean) => {
+    setHasInverter(on);
+    form.setValue('inverter', on ? INVERTER : null);
+  };
+  const save = form.handleSubmit((power) => update.mutate({ version: rig.version, power }));
+  const conflict = update.error instanceof ApiError && update.error.status === 409;
+  const col = wide ? { flex: 1 } : undefined;
+  return (
+    <View style={{ gap: space.lg }} testID="power-screen" pointerEvents={readOnly ? 'none' : 'auto'}>
+      {readOnly ? <Small>You can read the power system; only an owner changes it.</Small> : null}
+      <View style={[{ gap: space.lg }, wide && { flexDirection: 'row', alignItems: 'flex-start' }]}>
+        <Card style={col}>
+          <Heading>Battery bank</Heading>
+          <ChoiceField control={form.control} name="battery.chemistry" label="Chemistry" options={[{ value: 'flooded', label: 'Flooded' }, { value: 'agm', label: 'AGM' }, { value: 'gel', label: 'Gel' }, { value: 'lifepo4', label: 'LiFePO4' }]} />
+          <NumberField control={form.control} name="battery.capacityAh" label="Capacity (20-hour rate)" unit="Ah" />
+          <NumberField control={form.control} name="battery.healthPercent" label="Health" unit="%" hint="An older battery holds less: 80 % after a few years is common." />
+          <NumberField control={form.control} name="battery.temperatureC" label="Battery temperature" unit="°C" />
+          <NumberField control={form.control} name="battery.startSocPercent" label="Charge at the start" unit="%" />
+          <ChoiceField control={form.control} name="battery.role" label="Battery" options={[{ value: 'house', label: 'House battery' }, { value: 'starter', label: 'Starting battery' }]} />
+          <NumberField control={form.control} name="systemVoltage" label="System voltage" unit="V" />
+        </Card>
+        <Card style={col}>
+          <Heading>Inverter and standby</Heading>
+          <View style={{ flexDirection: 'row', alignItems: 'center', gap: space.md }}>
+            <Text style={{ ...type.heading, fontSize: 15, flex: 1, color: colors.ink }}>The rig has an inverter</Text>
+            <Switch aria-label="The rig has an inverter" value={hasInverter} onValueChange={toggle} disabled={readOnly} />
+          </View>
+          {hasInverter ? (
+            <>
+              <NumberField control={form.control} name="inverter.ratedW" label="Rating" unit="W" />
+              <NumberField control={form.control} name="inverter.idleA" label="Idle draw" unit="A" />
+              <NumberField control={form.control} name="inverter.efficiencyPercent" label="Efficiency" unit="%" />
+              <ChoiceField
+                control={form.control}
+                name="inverter.control"
+                label="How it is switched"
+                options={[{ value: 'always-on', label: 'Always on' }, { value: 'manual-switch', label: 'Manual switch' }, { value: 'ignition-relay', label: 'Ignition relay' }, { value: 'low-voltage-disconnect', label: 'Low-voltage disconnect' }]}
+              />
+            </>
+          ) : null}
+          <NumberField control={form.control} name="keyOffDrawA" label="Vehicle key-off draw on this battery" unit="A" hint="Clock, alarm and modules; 0 if they are on another battery." />
+        </Card>
+      </View>
+      <View style={[{ gap: space.lg }, wide && { flexDirection: 'row', alignItems: 'flex-start' }]}>
+        <Card style={col}>
+          <Heading>Charging</Heading>
+          <NumberField control={form.control} name="charging.alternatorA" label="Alternator charge current" unit="A" />
+          <ChoiceField control={form.control} name="charging.charger" label="Through" options={[{ value: 'relay', label: 'A relay' }, { value: 'dc-dc', label: 'A DC-DC charger' }]} />
+          <NumberField control={form.control} name="charging.solarW" label="Solar panels" unit="W" />
+          <NumberField control={form.control} name="charging.peakSunHours" label="Peak sun hours" unit="h/day" />
+        </Card>
+        <Card style={col}>
+          <Heading>Routine and stay</Heading>
+          <Small>Minutes of driving each day.</Small>
+          <View style={{ flexDirection: 'row', flexWrap: 'wrap', gap: space.sm }}>
+            {DAYS.map((d, i) => (
+              <View key={d} style={{ width: 84 }}>
+                <NumberField control={form.control} name={`charging.drivingMinutesPerDay.${i}` as 'charging.drivingMinutesPerDay.0'} label={d} unit="min" />
+              </View>
+            ))}
+          </View>
+          <NumberField control={form.control} name="charging.drivingStartHour" label="Driving starts at" unit="h" />
+          <NumberField control={form.control} name="plannedStayDays" label="Planned stay" unit="days" />
+          <NumberField control={form.control} name="horizonDays" label="Horizon" unit="days" hint="1 to 60 days." />
+        </Card>
+      </View>
+      {update.isError ? (
+        <Text role="alert" style={{ ...type.body, color: colors.short }} testID="power-error">
+          {conflict ? 'Someone else changed this rig while you were editing. Reload the page to see their change, then make yours again.' : update.error.message}
+        </Text>
+      ) : null}
+      {update.isSuccess ? <Text style={{ ...type.body, color: colors.comfortable }}>Saved. The Outlook is updated.</Text> : null}
+      {!readOnly ? <Button testID="power-save" label="Save the power system" onPress={save} busy={update.isPending} /> : null}
+    </View>
+  );
+}

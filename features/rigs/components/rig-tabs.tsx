@@ -1,0 +1,50 @@
+import { Link, type Href, usePathname } from 'expo-router';
+import { Pressable, ScrollView, StyleSheet, Text, View } from 'react-native';
+
+import { Small, Title } from '@/components/ui';
+import { colors, radius, space, type } from '@/shared/theme';
+import { useRigQuery } from '../api/rig';
+
+/** The rig's name and its screens: Outlook, Loads, Power, Try a load, People. */
+export function RigTabs({ rigId }: { rigId: string }) {
+  const rig = useRigQuery(rigId);
+  const pathname = usePathname();
+  const tabs: { href: Href; label: string; path: string }[] = [
+    { href: { pathname: '/rigs/[rigId]', params: { rigId } }, label: 'Outlook', path: `/rigs/${rigId}` },
+    { href: { pathname: '/rigs/[rigId]/loads', params: { rigId } }, label: 'Loads', path: `/rigs/${rigId}/loads` },
+    { href: { pathname: '/rigs/[rigId]/power', params: { rigId } }, label: 'Power', path: `/rigs/${rigId}/power` },
+    { href: { pathname: '/rigs/[rigId]/try', params: { rigId } }, label: 'Try a load', path: `/rigs/${rigId}/try` },
+    { href: { pathname: '/rigs/[rigId]/people', params: { rigId } }, label: 'People', path: `/rigs/${rigId}/people` },
+  ];
+  return (
+    <View style={{ gap: space.sm }}>
+      <Title>{rig.data?.name ?? ' '}</Title>
+      {rig.data ? (
+        <Small>
+          {rig.data.vehicle || 'Vehicle not given'} · {rig.data.householdName} · you are {rig.data.role}
+          {rig.data.role === 'advisor' ? ' (read and comment only)' : ''}
+        </Small>
+      ) : null}
+      <ScrollView horizontal showsHorizontalScrollIndicator={false} contentContainerStyle={styles.row} role="tablist">
+        {tabs.map((t) => {
+          const on = pathname === t.path;
+          return (
+            <Link key={t.label} href={t.href} asChild>
+              <Pressable role="tab" aria-selected={on} testID={`tab-${t.label}`} style={StyleSheet.flatten([styles.tab, on && styles.tabOn])}>
+                <Text style={[styles.label, on && styles.labelOn]}>{t.label}</Text>
+              </Pressable>
+            </Link>
+          );
+        })}
+      </ScrollView>
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  row: { gap: space.sm, paddingVertical: space.xs },
+  tab: { paddingHorizontal: space.lg, paddingVertical: space.sm, borderRadius: radius.md, borderWidth: 1, borderColor: colors.line, backgroundColor: colors.card },
+  tabOn: { backgroundColor: colors.night, borderColor: colors.night },
+  label: { ...type.heading, fontSize: 15, color: colors.ink },
+  labelOn: { color: colors.paper },
+});

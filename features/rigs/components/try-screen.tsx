@@ -1,0 +1,109 @@
+import { useState } from 'react';
+import { StyleSheet, Text, View } from 'react-native';
+
+import { formatDays } from '@/components/format';
+import { MarginBadge } from '@/components/margin-badge';
+import { Body, Button, Card, Heading, Small } from '@/components/ui';
+import { useIsWide } from '@/components/use-layout';
+import type { CompareSide } from '@/shared/energy/project';
+import type { Load } from '@/shared/schemas/projection';
+import { colors, space, type } from '@/shared/theme';
+import { useLoadCreateMutation, useRigQuery, useTryLoadsMutation } from '../api/rig';
+import { EMPTY_LOAD, LoadForm } from './load-form';
+
+/** Try a load: the rig with and without a candidate, side by side, then adopt or discard it. */
+export function TryScreen({ rigId }: { rigId: string }) {
+  const rig = useRigQuery(rigId);
+  const wide = useIsWide();
+  const tryIt = useTryLoadsMutation(rigId);
+  const adopt = useLoadCreateMutation(rigId);
+  const [candidate, setCandidate] = useState<Load | null>(null);
+  const horizon = rig.data?.power.horizonDays ?? 14;
+  const result = tryIt.data;
+  return (
+    <View style={[{ gap: space.lg }, wide && { flexDirection: 'row', alignItems: 'flex-start' }]} testID="try-screen">
+      <View style={wide ? { flex: 2 } : undefined}>
+        <LoadForm
+          key={candidate ? 'tried' : 'fresh'}
+          title="A device you are thinking of"
+          initial={candidate ?? { ...EMPTY_LOAD, name: '', status: 'candidate' }}
+          submitLabel="Try it"
+          busy={tryIt.isPending}
+          error={tryIt.error?.message}
+          onSubmit={(load) => {
+            setCandidate(load);
+            tryIt.mutate([{ ...load, status: 'candidate' }]);
+          }}
+        />
+      </View>
+      <View style={[{ gap: space.lg }, wide && { flex: 3 }]}>
+        {result && candidate ? (
+          <Card testID="try-result">
+            <Heading>With {candidate.name}</Heading>
+            <View style={styles.sides}>
+              <Side title="Now" side={result.without} horizon={horizon} />
+              <Side title={`With ${candidate.name}`} side={result.with} horizon={horizon} testID="with" />
+            </View>
+            <Body>
+              Days parked {delta(result.delta.daysParked)}, days on your routine {delta(result.delta.daysOnRoutine)}; {result.delta.dailyAh >= 0 ? '+' : ''}
+              {result.delta.dailyAh.toFixed(1)} Ah a day.
+            </Body>
+            {result.warnings.map((w) => (
+              <Small key={w.code} style={{ color: colors.short }}>
+                ▲ {w.message}
+              </Small>
+            ))}
+            {rig.data?.permissions.manageLoads ? (
+              <View style={{ flexDirection: 'row', gap: space.md, flexWrap: 'wrap' }}>
+                <Button
+                  testID="adopt"
+                  label="Adopt it as installed"
+                  busy={adopt.isPending}
+                  onPress={() =>
+                    adopt.mutate({ ...candidate, status: 'installed' }, { onSuccess: () => { setCandidate(null); tryIt.reset(); } })
+                  }
+                />
+                <Button label="Discard" onPress={() => { setCandidate(null); tryIt.reset(); }} />
+              </View>
+            ) : null}
+            {adopt.isError ? <Text role="alert" style={{ ...type.body, color: colors.short }}>{adopt.error.message}</Text> : null}
+          </Card>
+        ) : (
+          <Card>
+            <Small>Enter a device and press “Try it” to see what it does to your days parked. Nothing is saved until you adopt it.</Small>
+            {adopt.isSuccess ? <Text style={{ ...type.body, color: colors.comfortable }}>Adopted: it is now in Loads and in the Outlook.</Text> : null}
+          </Card>
+        )}
+      </View>
+    </View>
+  );
+}
+
+function delta(d: number | null) {
+  if (d === null) return 'unchanged (beyond the horizon)';
+  return `${d >= 0 ? '+' : ''}${d.toFixed(1)}`;
+}
+
+function Side({ title, side, horizon, testID }: { title: string; side: CompareSide; horizon: number; testID?: string }) {
+  return (
+    <View style={styles.side} testID={testID}>
+      <Text style={styles.sideTitle}>{title}</Text>
+      <Text style={styles.big} testID={testID ? `${testID}-days-parked` : undefined}>
+        {formatDays(side.daysParked, horizon)}
+      </Text>
+      <Small>parked</Small>
+      <Text style={styles.mid}>{formatDays(side.daysOnRoutine, horizon)}</Text>
+      <Small>on your routine</Small>
+      <Small>{side.dailyAh.toFixed(1)} Ah a day</Small>
+      <MarginBadge state={side.marginState} />
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  sides: { flexDirection: 'row', gap: space.lg, flexWrap: 'wrap' },
+  side: { flex: 1, minWidth: 140, gap: 2, padding: space.md, borderWidth: 1, borderColor: colors.line, borderRadius: 12 },
+  sideTitle: { ...type.heading, fontSize: 15, color: colors.ink },
+  big: { ...type.title, fontSize: 26, color: colors.night },
+  mid: { ...type.heading, color: colors.night },
+});
