@@ -18,18 +18,18 @@ export const DEMO_PEOPLE = [
 export type DemoPersonKey = (typeof DEMO_PEOPLE)[number]['key'];
 
 export const WREN_LOADS: LoadInput[] = [
-  { name: 'Compressor fridge (40 L)', supply: 'dc', watts: 48, dutyPercent: 35, hoursPerDay: 24, when: 'always' },
-  { name: 'LED strip lights', supply: 'dc', watts: 12, hoursPerDay: 4, startHour: 19, when: 'parked' },
-  { name: 'Roof fan', supply: 'dc', watts: 24, dutyPercent: 60, hoursPerDay: 8, startHour: 22, when: 'parked' },
-  { name: 'Two phones', supply: 'dc', watts: 10, hoursPerDay: 2, startHour: 21, quantity: 2 },
-  { name: 'Laptop', supply: 'ac', watts: 65, dutyPercent: 70, hoursPerDay: 3, startHour: 14, when: 'parked' },
-  { name: 'Diesel heater fan', supply: 'dc', amps: 1.1, hoursPerDay: 6, startHour: 23, when: 'parked' },
+  { name: 'Compressor fridge (40 L)', supply: 'dc', watts: 36, dutyPercent: 30, hoursPerDay: 24, when: 'always' },
+  { name: 'LED strip lights', supply: 'dc', watts: 8, hoursPerDay: 3, startHour: 19, when: 'parked' },
+  { name: 'Roof fan', supply: 'dc', watts: 18, dutyPercent: 40, hoursPerDay: 6, startHour: 22, when: 'parked' },
+  { name: 'Two phones', supply: 'dc', watts: 7.5, hoursPerDay: 1.5, startHour: 21, quantity: 2 },
+  { name: 'Laptop', supply: 'ac', watts: 45, dutyPercent: 60, hoursPerDay: 2, startHour: 14, when: 'parked' },
+  { name: 'Diesel heater fan', supply: 'dc', amps: 0.8, hoursPerDay: 4, startHour: 23, when: 'parked' },
 ];
 
 /** Wren: the five-day lake stay, starting Monday 18:00, with one 40-minute drive on Wednesday. */
 export const WREN: ProjectionInputRaw = {
   systemVoltage: 12,
-  battery: { chemistry: 'agm', capacityAh: 100, healthPercent: 100, temperatureC: 18, startSocPercent: 100, role: 'house' },
+  battery: { chemistry: 'agm', capacityAh: 100, healthPercent: 100, temperatureC: 22, startSocPercent: 100, role: 'house' },
   inverter: { ratedW: 300, efficiencyPercent: 90, idleA: 0.45, control: 'always-on' },
   keyOffDrawA: 0.03,
   loads: WREN_LOADS,

@@ -218,7 +218,7 @@ describe('the demo rigs', () => {
     const p = project(parse(WREN));
     expect(p.margin.state).toBe('short');
     const idle = p.breakdown.find((b) => b.name === 'Inverter idle')!;
-    expect(idle.ahPerDay).toBeCloseTo(0.45 * 21, 0); // 0.45 A in the 21 hours without the laptop
+    expect(idle.ahPerDay).toBeCloseTo(0.45 * 22, 0); // 0.45 A in the 22 hours without the laptop
     const fix = p.fixes.find((f) => f.kind === 'cutoff-switch')!;
     expect(fix.daysGainedParked).toBeGreaterThan(0);
     expect(p.fixes.map((f) => f.kind)).toContain('ignition-relay');

@@ -1,0 +1,150 @@
+import path from 'node:path';
+import type { Browser, Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+
+import { BASE, launchChromium, PHONE, SHOTS, signInAs, WIDE } from './browser';
+
+const MAILDEV = 'http://127.0.0.1:1080';
+
+let browser: Browser;
+beforeAll(async () => {
+  browser = await launchChromium();
+});
+afterAll(async () => {
+  await browser?.close();
+});
+
+async function verifyLink(address: string): Promise<string> {
+  for (let i = 0; i < 50; i++) {
+    const all = (await (await fetch(`${MAILDEV}/api/email`)).json()) as { text: string; to: { address: string }[] }[];
+    const mail = all.find((m) => m.to.some((t) => t.address === address));
+    if (mail) return mail.text.match(/https?:\/\/\S+/g)!.pop()!;
+    await new Promise((r) => setTimeout(r, 100));
+  }
+  throw new Error(`no mail for ${address}`);
+}
+
+async function fill(page: Page, testId: string, value: string) {
+  const input = page.getByTestId(testId);
+  await input.fill(value);
+  await input.blur();
+}
+
+/** The chart is drawn: a canvas is there and its picture is not one flat colour (a flat PNG compresses to a few hundred bytes). */
+async function expectChartDrawn(page: Page) {
+  const chart = page.getByTestId('soc-chart');
+  await chart.locator('canvas').waitFor();
+  await page.waitForTimeout(1000);
+  const png = await chart.screenshot();
+  expect(png.length).toBeGreaterThan(4000);
+}
+
+describe('the rig workspace', () => {
+  it('a new traveller sets up a rig, sees the Outlook with its chart, tries a load, adopts it and sees it counted', async () => {
+    const page = await browser.newPage({ viewport: WIDE });
+    const email = `kestrel-${Date.now()}@example.org`;
+    await page.goto(BASE + '/sign-up');
+    await page.getByTestId('field-name').fill('Rook Traveller');
+    await page.getByTestId('field-email').fill(email);
+    await page.getByTestId('field-password').fill('a-long-enough-password');
+    await page.getByTestId('sign-up-submit').click();
+    await page.getByTestId('check-inbox-screen').waitFor();
+    const link = new URL(await verifyLink(email));
+    await page.goto(BASE + link.pathname + link.search);
+    await page.getByTestId('home-screen').waitFor();
+
+    await page.getByTestId('new-rig').click();
+    await page.getByTestId('new-rig-screen').waitFor();
+    await page.getByTestId('field-name').fill('Kestrel');
+    await page.getByTestId('field-vehicle').fill('High-top van');
+    await page.getByTestId('create-rig').click();
+    await page.getByTestId('outlook-screen').waitFor();
+    await expectChartDrawn(page);
+
+    // A fridge, so there is something to drain.
+    await page.getByTestId('tab-Loads').click();
+    await page.getByTestId('add-load').click();
+    await fill(page, 'field-name', 'Fridge');
+    await fill(page, 'field-watts', '40');
+    await fill(page, 'field-hoursPerDay', '24');
+    await fill(page, 'field-dutyPercent', '35');
+    await page.getByTestId('load-submit').click();
+    await page.getByTestId('load-Fridge').waitFor();
+
+    await page.getByTestId('tab-Try a load').click();
+    await page.getByTestId('try-screen').waitFor();
+    await fill(page, 'field-name', 'Coffee grinder');
+    await page.getByTestId('field-supply-ac').click();
+    await fill(page, 'field-watts', '150');
+    await fill(page, 'field-hoursPerDay', '1');
+    await page.getByTestId('load-submit').click();
+    await page.getByTestId('try-result').waitFor();
+    const days = async (id: string) => parseFloat((await page.getByTestId(id).textContent())!);
+    const before = await page.locator('[data-testid="try-result"] >> text=parked').count();
+    expect(before).toBeGreaterThan(0);
+    const withDays = await days('with-days-parked');
+    const nowText = await page.getByTestId('try-result').textContent();
+    expect(nowText).toMatch(/Days parked -\d/);
+    await page.screenshot({ path: path.join(SHOTS, 'try-a-load-wide.png'), fullPage: true });
+    await page.getByTestId('adopt').click();
+    await page.getByText('Adopted: it is now in Loads and in the Outlook.').waitFor();
+
+    await page.getByTestId('tab-Outlook').click();
+    await page.getByTestId('drains').getByText('Coffee grinder').waitFor();
+    expect(parseFloat((await page.getByTestId('figure-days-parked').textContent())!)).toBeCloseTo(withDays, 0);
+    await page.screenshot({ path: path.join(SHOTS, 'outlook-new-rig-wide.png'), fullPage: true });
+    await page.close();
+  });
+
+  it("shows a member's own loads under their filter, on the same rig", async () => {
+    const page = await browser.newPage({ viewport: PHONE });
+    await signInAs(page, 'tobi@example.org');
+    await page.getByTestId('open-Wren').click();
+    await page.getByTestId('outlook-screen').waitFor();
+    await expectChartDrawn(page);
+    await page.screenshot({ path: path.join(SHOTS, 'outlook-phone.png'), fullPage: true });
+    await page.getByTestId('tab-Loads').click();
+    await page.getByTestId('filter-Tobi Halloran-Okafor').click();
+    await page.getByTestId('load-Laptop').waitFor();
+    expect(await page.getByTestId('load-Roof fan').count()).toBe(0);
+    expect(await page.getByTestId('add-load').count()).toBe(1);
+    await page.screenshot({ path: path.join(SHOTS, 'loads-phone.png'), fullPage: true });
+    await page.getByTestId('tab-Try a load').click();
+    await page.getByTestId('try-screen').waitFor();
+    await page.screenshot({ path: path.join(SHOTS, 'try-a-load-phone.png'), fullPage: true });
+    await page.close();
+  });
+
+  it('lets the advisor read everything of Wren with no edit controls', async () => {
+    const page = await browser.newPage({ viewport: WIDE });
+    await signInAs(page, 'marguerite@example.org');
+    await page.getByTestId('open-Wren').click();
+    await page.getByTestId('fixes').waitFor();
+    await page.screenshot({ path: path.join(SHOTS, 'outlook-wide.png'), fullPage: true });
+    await page.getByTestId('tab-Loads').click();
+    await page.getByTestId('load-Roof fan').waitFor();
+    expect(await page.getByTestId('add-load').count()).toBe(0);
+    expect(await page.getByTestId('delete-Roof fan').count()).toBe(0);
+    await page.screenshot({ path: path.join(SHOTS, 'loads-wide.png'), fullPage: true });
+    await page.getByTestId('tab-Power').click();
+    await page.getByTestId('power-screen').waitFor();
+    expect(await page.getByTestId('power-save').count()).toBe(0);
+    await page.close();
+  });
+
+  it('shows a clear message beside a bad load field and saves nothing', async () => {
+    const page = await browser.newPage({ viewport: PHONE });
+    await signInAs(page, 'ines@example.org');
+    await page.getByTestId('open-Stoat').click();
+    await page.getByTestId('tab-Loads').click();
+    await page.getByTestId('add-load').click();
+    await fill(page, 'field-name', 'Space heater');
+    await fill(page, 'field-watts', '100000');
+    await page.getByTestId('load-submit').click();
+    await page.getByText('At most 10,000.').first().waitFor();
+    await fill(page, 'field-watts', 'abc');
+    await page.getByText('Enter a number.').first().waitFor();
+    expect(await page.getByTestId('load-Space heater').count()).toBe(0);
+    await page.close();
+  });
+});
