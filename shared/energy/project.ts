@@ -153,6 +153,7 @@ export function project(input: ProjectionInput, options: { fixes?: boolean } = {
     horizonDays: input.horizonDays,
     cutoffSocPercent: r.cutoffSoc,
     assumptions: {
+      systemVoltage: r.systemVoltage,
       usableAh: round(r.usableAh, 2),
       temperatureFactor: round(r.temperatureFactor, 3),
       peukertExponent: r.peukertExponent,

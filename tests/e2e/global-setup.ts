@@ -6,7 +6,7 @@ let server: ChildProcess | undefined;
 
 export async function setup() {
   server = spawn('node_modules/.bin/tsx', ['server/index.ts'], {
-    env: { ...process.env, NODE_ENV: 'production', PORT: String(E2E_PORT), LOG_LEVEL: 'warn', KEYOFF_URL: `http://127.0.0.1:${E2E_PORT}` },
+    env: { ...process.env, NODE_ENV: 'production', PORT: String(E2E_PORT), LOG_LEVEL: 'warn', KEYOFF_URL: `http://127.0.0.1:${E2E_PORT}`, SIGN_IN_LIMIT_PER_MINUTE: '1000' },
     stdio: ['ignore', 'inherit', 'inherit'],
   });
   const deadline = Date.now() + 30_000;

@@ -92,7 +92,15 @@ describe('the rig workspace', () => {
     await page.getByTestId('tab-Outlook').click();
     await page.getByTestId('drains').getByText('Coffee grinder').waitFor();
     expect(parseFloat((await page.getByTestId('figure-days-parked').textContent())!)).toBeCloseTo(withDays, 0);
+    // The guided form's ticked common loads are there too.
+    await page.getByTestId('drains').getByText('Compressor fridge').waitFor();
     await page.screenshot({ path: path.join(SHOTS, 'outlook-new-rig-wide.png'), fullPage: true });
+
+    // Deleting asks first, then the rig is gone.
+    await page.getByTestId('tab-Power').click();
+    await page.getByTestId('delete-rig').click();
+    await page.getByTestId('confirm-delete-rig').click();
+    await page.getByTestId('rigs-empty').waitFor();
     await page.close();
   });
 
@@ -109,6 +117,13 @@ describe('the rig workspace', () => {
     expect(await page.getByTestId('load-Roof fan').count()).toBe(0);
     expect(await page.getByTestId('add-load').count()).toBe(1);
     await page.screenshot({ path: path.join(SHOTS, 'loads-phone.png'), fullPage: true });
+    // Units by the setting: watt-hours instead of amp-hours.
+    expect(await page.getByTestId('load-Laptop').textContent()).toMatch(/Ah/);
+    await page.goto(BASE + '/settings');
+    await page.getByTestId('unit-energy-Wh').click();
+    await page.goBack();
+    await page.getByTestId('load-Laptop').waitFor();
+    expect(await page.getByTestId('load-Laptop').textContent()).toMatch(/Wh/);
     await page.getByTestId('tab-Try a load').click();
     await page.getByTestId('try-screen').waitFor();
     await page.screenshot({ path: path.join(SHOTS, 'try-a-load-phone.png'), fullPage: true });

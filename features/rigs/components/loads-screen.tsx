@@ -2,6 +2,7 @@ import { useMemo, useState } from 'react';
 import { ActivityIndicator, Pressable, ScrollView, StyleSheet, Text, View } from 'react-native';
 
 import { Body, Button, Card, Heading, Small } from '@/components/ui';
+import { formatEnergy, formatPower, useUnits } from '@/components/units';
 import { useIsWide } from '@/components/use-layout';
 import { loadRunningCurrentA } from '@/shared/energy/profile';
 import type { Load } from '@/shared/schemas/projection';
@@ -14,10 +15,10 @@ const COLUMNS: { key: SortKey; label: string; width: number }[] = [
   { key: 'name', label: 'Load', width: 170 },
   { key: 'member', label: 'Added by', width: 110 },
   { key: 'supply', label: 'Supply', width: 60 },
-  { key: 'watts', label: 'W / A', width: 70 },
+  { key: 'watts', label: 'Draw', width: 70 },
   { key: 'hours', label: 'h/day', width: 60 },
   { key: 'duty', label: 'Duty', width: 60 },
-  { key: 'ah', label: 'Ah/day', width: 70 },
+  { key: 'ah', label: 'Per day', width: 70 },
   { key: 'share', label: 'Share', width: 60 },
 ];
 
@@ -26,6 +27,7 @@ export function LoadsScreen({ rigId }: { rigId: string }) {
   const rig = useRigQuery(rigId);
   const outlook = useOutlookQuery(rigId);
   const wide = useIsWide();
+  const { units } = useUnits();
   const [sort, setSort] = useState<{ key: SortKey; desc: boolean }>({ key: 'ah', desc: true });
   const [member, setMember] = useState<string | null>(null);
   const [editing, setEditing] = useState<SavedLoad | 'new' | null>(null);
@@ -53,6 +55,7 @@ export function LoadsScreen({ rigId }: { rigId: string }) {
 
   if (rig.isPending) return <ActivityIndicator color={colors.night} />;
   if (rig.isError) return <Body style={{ color: colors.short }}>{rig.error.message}</Body>;
+  const V = rig.data.power.systemVoltage;
   const canEdit = rig.data.permissions.manageLoads;
   const members = [...new Map(rig.data.loads.filter((l) => l.addedBy).map((l) => [l.addedBy!.id, l.addedBy!.name])).entries()];
   const maxWatts = rig.data.power.systemVoltage * 400;
@@ -101,10 +104,10 @@ export function LoadsScreen({ rigId }: { rigId: string }) {
                 <Text style={[styles.td, { width: 170 }]}>{load.quantity > 1 ? `${load.name} ×${load.quantity}` : load.name}</Text>
                 <Text style={[styles.td, { width: 110 }]}>{load.addedBy?.name.split(' ')[0] ?? '—'}</Text>
                 <Text style={[styles.td, { width: 60 }]}>{load.supply.toUpperCase()}</Text>
-                <Text style={[styles.td, { width: 70 }]}>{load.watts !== undefined ? `${load.watts} W` : `${amps.toFixed(1)} A`}</Text>
+                <Text style={[styles.td, { width: 70 }]}>{formatPower((load.watts ?? amps * V) * load.quantity, amps, units)}</Text>
                 <Text style={[styles.td, { width: 60 }]}>{load.hoursPerDay}</Text>
                 <Text style={[styles.td, { width: 60 }]}>{load.dutyPercent} %</Text>
-                <Text style={[styles.td, { width: 70 }]}>{ah.toFixed(1)}</Text>
+                <Text style={[styles.td, { width: 70 }]}>{formatEnergy(ah, units, V)}</Text>
                 <Text style={[styles.td, { width: 60 }]}>{Math.round(share * 100)} %</Text>
                 {canEdit ? (
                   <View style={[styles.actions, { width: 150 }]}>
@@ -136,7 +139,7 @@ export function LoadsScreen({ rigId }: { rigId: string }) {
         {rows.length === 0 ? <Small>No loads{member ? ' added by this member' : ''} yet.</Small> : null}
         {outlook.data ? (
           <Small>
-            Standby: inverter idle {outlook.data.standby.inverterIdleAh.toFixed(1)} Ah/day, key-off draw {outlook.data.standby.keyOffAh.toFixed(1)}, self-discharge {outlook.data.standby.selfDischargeAh.toFixed(1)}.
+            Standby a day: inverter idle {formatEnergy(outlook.data.standby.inverterIdleAh, units, V)}, key-off draw {formatEnergy(outlook.data.standby.keyOffAh, units, V)}, self-discharge {formatEnergy(outlook.data.standby.selfDischargeAh, units, V)}.
           </Small>
         ) : null}
       </Card>

@@ -1,7 +1,7 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
 import { useState } from 'react';
-import { Switch, Text, View } from 'react-native';
+import { Pressable, Switch, Text, View } from 'react-native';
 
 import { ChoiceField, NumberField } from '@/components/form';
 import { TextField } from '@/components/text-field';
@@ -9,6 +9,7 @@ import { Body, Button, Card, Heading, Title } from '@/components/ui';
 import { type RigCreateForm, type RigCreateInput, rigCreateSchema } from '@/shared/schemas/rig';
 import { colors, space, type } from '@/shared/theme';
 import { useRigCreateMutation } from '../api/create-rig';
+import { COMMON_LOADS } from '../utils/common-loads';
 
 const INVERTER = { ratedW: 300, idleA: 0.5, control: 'always-on' } as const;
 
@@ -30,11 +31,16 @@ export function NewRigScreen({ onCreated }: { onCreated: (rigId: string) => void
   const create = useRigCreateMutation();
   const form = useForm<RigCreateForm, unknown, RigCreateInput>({ defaultValues: defaults, mode: 'onTouched', resolver: zodResolver(rigCreateSchema) });
   const [hasInverter, setHasInverter] = useState(true);
+  const [ticked, setTicked] = useState<Set<string>>(new Set(['fridge', 'lights', 'phones']));
+  const tick = (key: string) => setTicked((t) => new Set(t.has(key) ? [...t].filter((k) => k !== key) : [...t, key]));
   const toggleInverter = (on: boolean) => {
     setHasInverter(on);
     form.setValue('power.inverter', on ? INVERTER : null);
   };
-  const onSubmit = form.handleSubmit((values) => create.mutate(values, { onSuccess: (r) => onCreated(r.id) }));
+  const onSubmit = form.handleSubmit((values) => {
+    const loads = COMMON_LOADS.filter((c) => ticked.has(c.key) && (hasInverter || c.load.supply === 'dc')).map((c) => c.load);
+    create.mutate({ ...values, loads }, { onSuccess: (r) => onCreated(r.id) });
+  });
   return (
     <View style={{ gap: space.lg }} testID="new-rig-screen">
       <Title>New rig</Title>
@@ -88,6 +94,23 @@ export function NewRigScreen({ onCreated }: { onCreated: (rigId: string) => void
         <Heading>Charging and stay</Heading>
         <NumberField control={form.control} name="power.charging.alternatorA" label="Alternator charge current" unit="A" hint="Through a relay or a DC-DC charger." />
         <NumberField control={form.control} name="power.plannedStayDays" label="Planned stay" unit="days" />
+      </Card>
+      <Card>
+        <Heading>Common loads</Heading>
+        <Body>Tick what you use; you can change each one in Loads.</Body>
+        {COMMON_LOADS.map((c) => {
+          const on = ticked.has(c.key);
+          const needsInverter = c.load.supply === 'ac' && !hasInverter;
+          return (
+            <Pressable key={c.key} role="checkbox" aria-checked={on} aria-disabled={needsInverter} disabled={needsInverter} onPress={() => tick(c.key)} testID={`tick-${c.key}`} style={{ flexDirection: 'row', gap: space.sm, alignItems: 'center', opacity: needsInverter ? 0.5 : 1 }}>
+              <Text style={{ ...type.heading, color: on ? colors.night : colors.inkSoft, width: 22 }}>{on ? '☑' : '☐'}</Text>
+              <Text style={{ ...type.body, color: colors.ink, flex: 1 }}>
+                {c.label}
+                {needsInverter ? ' (needs an inverter)' : ''}
+              </Text>
+            </Pressable>
+          );
+        })}
       </Card>
       {create.isError ? (
         <Text role="alert" style={{ ...type.body, color: colors.short }}>

@@ -3,6 +3,7 @@ import { ActivityIndicator, StyleSheet, Text, View } from 'react-native';
 import { formatDays } from '@/components/format';
 import { MarginBadge } from '@/components/margin-badge';
 import { Body, Button, Card, Heading, Small } from '@/components/ui';
+import { formatEnergy, useUnits } from '@/components/units';
 import { useIsWide } from '@/components/use-layout';
 import { colors, radius, space, type } from '@/shared/theme';
 import { type Outlook, useOutlookQuery } from '../api/rig';
@@ -83,13 +84,15 @@ function Figure({ label, value, hint, testID }: { label: string; value: string; 
 }
 
 function Drains({ outlook }: { outlook: Outlook }) {
+  const { units } = useUnits();
+  const V = outlook.assumptions.systemVoltage as number | undefined;
   const top = outlook.breakdown.slice(0, 8);
   const max = Math.max(...top.map((b) => b.ahPerDay), 0.001);
   return (
     <Card testID="drains">
       <Heading>Biggest drains</Heading>
       <Small>
-        {outlook.daily.consumptionAh.toFixed(1)} Ah a day used, {outlook.daily.chargeAh.toFixed(1)} Ah put back.
+        {formatEnergy(outlook.daily.consumptionAh, units, V)} a day used, {formatEnergy(outlook.daily.chargeAh, units, V)} put back.
       </Small>
       {top.map((b) => (
         <View key={b.name} style={{ gap: 2 }}>
@@ -99,7 +102,7 @@ function Drains({ outlook }: { outlook: Outlook }) {
               {b.kind === 'standby' ? ' (standby)' : ''}
             </Text>
             <Text style={styles.drainValue}>
-              {b.ahPerDay.toFixed(1)} Ah/day · {Math.round(b.share * 100)} %
+              {formatEnergy(b.ahPerDay, units, V)}/day · {Math.round(b.share * 100)} %
             </Text>
           </View>
           <View style={styles.barTrack}>

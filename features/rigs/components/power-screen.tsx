@@ -1,15 +1,18 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
-import { useForm } from 'react-hook-form';
+import { useForm, useWatch } from 'react-hook-form';
 import { ActivityIndicator, Switch, Text, View } from 'react-native';
 
 import { ChoiceField, NumberField } from '@/components/form';
 import { Body, Button, Card, Heading, Small } from '@/components/ui';
+import { cToF, useUnits } from '@/components/units';
 import { useIsWide } from '@/components/use-layout';
 import { ApiError } from '@/lib/api-client';
 import { type RigPower, type RigPowerInput, rigPowerSchema } from '@/shared/schemas/projection';
 import { colors, space, type } from '@/shared/theme';
-import { type Rig, useRigQuery, useRigUpdateMutation } from '../api/rig';
+import { useRouter } from 'expo-router';
+
+import { type Rig, useRigDeleteMutation, useRigQuery, useRigUpdateMutation } from '../api/rig';
 
 const DAYS = ['Mon', 'Tue', 'Wed', 'Thu', 'Fri', 'Sat', 'Sun'];
 const INVERTER = { ratedW: 300, efficiencyPercent: 90, idleA: 0.5, control: 'always-on' } as const;
@@ -24,6 +27,7 @@ export function PowerScreen({ rigId }: { rigId: string }) {
 
 function PowerForm({ rig }: { rig: Rig }) {
   const wide = useIsWide();
+  const { units } = useUnits();
   const update = useRigUpdateMutation(rig.id);
   const readOnly = !rig.permissions.edit;
   const form = useForm<RigPowerInput, unknown, RigPower>({ resolver: zodResolver(rigPowerSchema), defaultValues: rig.power, mode: 'onTouched' });
@@ -32,6 +36,7 @@ function PowerForm({ rig }: { rig: Rig }) {
     setHasInverter(on);
     form.setValue('inverter', on ? INVERTER : null);
   };
+  const temperature = useWatch({ control: form.control, name: 'battery.temperatureC' });
   const save = form.handleSubmit((power) => update.mutate({ version: rig.version, power }));
   const conflict = update.error instanceof ApiError && update.error.status === 409;
   const col = wide ? { flex: 1 } : undefined;
@@ -44,7 +49,13 @@ function PowerForm({ rig }: { rig: Rig }) {
           <ChoiceField control={form.control} name="battery.chemistry" label="Chemistry" options={[{ value: 'flooded', label: 'Flooded' }, { value: 'agm', label: 'AGM' }, { value: 'gel', label: 'Gel' }, { value: 'lifepo4', label: 'LiFePO4' }]} />
           <NumberField control={form.control} name="battery.capacityAh" label="Capacity (20-hour rate)" unit="Ah" />
           <NumberField control={form.control} name="battery.healthPercent" label="Health" unit="%" hint="An older battery holds less: 80 % after a few years is common." />
-          <NumberField control={form.control} name="battery.temperatureC" label="Battery temperature" unit="°C" />
+          <NumberField
+            control={form.control}
+            name="battery.temperatureC"
+            label="Battery temperature"
+            unit="°C"
+            hint={units.temperature === 'F' ? `${cToF(Number(temperature) || 0)} °F. Cold batteries hold less.` : 'Cold batteries hold less: about 75 % of their capacity at 0 °C.'}
+          />
           <NumberField control={form.control} name="battery.startSocPercent" label="Charge at the start" unit="%" />
           <ChoiceField control={form.control} name="battery.role" label="Battery" options={[{ value: 'house', label: 'House battery' }, { value: 'starter', label: 'Starting battery' }]} />
           <NumberField control={form.control} name="systemVoltage" label="System voltage" unit="V" />
@@ -101,6 +112,28 @@ function PowerForm({ rig }: { rig: Rig }) {
       ) : null}
       {update.isSuccess ? <Text style={{ ...type.body, color: colors.comfortable }}>Saved. The Outlook is updated.</Text> : null}
       {!readOnly ? <Button testID="power-save" label="Save the power system" onPress={save} busy={update.isPending} /> : null}
+      {rig.permissions.delete ? <DeleteRig rig={rig} /> : null}
     </View>
+  );
+}
+
+function DeleteRig({ rig }: { rig: Rig }) {
+  const [asking, setAsking] = useState(false);
+  const remove = useRigDeleteMutation(rig.id);
+  const router = useRouter();
+  return (
+    <Card>
+      <Heading>Delete this rig</Heading>
+      <Small>Deletes {rig.name} with all its loads for everyone in the household. This cannot be undone.</Small>
+      {asking ? (
+        <View style={{ flexDirection: 'row', gap: space.md, flexWrap: 'wrap' }}>
+          <Button testID="confirm-delete-rig" label={`Yes, delete ${rig.name}`} onPress={() => remove.mutate(undefined, { onSuccess: () => router.replace('/') })} busy={remove.isPending} />
+          <Button label="Keep it" onPress={() => setAsking(false)} />
+        </View>
+      ) : (
+        <Button testID="delete-rig" label="Delete rig…" onPress={() => setAsking(true)} />
+      )}
+      {remove.isError ? <Text role="alert" style={{ ...type.body, color: colors.short }}>{remove.error.message}</Text> : null}
+    </Card>
   );
 }

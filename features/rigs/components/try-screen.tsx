@@ -4,6 +4,7 @@ import { StyleSheet, Text, View } from 'react-native';
 import { formatDays } from '@/components/format';
 import { MarginBadge } from '@/components/margin-badge';
 import { Body, Button, Card, Heading, Small } from '@/components/ui';
+import { formatEnergy, useUnits } from '@/components/units';
 import { useIsWide } from '@/components/use-layout';
 import type { CompareSide } from '@/shared/energy/project';
 import type { Load } from '@/shared/schemas/projection';
@@ -15,10 +16,12 @@ import { EMPTY_LOAD, LoadForm } from './load-form';
 export function TryScreen({ rigId }: { rigId: string }) {
   const rig = useRigQuery(rigId);
   const wide = useIsWide();
+  const { units } = useUnits();
   const tryIt = useTryLoadsMutation(rigId);
   const adopt = useLoadCreateMutation(rigId);
   const [candidate, setCandidate] = useState<Load | null>(null);
   const horizon = rig.data?.power.horizonDays ?? 14;
+  const V = rig.data?.power.systemVoltage ?? 12;
   const result = tryIt.data;
   return (
     <View style={[{ gap: space.lg }, wide && { flexDirection: 'row', alignItems: 'flex-start' }]} testID="try-screen">
@@ -46,7 +49,7 @@ export function TryScreen({ rigId }: { rigId: string }) {
             </View>
             <Body>
               Days parked {delta(result.delta.daysParked)}, days on your routine {delta(result.delta.daysOnRoutine)}; {result.delta.dailyAh >= 0 ? '+' : ''}
-              {result.delta.dailyAh.toFixed(1)} Ah a day.
+              {formatEnergy(result.delta.dailyAh, units, V)} a day.
             </Body>
             {result.warnings.map((w) => (
               <Small key={w.code} style={{ color: colors.short }}>
@@ -94,7 +97,7 @@ function Side({ title, side, horizon, testID }: { title: string; side: CompareSi
       <Small>parked</Small>
       <Text style={styles.mid}>{formatDays(side.daysOnRoutine, horizon)}</Text>
       <Small>on your routine</Small>
-      <Small>{side.dailyAh.toFixed(1)} Ah a day</Small>
+      <Small>{formatEnergy(side.dailyAh, useUnits().units)} a day</Small>
       <MarginBadge state={side.marginState} />
     </View>
   );

@@ -11,6 +11,7 @@ const mark = require('@/assets/images/mark.png');
 const destinations: { href: Href; label: string }[] = [
   { href: '/', label: 'Rigs' },
   { href: '/cable-runs', label: 'Cable runs' },
+  { href: '/settings', label: 'Settings' },
 ];
 
 /** Phone first: a top bar and a bottom bar; from WIDE_BREAKPOINT a side rail beside the content. */

@@ -1,0 +1,5 @@
+import { SettingsScreen } from '@/features/settings/components/settings-screen';
+
+export default function Settings() {
+  return <SettingsScreen />;
+}
