@@ -75,6 +75,28 @@ export interface LoadTable {
   updated_at: Timestamp;
 }
 
+export interface CableRunTable {
+  id: Generated<string>;
+  rig_id: string;
+  load_id: string | null;
+  created_by: string | null;
+  label: string;
+  from_point: string;
+  to_point: string;
+  length_m: number;
+  current_a: number | null;
+  max_drop_percent: number;
+  insulation_c: number;
+  engine_space: boolean;
+  return_path: 'cable' | 'chassis';
+  continuous: boolean;
+  purpose: 'general' | 'inverter';
+  existing_awg: string | null;
+  existing_mm2: number | null;
+  created_at: Timestamp;
+  updated_at: Timestamp;
+}
+
 export interface Database {
   user: UserTable;
   organization: OrganizationTable;
@@ -82,6 +104,7 @@ export interface Database {
   invitation: InvitationTable;
   rigs: RigTable;
   loads: LoadTable;
+  cable_runs: CableRunTable;
 }
 
 export type RigRow = Selectable<RigTable>;

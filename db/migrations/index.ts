@@ -1,8 +1,10 @@
 import type { Migration } from 'kysely';
 
 import * as m001 from './2026-12-01-001-rigs-loads';
+import * as m002 from './2026-12-01-002-cable-runs';
 
 // A static provider: file discovery fails under vitest, an explicit list works everywhere.
 export const migrations: Record<string, Migration> = {
   '2026-12-01-001-rigs-loads': m001,
+  '2026-12-01-002-cable-runs': m002,
 };

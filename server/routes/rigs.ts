@@ -2,6 +2,7 @@ import { Router } from 'express';
 import { fromNodeHeaders } from 'better-auth/node';
 
 import { invitationCreateSchema, invitationParamsSchema, memberParamsSchema, memberRoleSchema } from '@/shared/schemas/people';
+import { cableRunParamsSchema, cableRunSchema } from '@/shared/schemas/cable-run';
 import { loadSchema } from '@/shared/schemas/projection';
 import { loadParamsSchema, rigCreateSchema, rigUpdateSchema, tryLoadsSchema } from '@/shared/schemas/rig';
 import type { AppContext } from '../context';
@@ -9,6 +10,7 @@ import { rigAccess, rigOf } from '../middleware/rig-access';
 import { session } from '../middleware/session';
 import { parsed, validate } from '../middleware/validate';
 import * as people from '../services/people';
+import * as cableRuns from '../services/cable-runs';
 import * as rigs from '../services/rigs';
 
 /** /api/rigs: every route below runs after requireSession (app.ts) and one rigAccess check. */
@@ -56,6 +58,23 @@ export function rigsRouter({ db, auth }: AppContext) {
 
   router.delete('/:rigId/loads/:loadId', rigAccess(db, { load: ['delete'] }), validate(loadParamsSchema, 'params'), async (_req, res) => {
     await rigs.removeLoad(db, rigOf(res).id, parsed(res, loadParamsSchema, 'params').loadId);
+    res.status(204).end();
+  });
+
+  router.get('/:rigId/cable-runs', rigAccess(db, { rig: ['read'] }), async (_req, res) => {
+    res.json({ cableRuns: await cableRuns.cableRunsOf(db, rigOf(res)) });
+  });
+
+  router.post('/:rigId/cable-runs', rigAccess(db, { cableRun: ['create'] }), validate(cableRunSchema), async (_req, res) => {
+    res.status(201).json(await cableRuns.addCableRun(db, rigOf(res), session(res).user.id, parsed(res, cableRunSchema)));
+  });
+
+  router.patch('/:rigId/cable-runs/:runId', rigAccess(db, { cableRun: ['update'] }), validate(cableRunParamsSchema, 'params'), validate(cableRunSchema), async (_req, res) => {
+    res.json(await cableRuns.editCableRun(db, rigOf(res), parsed(res, cableRunParamsSchema, 'params').runId, parsed(res, cableRunSchema)));
+  });
+
+  router.delete('/:rigId/cable-runs/:runId', rigAccess(db, { cableRun: ['delete'] }), validate(cableRunParamsSchema, 'params'), async (_req, res) => {
+    await cableRuns.removeCableRun(db, rigOf(res), parsed(res, cableRunParamsSchema, 'params').runId);
     res.status(204).end();
   });
 

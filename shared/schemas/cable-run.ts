@@ -20,3 +20,31 @@ export const cableRunSizeSchema = z.object({
 
 export type CableRunSizeInput = z.infer<typeof cableRunSizeSchema>;
 export type CableRunSizeForm = z.input<typeof cableRunSizeSchema>;
+
+/** A saved cable run on a rig: its own current, or the current of one of the rig's loads. */
+export const cableRunSchema = z
+  .strictObject({
+    label: z.string().trim().min(1, 'Name the run.').max(80),
+    from: z.string().trim().max(80).default('Battery'),
+    to: z.string().trim().max(80).default(''),
+    lengthM: cableRunSizeSchema.shape.lengthM,
+    currentA: cableRunSizeSchema.shape.currentA.optional(),
+    loadId: z.uuid().optional(),
+    maxDropPercent: cableRunSizeSchema.shape.maxDropPercent,
+    insulationC: cableRunSizeSchema.shape.insulationC,
+    engineSpace: z.boolean().default(false),
+    returnPath: z.enum(['cable', 'chassis']).default('cable'),
+    continuous: z.boolean().default(false),
+    purpose: z.enum(['general', 'inverter']).default('general'),
+    /** The wire already fitted, if any, to check against the size the run needs. */
+    existingAwg: z.enum(['18', '16', '14', '12', '10', '8', '6', '4', '2', '1', '1/0', '2/0', '3/0', '4/0']).optional(),
+    existingMm2: z.literal([1.5, 2.5, 4, 6, 10, 16, 25, 35, 50, 70, 95], 'Choose a standard size.').optional(),
+  })
+  .superRefine((run, ctx) => {
+    if ((run.currentA === undefined) === (run.loadId === undefined)) {
+      ctx.addIssue({ code: 'custom', path: ['currentA'], message: 'Give the current, or link the run to a load (not both).' });
+    }
+  });
+export type CableRunInput = z.infer<typeof cableRunSchema>;
+export type CableRunForm = z.input<typeof cableRunSchema>;
+export const cableRunParamsSchema = z.object({ rigId: z.uuid(), runId: z.uuid() });

@@ -66,6 +66,11 @@ async function throwawayLoad() {
   const res = await fx.agents.owner.post(`/api/rigs/${fx.rigId}/loads`).set('Origin', TEST_ORIGIN).send(LOAD);
   return res.body.id as string;
 }
+async function throwawayRun() {
+  const res = await fx.agents.owner.post(`/api/rigs/${fx.rigId}/cable-runs`).set('Origin', TEST_ORIGIN).send(RUN);
+  return res.body.id as string;
+}
+const RUN = { label: 'Fridge feed', to: 'Fridge', lengthM: 3, currentA: 5, maxDropPercent: 3, insulationC: 105 };
 const currentVersion = async () => (await fx.agents.owner.get(`/api/rigs/${fx.rigId}`)).body.version as number;
 const LOAD = { name: 'Fan', supply: 'dc', watts: 20, hoursPerDay: 4 };
 const editRole = (ok: number) => ({ anonymous: 401, outsider: 404, advisor: 403, member: ok, owner: ok, admin: 404 });
@@ -88,6 +93,16 @@ const MATRIX: Record<string, Entry> = {
     expect: { ...all(201), anonymous: 401 },
   },
   'GET /api/rigs/:rigId': { send: (a, c) => a.get(`/api/rigs/${c.rigId}`), expect: readRig },
+  'GET /api/rigs/:rigId/cable-runs': { send: (a, c) => a.get(`/api/rigs/${c.rigId}/cable-runs`), expect: readRig },
+  'POST /api/rigs/:rigId/cable-runs': { send: (a, c) => a.post(`/api/rigs/${c.rigId}/cable-runs`).set('Origin', TEST_ORIGIN).send(RUN), expect: editRole(201) },
+  'PATCH /api/rigs/:rigId/cable-runs/:runId': {
+    send: async (a, c) => a.patch(`/api/rigs/${c.rigId}/cable-runs/${await throwawayRun()}`).set('Origin', TEST_ORIGIN).send({ ...RUN, lengthM: 4 }),
+    expect: editRole(200),
+  },
+  'DELETE /api/rigs/:rigId/cable-runs/:runId': {
+    send: async (a, c) => a.delete(`/api/rigs/${c.rigId}/cable-runs/${await throwawayRun()}`).set('Origin', TEST_ORIGIN),
+    expect: editRole(204),
+  },
   'GET /api/rigs/:rigId/people': { send: (a, c) => a.get(`/api/rigs/${c.rigId}/people`), expect: readRig },
   'PATCH /api/rigs/:rigId': {
     send: async (a, c) => a.patch(`/api/rigs/${c.rigId}`).set('Origin', TEST_ORIGIN).send({ version: await currentVersion(), vehicle: 'Matrix van' }),

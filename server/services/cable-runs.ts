@@ -1,0 +1,114 @@
+import type { Db } from '@/db/client';
+import type { CableRunTable } from '@/db/schema';
+import type { Selectable } from 'kysely';
+import { loadRunningCurrentA } from '@/shared/energy/profile';
+import { AWG_SIZES, type Awg, MM2_SIZES, NoConductorError, sizeCableRun } from '@/shared/energy/wiring';
+import type { CableRunInput } from '@/shared/schemas/cable-run';
+import { cableRunSizeSchema } from '@/shared/schemas/cable-run';
+import { HttpError } from '../errors';
+import { deleteCableRun, insertCableRun, listCableRuns, updateCableRun } from '../repositories/cable-runs';
+import type { RigAccess } from '../middleware/rig-access';
+import { readRig } from './rigs';
+
+type Row = Selectable<CableRunTable>;
+
+function toRow(run: CableRunInput) {
+  return {
+    label: run.label,
+    from_point: run.from,
+    to_point: run.to,
+    length_m: run.lengthM,
+    current_a: run.currentA ?? null,
+    load_id: run.loadId ?? null,
+    max_drop_percent: run.maxDropPercent,
+    insulation_c: run.insulationC,
+    engine_space: run.engineSpace,
+    return_path: run.returnPath,
+    continuous: run.continuous,
+    purpose: run.purpose,
+    existing_awg: run.existingAwg ?? null,
+    existing_mm2: run.existingMm2 ?? null,
+  };
+}
+
+/** Every saved run of a rig with its size, drop and protection, and a warning where the fitted wire is too small. */
+export async function cableRunsOf(db: Db, rig: RigAccess) {
+  const dto = await readRig(db, rig);
+  const V = dto.power.systemVoltage;
+  const eff = (dto.power.inverter?.efficiencyPercent ?? 90) / 100;
+  const rows = await listCableRuns(db, rig.id);
+  return rows.map((row) => describe(row, V, eff, dto.loads));
+}
+
+function describe(row: Row, V: number, eff: number, loads: Awaited<ReturnType<typeof readRig>>['loads']) {
+  const load = row.load_id ? loads.find((l) => l.id === row.load_id) : undefined;
+  const currentA = row.current_a ?? (load ? loadRunningCurrentA(load, V, eff) : 0);
+  const base = {
+    id: row.id,
+    label: row.label,
+    from: row.from_point,
+    to: row.to_point,
+    lengthM: row.length_m,
+    currentA: Math.round(currentA * 100) / 100,
+    currentFrom: row.current_a !== null ? ('entered' as const) : load ? ('load' as const) : ('missing' as const),
+    loadId: row.load_id,
+    loadName: load?.name ?? null,
+    maxDropPercent: row.max_drop_percent,
+    insulationC: row.insulation_c,
+    engineSpace: row.engine_space,
+    returnPath: row.return_path,
+    continuous: row.continuous,
+    purpose: row.purpose,
+    existingAwg: row.existing_awg,
+    existingMm2: row.existing_mm2,
+  };
+  if (currentA <= 0) return { ...base, sizing: null, warnings: ['The linked load was deleted: give the run its current.'] };
+  const input = cableRunSizeSchema.parse({
+    systemVoltage: V,
+    currentA,
+    lengthM: row.length_m,
+    maxDropPercent: row.max_drop_percent,
+    insulationC: row.insulation_c,
+    engineSpace: row.engine_space,
+    returnPath: row.return_path,
+    continuous: row.continuous,
+    purpose: row.purpose,
+  });
+  try {
+    const sizing = sizeCableRun(input);
+    const warnings: string[] = [];
+    if (row.existing_awg && AWG_SIZES.indexOf(row.existing_awg as Awg) < AWG_SIZES.indexOf(sizing.awg)) {
+      warnings.push(`The fitted ${row.existing_awg} AWG is smaller than the ${sizing.awg} AWG this run needs.`);
+    }
+    if (row.existing_mm2 && MM2_SIZES.indexOf(row.existing_mm2 as (typeof MM2_SIZES)[number]) < MM2_SIZES.indexOf(sizing.mm2 as (typeof MM2_SIZES)[number])) {
+      warnings.push(`The fitted ${row.existing_mm2} mm² is smaller than the ${sizing.mm2} mm² this run needs.`);
+    }
+    return { ...base, sizing, warnings };
+  } catch (err) {
+    if (err instanceof NoConductorError) return { ...base, sizing: null, warnings: [err.message] };
+    throw err;
+  }
+}
+
+async function checkLoad(db: Db, rig: RigAccess, run: CableRunInput) {
+  if (!run.loadId) return;
+  const dto = await readRig(db, rig);
+  if (!dto.loads.some((l) => l.id === run.loadId)) throw new HttpError(400, 'validation_failed', 'That load is not on this rig.', [{ path: 'loadId', message: 'Choose one of this rig\'s loads.' }]);
+}
+
+export async function addCableRun(db: Db, rig: RigAccess, userId: string, run: CableRunInput) {
+  await checkLoad(db, rig, run);
+  const row = await insertCableRun(db, rig.id, { ...toRow(run), created_by: userId });
+  return (await cableRunsOf(db, rig)).find((r) => r.id === row.id)!;
+}
+
+export async function editCableRun(db: Db, rig: RigAccess, runId: string, run: CableRunInput) {
+  await checkLoad(db, rig, run);
+  const row = await updateCableRun(db, rig.id, runId, toRow(run));
+  if (!row) throw new HttpError(404, 'not_found', 'No such cable run on this rig.');
+  return (await cableRunsOf(db, rig)).find((r) => r.id === row.id)!;
+}
+
+export async function removeCableRun(db: Db, rig: RigAccess, runId: string) {
+  if (!(await deleteCableRun(db, rig.id, runId))) throw new HttpError(404, 'not_found', 'No such cable run on this rig.');
+}
