@@ -163,3 +163,30 @@ describe('the rig workspace', () => {
     await page.close();
   });
 });
+
+describe('cable runs on a rig', () => {
+  it('adds a run on Wren, flags the fitted wire as too small, and shows the size by the units setting, with the cautions', async () => {
+    const page = await browser.newPage({ viewport: WIDE });
+    await signInAs(page, 'ines@example.org');
+    await page.getByTestId('open-Wren').click();
+    await page.getByTestId('tab-Cable runs').click();
+    await page.getByTestId('rig-cable-runs-screen').waitFor();
+    await page.getByTestId('add-run').click();
+    await fill(page, 'field-label', 'Inverter feed');
+    await fill(page, 'field-to', 'Inverter');
+    await fill(page, 'field-lengthM', '7.62');
+    await fill(page, 'field-currentA', '20');
+    await page.getByTestId('field-existingAwg-10').click();
+    await page.getByTestId('run-submit').click();
+    // 20 A over 25 ft one way at 3 %: 4 AWG (REFERENCES.md, NEC Table 8 worked example).
+    await expect.poll(() => page.getByTestId('run-size-Inverter feed').textContent()).toMatch(/^4 AWG/);
+    expect(await page.getByTestId('run-Inverter feed').textContent()).toMatch(/fitted 10 AWG is smaller/);
+    expect(await page.getByTestId('run-cautions').textContent()).toMatch(/auto electrician/);
+    await page.screenshot({ path: path.join(SHOTS, 'rig-cable-runs-wide.png'), fullPage: true });
+    await page.goto(BASE + '/settings');
+    await page.getByTestId('unit-wire-mm2').click();
+    await page.goBack();
+    await expect.poll(() => page.getByTestId('run-size-Inverter feed').textContent()).toMatch(/mm²/);
+    await page.close();
+  });
+});

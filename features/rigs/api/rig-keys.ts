@@ -4,4 +4,5 @@ export const rigKeys = {
   list: () => [...rigKeys.all, 'list'] as const,
   detail: (rigId: string) => [...rigKeys.all, 'detail', rigId] as const,
   outlook: (rigId: string) => [...rigKeys.all, 'outlook', rigId] as const,
+  cableRuns: (rigId: string) => [...rigKeys.all, 'cable-runs', rigId] as const,
 };

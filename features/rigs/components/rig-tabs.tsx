@@ -14,6 +14,7 @@ export function RigTabs({ rigId }: { rigId: string }) {
     { href: { pathname: '/rigs/[rigId]/loads', params: { rigId } }, label: 'Loads', path: `/rigs/${rigId}/loads` },
     { href: { pathname: '/rigs/[rigId]/power', params: { rigId } }, label: 'Power', path: `/rigs/${rigId}/power` },
     { href: { pathname: '/rigs/[rigId]/try', params: { rigId } }, label: 'Try a load', path: `/rigs/${rigId}/try` },
+    { href: { pathname: '/rigs/[rigId]/cable-runs', params: { rigId } }, label: 'Cable runs', path: `/rigs/${rigId}/cable-runs` },
     { href: { pathname: '/rigs/[rigId]/people', params: { rigId } }, label: 'People', path: `/rigs/${rigId}/people` },
   ];
   return (

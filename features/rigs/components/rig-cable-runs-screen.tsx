@@ -1,0 +1,177 @@
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useState } from 'react';
+import { useForm } from 'react-hook-form';
+import { ActivityIndicator, Pressable, StyleSheet, Text, View } from 'react-native';
+
+import { ChoiceField, NumberField, SwitchField } from '@/components/form';
+import { TextField } from '@/components/text-field';
+import { Body, Button, Card, Heading, Small } from '@/components/ui';
+import { useUnits } from '@/components/units';
+import { useIsWide } from '@/components/use-layout';
+import { type CableRunForm, type CableRunInput, cableRunSchema } from '@/shared/schemas/cable-run';
+import { colors, radius, space, type } from '@/shared/theme';
+import { type SavedCableRun, useCableRunCreateMutation, useCableRunDeleteMutation, useCableRunsQuery, useCableRunUpdateMutation } from '../api/cable-runs';
+import { useRigQuery } from '../api/rig';
+
+const EMPTY: CableRunForm = { label: '', from: 'Battery', to: '', lengthM: 2, currentA: 10, maxDropPercent: 3, insulationC: 105, engineSpace: false, returnPath: 'cable', continuous: false, purpose: 'general' };
+const CAUTION =
+  'Fit each fuse or breaker as close to the battery as possible (within 7 in / 178 mm of the source), use proper terminals and strain relief, disconnect the battery before work, and follow local codes and a qualified auto electrician. Figures are estimates, not a guarantee.';
+
+/** Cable runs: each circuit from the battery with its size, drop and protection. */
+export function RigCableRunsScreen({ rigId }: { rigId: string }) {
+  const rig = useRigQuery(rigId);
+  const runs = useCableRunsQuery(rigId);
+  const { units } = useUnits();
+  const wide = useIsWide();
+  const [editing, setEditing] = useState<SavedCableRun | 'new' | null>(null);
+  const create = useCableRunCreateMutation(rigId);
+  const update = useCableRunUpdateMutation(rigId);
+  const remove = useCableRunDeleteMutation(rigId);
+  if (rig.isPending || runs.isPending) return <ActivityIndicator color={colors.night} />;
+  if (rig.isError || runs.isError) return <Body style={{ color: colors.short }}>{(rig.error ?? runs.error)?.message}</Body>;
+  const canEdit = rig.data.permissions.manageLoads;
+  const size = (r: SavedCableRun) => (r.sizing ? (units.wire === 'mm2' ? `${r.sizing.mm2} mm²` : `${r.sizing.awg} AWG`) : '—');
+  const drop = (r: SavedCableRun) => (r.sizing ? (units.wire === 'mm2' ? r.sizing.metric.dropPercent : r.sizing.dropPercent).toFixed(1) + ' %' : '—');
+  const save = (run: CableRunInput) => {
+    if (editing === 'new') create.mutate(run, { onSuccess: () => setEditing(null) });
+    else if (editing) update.mutate({ id: editing.id, run }, { onSuccess: () => setEditing(null) });
+  };
+  return (
+    <View style={[{ gap: space.lg }, wide && { flexDirection: 'row', alignItems: 'flex-start' }]} testID="rig-cable-runs-screen">
+      <View style={[{ gap: space.lg }, wide && { flex: 3 }]}>
+        <Card>
+          <View style={styles.head}>
+            <Heading>Cable runs</Heading>
+            {canEdit && !editing ? <Button testID="add-run" label="Add a run" onPress={() => setEditing('new')} /> : null}
+          </View>
+          {runs.data.length === 0 ? <Small>No cable runs yet.</Small> : null}
+          {runs.data.map((r) => (
+            <View key={r.id} style={styles.run} testID={`run-${r.label}`}>
+              <View style={{ flex: 1, minWidth: 200, gap: 2 }}>
+                <Text style={styles.name}>{r.label}</Text>
+                <Small>
+                  {r.from} → {r.to || '—'} · {r.lengthM} m one way · {r.currentA} A{r.loadName ? ` (${r.loadName})` : ''}
+                </Small>
+                <Text style={styles.figures} testID={`run-size-${r.label}`}>
+                  {size(r)} · drop {drop(r)} · {r.sizing ? `${r.sizing.fuseA} A fuse or breaker` : 'no size'}
+                </Text>
+                {r.warnings.map((w) => (
+                  <Text key={w} role="alert" style={styles.warning}>
+                    ▲ {w}
+                  </Text>
+                ))}
+              </View>
+              {canEdit ? (
+                <View style={{ flexDirection: 'row', gap: space.xs }}>
+                  <Pressable role="button" aria-label={`Edit ${r.label}`} onPress={() => setEditing(r)} style={styles.chip}>
+                    <Text style={styles.chipText}>Edit</Text>
+                  </Pressable>
+                  <Pressable role="button" aria-label={`Delete ${r.label}`} onPress={() => remove.mutate(r.id)} style={styles.chip}>
+                    <Text style={styles.chipText}>Delete</Text>
+                  </Pressable>
+                </View>
+              ) : null}
+            </View>
+          ))}
+        </Card>
+        <View style={styles.caution} role="note" testID="run-cautions">
+          <Small style={{ color: colors.ink }}>{CAUTION}</Small>
+        </View>
+      </View>
+      {editing ? (
+        <View style={wide ? { flex: 2 } : undefined}>
+          <RunForm
+            key={editing === 'new' ? 'new' : editing.id}
+            initial={editing === 'new' ? EMPTY : toForm(editing)}
+            loads={rig.data.loads.filter((l) => l.status === 'installed').map((l) => ({ value: l.id, label: l.name }))}
+            busy={create.isPending || update.isPending}
+            error={(editing === 'new' ? create.error : update.error)?.message}
+            onSubmit={save}
+            onCancel={() => setEditing(null)}
+          />
+        </View>
+      ) : null}
+    </View>
+  );
+}
+
+function toForm(r: SavedCableRun): CableRunForm {
+  return {
+    label: r.label,
+    from: r.from,
+    to: r.to,
+    lengthM: r.lengthM,
+    ...(r.currentFrom === 'load' && r.loadId ? { loadId: r.loadId } : { currentA: r.currentA }),
+    maxDropPercent: r.maxDropPercent,
+    insulationC: r.insulationC as 105,
+    engineSpace: r.engineSpace,
+    returnPath: r.returnPath,
+    continuous: r.continuous,
+    purpose: r.purpose,
+    ...(r.existingAwg ? { existingAwg: r.existingAwg as '10' } : {}),
+  };
+}
+
+function RunForm(props: { initial: CableRunForm; loads: { value: string; label: string }[]; busy: boolean; error?: string; onSubmit: (r: CableRunInput) => void; onCancel: () => void }) {
+  const form = useForm<CableRunForm, unknown, CableRunInput>({ resolver: zodResolver(cableRunSchema), defaultValues: props.initial, mode: 'onTouched' });
+  const [fromLoad, setFromLoad] = useState(props.initial.loadId !== undefined);
+  const chooseSource = (on: boolean) => {
+    setFromLoad(on);
+    if (on) {
+      form.setValue('currentA', undefined);
+      form.setValue('loadId', props.loads[0]?.value);
+    } else {
+      form.setValue('loadId', undefined);
+      form.setValue('currentA', 10);
+    }
+  };
+  return (
+    <Card testID="run-form">
+      <Heading>{props.initial.label ? `Edit ${props.initial.label}` : 'Add a cable run'}</Heading>
+      <TextField control={form.control} name="label" label="Name" placeholder="Inverter feed" />
+      <TextField control={form.control} name="to" label="To" placeholder="Inverter" />
+      <NumberField control={form.control} name="lengthM" label="Length, one way" unit="m" />
+      {props.loads.length ? (
+        <View style={{ flexDirection: 'row', gap: space.sm }}>
+          <Pressable role="radio" aria-checked={!fromLoad} onPress={() => chooseSource(false)} style={[styles.chip, !fromLoad && styles.chipOn]}>
+            <Text style={[styles.chipText, !fromLoad && styles.chipTextOn]}>Enter the current</Text>
+          </Pressable>
+          <Pressable role="radio" aria-checked={fromLoad} onPress={() => chooseSource(true)} style={[styles.chip, fromLoad && styles.chipOn]} testID="run-from-load">
+            <Text style={[styles.chipText, fromLoad && styles.chipTextOn]}>Take a load&apos;s current</Text>
+          </Pressable>
+        </View>
+      ) : null}
+      {fromLoad ? <ChoiceField control={form.control} name="loadId" label="Load" options={props.loads} /> : <NumberField control={form.control} name="currentA" label="Current" unit="A" />}
+      <NumberField control={form.control} name="maxDropPercent" label="Allowed drop" unit="%" hint="3 % for electronics and feeds, 10 % for other loads (ABYC E-11)." />
+      <ChoiceField control={form.control} name="insulationC" label="Insulation rating" options={[60, 75, 90, 105, 125].map((t) => ({ value: t, label: `${t} °C` }))} />
+      <ChoiceField control={form.control} name="returnPath" label="Return" options={[{ value: 'cable', label: 'Negative cable' }, { value: 'chassis', label: 'Chassis' }]} />
+      <ChoiceField control={form.control} name="purpose" label="Feeds" options={[{ value: 'general', label: 'A device' }, { value: 'inverter', label: 'An inverter' }]} />
+      <SwitchField control={form.control} name="engineSpace" label="Through the engine space" />
+      <SwitchField control={form.control} name="continuous" label="Continuous (3 hours or more)" />
+      <ChoiceField
+        control={form.control}
+        name="existingAwg"
+        label="Wire already fitted (to check it)"
+        options={[{ value: undefined as unknown as '10', label: 'None' }, ...(['16', '14', '12', '10', '8', '6', '4', '2'] as const).map((a) => ({ value: a, label: `${a} AWG` }))]}
+      />
+      {props.error ? <Text role="alert" style={styles.warning}>{props.error}</Text> : null}
+      <View style={{ flexDirection: 'row', gap: space.md }}>
+        <Button testID="run-submit" label="Save" onPress={form.handleSubmit(props.onSubmit)} busy={props.busy} />
+        <Button label="Cancel" onPress={props.onCancel} />
+      </View>
+    </Card>
+  );
+}
+
+const styles = StyleSheet.create({
+  head: { flexDirection: 'row', justifyContent: 'space-between', alignItems: 'center' },
+  run: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm, paddingVertical: space.sm, borderBottomWidth: 1, borderBottomColor: colors.line, alignItems: 'flex-start' },
+  name: { ...type.heading, fontSize: 15, color: colors.ink },
+  figures: { ...type.body, color: colors.night, fontFamily: 'Nunito_700Bold' },
+  warning: { ...type.small, color: colors.short, fontFamily: 'Nunito_700Bold' },
+  chip: { borderWidth: 1, borderColor: colors.line, borderRadius: 999, paddingHorizontal: space.md, paddingVertical: space.xs },
+  chipOn: { backgroundColor: colors.night, borderColor: colors.night },
+  chipText: { ...type.small, color: colors.ink, fontFamily: 'Nunito_700Bold' },
+  chipTextOn: { color: colors.paper },
+  caution: { backgroundColor: '#FFF4DC', borderColor: colors.lampDeep, borderWidth: 1, borderRadius: radius.lg, padding: space.lg },
+});
