@@ -13,12 +13,31 @@ function parseNumber(text: string): number {
 }
 
 /** A number typed as text: what the user typed stays on screen; the form holds the number (NaN when it is not one). */
-export function NumberField<T extends FieldValues>({ control, name, label, unit, hint }: Base<T> & { unit?: string }) {
+export function NumberField<T extends FieldValues>({
+  control,
+  name,
+  label,
+  unit,
+  hint,
+  toDisplay = (n) => n,
+  fromDisplay = (n) => n,
+}: Base<T> & { unit?: string; toDisplay?: (n: number) => number; fromDisplay?: (n: number) => number }) {
   return (
     <Controller
       control={control}
       name={name}
-      render={({ field, fieldState }) => <NumberInput label={label} unit={unit} hint={hint} value={field.value} onChange={field.onChange} onBlur={field.onBlur} error={fieldState.error?.message} testID={`field-${name}`} />}
+      render={({ field, fieldState }) => (
+        <NumberInput
+          label={label}
+          unit={unit}
+          hint={hint}
+          value={Number.isFinite(field.value) ? toDisplay(field.value) : field.value}
+          onChange={(n) => field.onChange(Number.isFinite(n) ? fromDisplay(n) : n)}
+          onBlur={field.onBlur}
+          error={fieldState.error?.message}
+          testID={`field-${name}`}
+        />
+      )}
     />
   );
 }

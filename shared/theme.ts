@@ -11,9 +11,9 @@ export const colors = {
   lampDeep: '#B9831A',
   // Margin states always come with their word, never colour alone.
   comfortable: '#2F7A57',
-  tight: '#A86F00',
+  tight: '#8C5C00',
   short: '#B3402E',
-  focus: '#2E6FD1',
+  focus: '#2A61B8',
 } as const;
 
 export const space = { xs: 4, sm: 8, md: 12, lg: 16, xl: 24, xxl: 32 } as const;

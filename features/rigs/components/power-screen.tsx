@@ -1,11 +1,11 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
-import { useForm, useWatch } from 'react-hook-form';
+import { useForm } from 'react-hook-form';
 import { ActivityIndicator, Switch, Text, View } from 'react-native';
 
 import { ChoiceField, NumberField } from '@/components/form';
 import { Body, Button, Card, Heading, Small } from '@/components/ui';
-import { cToF, useUnits } from '@/components/units';
+import { cToF, fToC, useUnits } from '@/components/units';
 import { useIsWide } from '@/components/use-layout';
 import { ApiError } from '@/lib/api-client';
 import { type RigPower, type RigPowerInput, rigPowerSchema } from '@/shared/schemas/projection';
@@ -36,7 +36,6 @@ function PowerForm({ rig }: { rig: Rig }) {
     setHasInverter(on);
     form.setValue('inverter', on ? INVERTER : null);
   };
-  const temperature = useWatch({ control: form.control, name: 'battery.temperatureC' });
   const save = form.handleSubmit((power) => update.mutate({ version: rig.version, power }));
   const conflict = update.error instanceof ApiError && update.error.status === 409;
   const col = wide ? { flex: 1 } : undefined;
@@ -50,11 +49,14 @@ function PowerForm({ rig }: { rig: Rig }) {
           <NumberField control={form.control} name="battery.capacityAh" label="Capacity (20-hour rate)" unit="Ah" />
           <NumberField control={form.control} name="battery.healthPercent" label="Health" unit="%" hint="An older battery holds less: 80 % after a few years is common." />
           <NumberField
+            key={units.temperature}
             control={form.control}
             name="battery.temperatureC"
             label="Battery temperature"
-            unit="°C"
-            hint={units.temperature === 'F' ? `${cToF(Number(temperature) || 0)} °F. Cold batteries hold less.` : 'Cold batteries hold less: about 75 % of their capacity at 0 °C.'}
+            unit={units.temperature === 'F' ? '°F' : '°C'}
+            toDisplay={units.temperature === 'F' ? cToF : undefined}
+            fromDisplay={units.temperature === 'F' ? fToC : undefined}
+            hint="Cold batteries hold less: about 75 % of their capacity at 0 °C (32 °F)."
           />
           <NumberField control={form.control} name="battery.startSocPercent" label="Charge at the start" unit="%" />
           <ChoiceField control={form.control} name="battery.role" label="Battery" options={[{ value: 'house', label: 'House battery' }, { value: 'starter', label: 'Starting battery' }]} />
