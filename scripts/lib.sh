@@ -50,7 +50,7 @@ start_maildev() {
   "$ROOT/node_modules/.bin/maildev" --ip 127.0.0.1 --web-ip 127.0.0.1 --smtp 1025 --web 1080 >"$ROOT/.data/maildev.log" 2>&1 &
   STARTED_PIDS+=($!)
   wait_port 1080 20 || { say "maildev did not start; see .data/maildev.log"; exit 1; }
-  say "maildev on http://127.0.0.1:1080 (SMTP 127.0.0.1:1025)"
+  say "maildev on http://127.0.0.1:1080/index.html (SMTP 127.0.0.1:1025)"
 }
 
 # The web export, rebuilt only when a source it depends on changed.

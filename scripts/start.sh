@@ -20,10 +20,12 @@ wait_port "$PORT" 30 || { say "the server did not start"; exit 1; }
 cat <<MSG
 
   Keyoff         http://127.0.0.1:$PORT
-  Mail catcher   http://127.0.0.1:1080
-  Demo rigs      Wren and Stoat (the Halloran-Okafor household), seeded.
-  Demo people    ines@example.org (owner), tobi@example.org (member), marguerite@example.org (advisor);
-                 their sign-ins arrive with accounts.
+  Mail catcher   http://127.0.0.1:1080/index.html
+  Demo rigs      Wren and Stoat (the Halloran-Okafor household)
+  Demo sign-ins  password keyoff-demo-2026 for each of
+                 ines@example.org (owner), tobi@example.org (member),
+                 marguerite@example.org (advisor), dara@example.org (outside the household),
+                 admin@example.org (admin)
   Ctrl-C stops everything this command started.
 
 MSG
