@@ -11,7 +11,7 @@ export DATABASE_URL=${DATABASE_URL:-postgres://keyoff@127.0.0.1:54329/keyoff}
 (cd "$ROOT" && npx tsx db/seed-cli.ts)
 start_maildev
 cd "$ROOT"
-KEYOFF_URL=http://127.0.0.1:8081 node_modules/.bin/tsx watch server/index.ts &
+KEYOFF_URL=http://127.0.0.1:8081 TRUSTED_ORIGINS=http://127.0.0.1:8081,http://localhost:8081 node_modules/.bin/tsx watch server/index.ts &
 STARTED_PIDS+=($!)
 EXPO_UNSTABLE_HEADLESS=1 EXPO_PUBLIC_API_URL=http://127.0.0.1:8080 npx expo start --web --port 8081 &
 STARTED_PIDS+=($!)

@@ -5,6 +5,7 @@ import { toNodeHandler } from 'better-auth/node';
 
 import { CLIENT_IP_HEADER } from './auth';
 import type { AppContext } from './context';
+import { devCors } from './middleware/cors';
 import { errorHandler, notFoundApi } from './middleware/error-handler';
 import { rateLimitedOpen } from './middleware/rate-limit';
 import { requireSession } from './middleware/session';
@@ -40,6 +41,7 @@ export function createApp(ctx: AppContext): Express {
       crossOriginEmbedderPolicy: false,
     }),
   );
+  if (config.TRUSTED_ORIGINS.length) app.use('/api', devCors(config.TRUSTED_ORIGINS));
   app.use(pinoHttp({ logger, autoLogging: { ignore: (req) => req.url === '/api/health' } }));
 
   // The auth handler comes before the JSON parser; it sees the client's address from the socket, never from a header the client sent.
