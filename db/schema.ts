@@ -97,6 +97,27 @@ export interface CableRunTable {
   updated_at: Timestamp;
 }
 
+export interface NoteTable {
+  id: Generated<string>;
+  rig_id: string;
+  parent_id: string | null;
+  target_kind: 'rig' | 'load' | 'cable-run' | 'reading';
+  target_id: string | null;
+  author_id: string | null;
+  body: string;
+  rig_version: number;
+  target_snapshot: ColumnType<unknown, string | null, string | null>;
+  resolved_at: ColumnType<Date | null, Date | null | undefined, Date | null>;
+  edited_at: ColumnType<Date | null, Date | null | undefined, Date | null>;
+  created_at: Timestamp;
+}
+
+export interface NoteReadTable {
+  user_id: string;
+  rig_id: string;
+  read_at: ColumnType<Date, Date, Date>;
+}
+
 export interface Database {
   user: UserTable;
   organization: OrganizationTable;
@@ -105,6 +126,8 @@ export interface Database {
   rigs: RigTable;
   loads: LoadTable;
   cable_runs: CableRunTable;
+  notes: NoteTable;
+  note_reads: NoteReadTable;
 }
 
 export type RigRow = Selectable<RigTable>;

@@ -11,6 +11,7 @@ import { rateLimitedOpen } from './middleware/rate-limit';
 import { requireSession } from './middleware/session';
 import { adminRouter } from './routes/admin';
 import { cableRunsRouter } from './routes/cable-runs';
+import { clientsRouter } from './routes/clients';
 import { healthRouter } from './routes/health';
 import { invitationsRouter } from './routes/invitations';
 import { meRouter } from './routes/me';
@@ -57,6 +58,7 @@ export function createApp(ctx: AppContext): Express {
   app.use('/api/me', requireSession(auth), meRouter(ctx));
   app.use('/api/rigs', requireSession(auth), rigsRouter(ctx));
   app.use('/api/invitations', requireSession(auth), invitationsRouter(ctx));
+  app.use('/api/clients', requireSession(auth), clientsRouter(ctx));
   app.use('/api/admin', requireSession(auth), adminRouter(ctx));
   app.use('/api', notFoundApi);
 

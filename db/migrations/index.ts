@@ -2,9 +2,11 @@ import type { Migration } from 'kysely';
 
 import * as m001 from './2026-12-01-001-rigs-loads';
 import * as m002 from './2026-12-01-002-cable-runs';
+import * as m003 from './2026-12-01-003-notes';
 
 // A static provider: file discovery fails under vitest, an explicit list works everywhere.
 export const migrations: Record<string, Migration> = {
   '2026-12-01-001-rigs-loads': m001,
   '2026-12-01-002-cable-runs': m002,
+  '2026-12-01-003-notes': m003,
 };

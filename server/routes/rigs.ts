@@ -3,6 +3,7 @@ import { fromNodeHeaders } from 'better-auth/node';
 
 import { invitationCreateSchema, invitationParamsSchema, memberParamsSchema, memberRoleSchema } from '@/shared/schemas/people';
 import { cableRunParamsSchema, cableRunSchema } from '@/shared/schemas/cable-run';
+import { noteCreateSchema, noteEditSchema, noteParamsSchema } from '@/shared/schemas/note';
 import { loadSchema } from '@/shared/schemas/projection';
 import { loadParamsSchema, rigCreateSchema, rigUpdateSchema, tryLoadsSchema } from '@/shared/schemas/rig';
 import type { AppContext } from '../context';
@@ -11,6 +12,7 @@ import { session } from '../middleware/session';
 import { parsed, validate } from '../middleware/validate';
 import * as people from '../services/people';
 import * as cableRuns from '../services/cable-runs';
+import * as notes from '../services/notes';
 import * as rigs from '../services/rigs';
 
 /** /api/rigs: every route below runs after requireSession (app.ts) and one rigAccess check. */
@@ -75,6 +77,39 @@ export function rigsRouter({ db, auth }: AppContext) {
 
   router.delete('/:rigId/cable-runs/:runId', rigAccess(db, { cableRun: ['delete'] }), validate(cableRunParamsSchema, 'params'), async (_req, res) => {
     await cableRuns.removeCableRun(db, rigOf(res), parsed(res, cableRunParamsSchema, 'params').runId);
+    res.status(204).end();
+  });
+
+  router.get('/:rigId/notes', rigAccess(db, { rig: ['read'] }), async (_req, res) => {
+    res.json(await notes.notesOf(db, rigOf(res), session(res).user.id));
+  });
+
+  router.post('/:rigId/notes', rigAccess(db, { note: ['create'] }), validate(noteCreateSchema), async (_req, res) => {
+    res.status(201).json({ id: await notes.addNote(db, rigOf(res), session(res).user.id, parsed(res, noteCreateSchema)) });
+  });
+
+  router.post('/:rigId/notes/read', rigAccess(db, { rig: ['read'] }), async (_req, res) => {
+    await notes.readNotes(db, rigOf(res), session(res).user.id);
+    res.status(204).end();
+  });
+
+  router.patch('/:rigId/notes/:noteId', rigAccess(db, { note: ['create'] }), validate(noteParamsSchema, 'params'), validate(noteEditSchema), async (_req, res) => {
+    await notes.editNote(db, rigOf(res), parsed(res, noteParamsSchema, 'params').noteId, session(res).user.id, parsed(res, noteEditSchema).body);
+    res.status(204).end();
+  });
+
+  router.delete('/:rigId/notes/:noteId', rigAccess(db, { note: ['create'] }), validate(noteParamsSchema, 'params'), async (_req, res) => {
+    await notes.removeNote(db, rigOf(res), parsed(res, noteParamsSchema, 'params').noteId, session(res).user.id);
+    res.status(204).end();
+  });
+
+  router.post('/:rigId/notes/:noteId/resolve', rigAccess(db, { note: ['create'] }), validate(noteParamsSchema, 'params'), async (_req, res) => {
+    await notes.resolveThread(db, rigOf(res), parsed(res, noteParamsSchema, 'params').noteId, true);
+    res.status(204).end();
+  });
+
+  router.post('/:rigId/notes/:noteId/reopen', rigAccess(db, { note: ['create'] }), validate(noteParamsSchema, 'params'), async (_req, res) => {
+    await notes.resolveThread(db, rigOf(res), parsed(res, noteParamsSchema, 'params').noteId, false);
     res.status(204).end();
   });
 

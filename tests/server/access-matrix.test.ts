@@ -71,6 +71,16 @@ async function throwawayRun() {
   return res.body.id as string;
 }
 const RUN = { label: 'Fridge feed', to: 'Fridge', lengthM: 3, currentA: 5, maxDropPercent: 3, insulationC: 105 };
+async function throwawayNote(agent: ReturnType<typeof request.agent> | ReturnType<typeof request>, own: boolean) {
+  const household = [fx.agents.owner, fx.agents.member, fx.agents.advisor] as unknown[];
+  const author = own && household.includes(agent) ? (agent as typeof fx.agents.owner) : fx.agents.owner;
+  const res = await author.post(`/api/rigs/${fx.rigId}/notes`).set('Origin', TEST_ORIGIN).send({ body: 'A note' });
+  return (res.body.id as string) ?? (await ownerNote());
+}
+async function ownerNote() {
+  const res = await fx.agents.owner.post(`/api/rigs/${fx.rigId}/notes`).set('Origin', TEST_ORIGIN).send({ body: 'Owner note' });
+  return res.body.id as string;
+}
 const currentVersion = async () => (await fx.agents.owner.get(`/api/rigs/${fx.rigId}`)).body.version as number;
 const LOAD = { name: 'Fan', supply: 'dc', watts: 20, hoursPerDay: 4 };
 const editRole = (ok: number) => ({ anonymous: 401, outsider: 404, advisor: 403, member: ok, owner: ok, admin: 404 });
@@ -103,6 +113,28 @@ const MATRIX: Record<string, Entry> = {
     send: async (a, c) => a.delete(`/api/rigs/${c.rigId}/cable-runs/${await throwawayRun()}`).set('Origin', TEST_ORIGIN),
     expect: editRole(204),
   },
+  'GET /api/rigs/:rigId/notes': { send: (a, c) => a.get(`/api/rigs/${c.rigId}/notes`), expect: readRig },
+  'POST /api/rigs/:rigId/notes': { send: (a, c) => a.post(`/api/rigs/${c.rigId}/notes`).set('Origin', TEST_ORIGIN).send({ body: 'Looks good' }), expect: { ...readRig, advisor: 201, member: 201, owner: 201 } },
+  'POST /api/rigs/:rigId/notes/read': { send: (a, c) => a.post(`/api/rigs/${c.rigId}/notes/read`).set('Origin', TEST_ORIGIN), expect: { ...readRig, advisor: 204, member: 204, owner: 204 } },
+  'PATCH /api/rigs/:rigId/notes/:noteId': {
+    // Each household role edits a note of its own; outsiders and anonymous callers aim at the owner's.
+    send: async (a, c) => a.patch(`/api/rigs/${c.rigId}/notes/${await throwawayNote(a, true)}`).set('Origin', TEST_ORIGIN).send({ body: 'Edited' }),
+    expect: { ...readRig, advisor: 204, member: 204, owner: 204 },
+  },
+  'DELETE /api/rigs/:rigId/notes/:noteId': {
+    // The owner may delete anyone's note; the others are tried on the owner's note.
+    send: async (a, c) => a.delete(`/api/rigs/${c.rigId}/notes/${await ownerNote()}`).set('Origin', TEST_ORIGIN),
+    expect: { anonymous: 401, outsider: 404, advisor: 403, member: 403, owner: 204, admin: 404 },
+  },
+  'POST /api/rigs/:rigId/notes/:noteId/resolve': {
+    send: async (a, c) => a.post(`/api/rigs/${c.rigId}/notes/${await ownerNote()}/resolve`).set('Origin', TEST_ORIGIN),
+    expect: { ...readRig, advisor: 204, member: 204, owner: 204 },
+  },
+  'POST /api/rigs/:rigId/notes/:noteId/reopen': {
+    send: async (a, c) => a.post(`/api/rigs/${c.rigId}/notes/${await ownerNote()}/reopen`).set('Origin', TEST_ORIGIN),
+    expect: { ...readRig, advisor: 204, member: 204, owner: 204 },
+  },
+  'GET /api/clients/': { send: (a) => a.get('/api/clients'), expect: { ...all(200), anonymous: 401 } },
   'GET /api/rigs/:rigId/people': { send: (a, c) => a.get(`/api/rigs/${c.rigId}/people`), expect: readRig },
   'PATCH /api/rigs/:rigId': {
     send: async (a, c) => a.patch(`/api/rigs/${c.rigId}`).set('Origin', TEST_ORIGIN).send({ version: await currentVersion(), vehicle: 'Matrix van' }),
