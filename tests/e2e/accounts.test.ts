@@ -2,9 +2,7 @@ import path from 'node:path';
 import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 
-import { BASE, launchChromium, PHONE, SHOTS, signInAs, WIDE } from './browser';
-
-const MAILDEV = 'http://127.0.0.1:1080';
+import { BASE, launchChromium, mailLink, PHONE, SHOTS, signInAs, WIDE } from './browser';
 
 let browser: Browser;
 beforeAll(async () => {
@@ -13,16 +11,6 @@ beforeAll(async () => {
 afterAll(async () => {
   await browser?.close();
 });
-
-async function linkFor(address: string, subject: RegExp): Promise<string> {
-  for (let i = 0; i < 50; i++) {
-    const all = (await (await fetch(`${MAILDEV}/api/email`)).json()) as { subject: string; text: string; to: { address: string }[] }[];
-    const mail = all.reverse().find((m) => m.to.some((t) => t.address === address) && subject.test(m.subject));
-    if (mail) return mail.text.match(/https?:\/\/\S+/g)!.pop()!;
-    await new Promise((r) => setTimeout(r, 100));
-  }
-  throw new Error(`no mail for ${address}`);
-}
 
 describe('accounts in the browser', () => {
   it('signs up, confirms the address through the link caught by maildev, and lands on the home screen', async () => {
@@ -39,9 +27,9 @@ describe('accounts in the browser', () => {
     await page.getByTestId('check-inbox-screen').waitFor();
     await page.screenshot({ path: path.join(SHOTS, 'check-inbox-phone.png') });
 
-    const link = await linkFor(email, /Confirm your e-mail/);
+    const link = await mailLink(email, /Confirm your e-mail/);
     // The link points at the app's configured address; the browser tests serve it on their own port.
-    await page.goto(BASE + new URL(link).pathname + new URL(link).search);
+    await page.goto(BASE + link.pathname + link.search);
     await page.getByTestId('home-screen').waitFor();
     await page.getByTestId('rigs-empty').waitFor();
     expect(await page.getByTestId('signed-in-as').textContent()).toContain('Juno');

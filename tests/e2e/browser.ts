@@ -33,3 +33,16 @@ export async function signInAs(page: import('playwright-core').Page, email: stri
   await page.getByTestId('sign-in-submit').click();
   await page.getByTestId('home-screen').waitFor();
 }
+
+const MAILDEV = 'http://127.0.0.1:1080';
+
+/** The last link in the newest e-mail maildev caught for an address (its REST API), optionally by subject. */
+export async function mailLink(address: string, subject = /./): Promise<URL> {
+  for (let i = 0; i < 50; i++) {
+    const all = (await (await fetch(`${MAILDEV}/api/email`)).json()) as { subject: string; text: string; to: { address: string }[] }[];
+    const mail = all.reverse().find((m) => m.to.some((t) => t.address === address) && subject.test(m.subject));
+    if (mail) return new URL(mail.text.match(/https?:\/\/\S+/g)!.pop()!);
+    await new Promise((r) => setTimeout(r, 100));
+  }
+  throw new Error(`no mail for ${address}`);
+}

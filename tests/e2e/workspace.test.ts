@@ -2,9 +2,7 @@ import path from 'node:path';
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 
-import { BASE, launchChromium, PHONE, SHOTS, signInAs, WIDE } from './browser';
-
-const MAILDEV = 'http://127.0.0.1:1080';
+import { BASE, launchChromium, mailLink, PHONE, SHOTS, signInAs, WIDE } from './browser';
 
 let browser: Browser;
 beforeAll(async () => {
@@ -13,16 +11,6 @@ beforeAll(async () => {
 afterAll(async () => {
   await browser?.close();
 });
-
-async function verifyLink(address: string): Promise<string> {
-  for (let i = 0; i < 50; i++) {
-    const all = (await (await fetch(`${MAILDEV}/api/email`)).json()) as { text: string; to: { address: string }[] }[];
-    const mail = all.find((m) => m.to.some((t) => t.address === address));
-    if (mail) return mail.text.match(/https?:\/\/\S+/g)!.pop()!;
-    await new Promise((r) => setTimeout(r, 100));
-  }
-  throw new Error(`no mail for ${address}`);
-}
 
 async function fill(page: Page, testId: string, value: string) {
   const input = page.getByTestId(testId);
@@ -49,7 +37,7 @@ describe('the rig workspace', () => {
     await page.getByTestId('field-password').fill('a-long-enough-password');
     await page.getByTestId('sign-up-submit').click();
     await page.getByTestId('check-inbox-screen').waitFor();
-    const link = new URL(await verifyLink(email));
+    const link = await mailLink(email, /Confirm your e-mail/);
     await page.goto(BASE + link.pathname + link.search);
     await page.getByTestId('home-screen').waitFor();
 
