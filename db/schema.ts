@@ -118,6 +118,61 @@ export interface NoteReadTable {
   read_at: ColumnType<Date, Date, Date>;
 }
 
+export interface RigHistoryTable {
+  id: Generated<string>;
+  rig_id: string;
+  actor_id: string | null;
+  actor_name: string;
+  kind: HistoryKind;
+  summary: string;
+  days_parked_before: number | null;
+  days_parked_after: number | null;
+  created_at: Timestamp;
+}
+export type HistoryKind = 'load-added' | 'load-edited' | 'load-removed' | 'battery' | 'inverter' | 'charging' | 'routine' | 'stay' | 'rig' | 'member-joined' | 'member-left' | 'member-removed' | 'role-changed';
+
+export interface EmailPrefsTable {
+  user_id: string;
+  reports_on: Generated<boolean>;
+  report_weekday: Generated<number>;
+  report_hour: Generated<number>;
+  time_zone: Generated<string>;
+  warnings_on: Generated<boolean>;
+  warn_at: Generated<'tight' | 'short'>;
+  note_emails_on: Generated<boolean>;
+  updated_at: Timestamp;
+}
+
+export interface RigMarginTable {
+  rig_id: string;
+  state: 'comfortable' | 'tight' | 'short';
+  falls: number;
+  days_parked: number | null;
+  checked_at: Timestamp;
+}
+
+export type EmailKind = 'report' | 'warning' | 'notes';
+export type EmailStatus = 'queued' | 'sending' | 'sent' | 'failed';
+export interface EmailLogTable {
+  id: Generated<string>;
+  idempotency_key: string;
+  kind: EmailKind;
+  user_id: string | null;
+  rig_id: string | null;
+  status: Generated<EmailStatus>;
+  attempts: Generated<number>;
+  last_error: string | null;
+  to_address: string | null;
+  subject: string | null;
+  html: string | null;
+  text: string | null;
+  chart_png: Buffer | null;
+  meta: ColumnType<unknown, string | null | undefined, string | null>;
+  locked_at: ColumnType<Date | null, Date | null | undefined, Date | null>;
+  created_at: Timestamp;
+  sent_at: ColumnType<Date | null, Date | null | undefined, Date | null>;
+}
+
 export interface Database {
   user: UserTable;
   organization: OrganizationTable;
@@ -128,6 +183,10 @@ export interface Database {
   cable_runs: CableRunTable;
   notes: NoteTable;
   note_reads: NoteReadTable;
+  rig_history: RigHistoryTable;
+  email_prefs: EmailPrefsTable;
+  rig_margin: RigMarginTable;
+  email_log: EmailLogTable;
 }
 
 export type RigRow = Selectable<RigTable>;

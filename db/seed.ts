@@ -4,7 +4,7 @@
 import { DEMO_HOUSEHOLD, DEMO_PASSWORD, DEMO_PEOPLE, type DemoPersonKey, STOAT, WREN, WREN_ADDED_BY } from '@/shared/demo/scenario';
 import { loadSchema, type ProjectionInputRaw } from '@/shared/schemas/projection';
 import type { AppContext } from '@/server/context';
-import { loadToRow } from '@/server/services/rigs';
+import { loadToRow } from '@/server/services/rigs-model';
 
 const rigs: { seedKey: string; name: string; vehicle: string; input: ProjectionInputRaw }[] = [
   { seedKey: 'demo-wren', name: 'Wren', vehicle: '2011 long-wheelbase panel van', input: WREN },

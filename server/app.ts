@@ -12,6 +12,7 @@ import { requireSession } from './middleware/session';
 import { adminRouter } from './routes/admin';
 import { cableRunsRouter } from './routes/cable-runs';
 import { clientsRouter } from './routes/clients';
+import { emailRouter } from './routes/email';
 import { healthRouter } from './routes/health';
 import { invitationsRouter } from './routes/invitations';
 import { meRouter } from './routes/me';
@@ -55,6 +56,7 @@ export function createApp(ctx: AppContext): Express {
   app.use('/api/health', healthRouter(db, APP_VERSION));
   app.use('/api/projections', rateLimitedOpen(config.RATE_LIMIT_PER_MINUTE), projectionsRouter());
   app.use('/api/cable-runs', rateLimitedOpen(config.RATE_LIMIT_PER_MINUTE), cableRunsRouter());
+  app.use('/api/email', rateLimitedOpen(config.RATE_LIMIT_PER_MINUTE), express.urlencoded({ extended: false, limit: '10kb' }), emailRouter(ctx));
   app.use('/api/me', requireSession(auth), meRouter(ctx));
   app.use('/api/rigs', requireSession(auth), rigsRouter(ctx));
   app.use('/api/invitations', requireSession(auth), invitationsRouter(ctx));

@@ -38,6 +38,21 @@ const configSchema = z.object({
     .transform((v) => (v === undefined ? undefined : v === 'true')),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
   RATE_LIMIT_PER_MINUTE: z.coerce.number().int().min(1).default(120),
+  /** pg-boss keeps its jobs in this schema of the same database. */
+  JOBS_SCHEMA: z.string().regex(/^[a-z_][a-z0-9_]*$/).default('pgboss'),
+  /** Whether this process runs the job workers and the schedules (every server process may). */
+  RUN_WORKERS: z
+    .enum(['true', 'false'])
+    .default('true')
+    .transform((v) => v === 'true'),
+  JOB_POLL_SECONDS: z.coerce.number().min(0.5).max(60).default(2),
+  /** First retry of a failed e-mail after this many seconds, doubling each time (pg-boss backoff). */
+  JOB_RETRY_DELAY_SECONDS: z.coerce.number().int().min(1).default(30),
+  JOB_RETRY_LIMIT: z.coerce.number().int().min(0).default(10),
+  /** A send that started this long ago without finishing is taken to have crashed and may be tried again. */
+  SEND_LEASE_SECONDS: z.coerce.number().int().min(1).default(300),
+  /** Several notes within this many seconds make one e-mail. */
+  NOTE_EMAIL_GATHER_SECONDS: z.coerce.number().int().min(0).default(600),
 });
 
 export type Config = z.infer<typeof configSchema>;

@@ -3,10 +3,12 @@ import { pino, type Logger } from 'pino';
 import { createDb, type Db } from '@/db/client';
 import { type Auth, createAuth } from './auth';
 import { type Config, loadConfig } from './config';
+import { createJobs, type Jobs } from './jobs/queue';
+import type { Clock } from './jobs/types';
 import { createMailer, type Mailer } from './mail';
 
-/** Everything the app is built from, made once: configuration, logger, database, mailer, auth. */
-export type AppContext = { config: Config; logger: Logger; db: Db; mailer: Mailer; auth: Auth };
+/** Everything the app is built from, made once: configuration, logger, database, mailer, auth, the clock and the job queue. */
+export type AppContext = { config: Config; logger: Logger; db: Db; mailer: Mailer; auth: Auth; clock: Clock; jobs: Jobs };
 
 export function createContext(env: NodeJS.ProcessEnv = process.env, overrides: Partial<AppContext> = {}): AppContext {
   const config = overrides.config ?? loadConfig(env);
@@ -14,5 +16,7 @@ export function createContext(env: NodeJS.ProcessEnv = process.env, overrides: P
   const db = overrides.db ?? createDb(config.DATABASE_URL);
   const mailer = overrides.mailer ?? createMailer(config, logger);
   const auth = overrides.auth ?? createAuth({ config, db, mailer, logger });
-  return { config, logger, db, mailer, auth };
+  const clock = overrides.clock ?? { now: () => new Date() };
+  const jobs = overrides.jobs ?? createJobs({ config, logger, db, mailer, clock });
+  return { config, logger, db, mailer, auth, clock, jobs };
 }

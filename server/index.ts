@@ -4,9 +4,11 @@ import { migrateAll } from './migrate';
 
 async function main() {
   const ctx = createContext();
-  const { config, logger, db, auth } = ctx;
+  const { config, logger, db, auth, jobs } = ctx;
   const applied = await migrateAll(auth, db);
   if (applied.length) logger.info({ applied }, 'migrations applied');
+  await jobs.start();
+  logger.info({ workers: config.RUN_WORKERS }, 'job queue started');
   if (config.NODE_ENV === 'production' && config.AUTH_SECRET.startsWith('keyoff-local-development')) {
     logger.warn('AUTH_SECRET is the local default: set your own before serving anyone but yourself');
   }
@@ -28,6 +30,7 @@ async function main() {
     const force = setTimeout(() => process.exit(1), 10_000) as unknown as NodeJS.Timeout;
     force.unref();
     server.close(async () => {
+      await jobs.stop().catch((err) => logger.error({ err }, 'job queue did not stop cleanly'));
       await db.destroy();
       clearTimeout(force);
       process.exit(0);

@@ -3,7 +3,14 @@ import type { Logger } from 'pino';
 
 import type { Config } from './config';
 
-export type Mail = { to: string; subject: string; text: string; html: string };
+export type Mail = {
+  to: string;
+  subject: string;
+  text: string;
+  html: string;
+  headers?: Record<string, string>;
+  attachments?: { filename: string; content: Buffer; cid?: string; contentType?: string }[];
+};
 export type Mailer = { send: (mail: Mail) => Promise<void> };
 
 /** nodemailer to the SMTP server in the configuration (maildev on 127.0.0.1:1025 locally). */

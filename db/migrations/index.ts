@@ -3,10 +3,12 @@ import type { Migration } from 'kysely';
 import * as m001 from './2026-12-01-001-rigs-loads';
 import * as m002 from './2026-12-01-002-cable-runs';
 import * as m003 from './2026-12-01-003-notes';
+import * as m004 from './2026-12-01-004-history-mail';
 
 // A static provider: file discovery fails under vitest, an explicit list works everywhere.
 export const migrations: Record<string, Migration> = {
   '2026-12-01-001-rigs-loads': m001,
   '2026-12-01-002-cable-runs': m002,
   '2026-12-01-003-notes': m003,
+  '2026-12-01-004-history-mail': m004,
 };

@@ -153,31 +153,29 @@ export async function deleteRig(db: Exec, rigId: string) {
   await db.deleteFrom('rigs').where('id', '=', rigId).execute();
 }
 
-export async function insertLoad(db: Db, rigId: string, load: Omit<NewLoad, 'rig_id' | 'position'>) {
-  return db.transaction().execute(async (trx) => {
-    const max = await trx.selectFrom('loads').select((eb) => eb.fn.max('position').as('p')).where('rig_id', '=', rigId).executeTakeFirst();
-    const row = await trx
-      .insertInto('loads')
-      .values({ ...load, rig_id: rigId, position: (Number(max?.p ?? -1) || 0) + 1 })
-      .returningAll()
-      .executeTakeFirstOrThrow();
-    await touchRig(trx, rigId);
-    return row;
-  });
+export async function insertLoad(db: Exec, rigId: string, load: Omit<NewLoad, 'rig_id' | 'position'>) {
+  const max = await db.selectFrom('loads').select((eb) => eb.fn.max('position').as('p')).where('rig_id', '=', rigId).executeTakeFirst();
+  const row = await db
+    .insertInto('loads')
+    .values({ ...load, rig_id: rigId, position: (Number(max?.p ?? -1) || 0) + 1 })
+    .returningAll()
+    .executeTakeFirstOrThrow();
+  await touchRig(db, rigId);
+  return row;
 }
 
-export async function updateLoad(db: Db, rigId: string, loadId: string, load: Omit<NewLoad, 'rig_id' | 'position' | 'added_by'>) {
-  return db.transaction().execute(async (trx) => {
-    const row = await trx.updateTable('loads').set({ ...load, updated_at: new Date() }).where('id', '=', loadId).where('rig_id', '=', rigId).returningAll().executeTakeFirst();
-    if (row) await touchRig(trx, rigId);
-    return row ?? null;
-  });
+export async function updateLoad(db: Exec, rigId: string, loadId: string, load: Omit<NewLoad, 'rig_id' | 'position' | 'added_by'>) {
+  const row = await db.updateTable('loads').set({ ...load, updated_at: new Date() }).where('id', '=', loadId).where('rig_id', '=', rigId).returningAll().executeTakeFirst();
+  if (row) await touchRig(db, rigId);
+  return row ?? null;
 }
 
-export async function deleteLoad(db: Db, rigId: string, loadId: string) {
-  return db.transaction().execute(async (trx) => {
-    const row = await trx.deleteFrom('loads').where('id', '=', loadId).where('rig_id', '=', rigId).returning('id').executeTakeFirst();
-    if (row) await touchRig(trx, rigId);
-    return !!row;
-  });
+export async function deleteLoad(db: Exec, rigId: string, loadId: string) {
+  const row = await db.deleteFrom('loads').where('id', '=', loadId).where('rig_id', '=', rigId).returning(['id', 'name']).executeTakeFirst();
+  if (row) await touchRig(db, rigId);
+  return row ?? null;
+}
+
+export async function rigsOfHousehold(db: Exec, householdId: string) {
+  return db.selectFrom('rigs').selectAll().where('household_id', '=', householdId).execute();
 }

@@ -6,9 +6,10 @@ import { viaAuth } from '../auth-errors';
 import type { AppContext } from '../context';
 import { requireAdmin } from '../middleware/session';
 import { parsed, validate } from '../middleware/validate';
+import { failedEmails } from '../services/reports';
 
 /** /api/admin: account roles. An admin sees accounts, never a budget they were not invited to. */
-export function adminRouter({ auth }: AppContext) {
+export function adminRouter({ auth, db }: AppContext) {
   const router = Router();
   router.use(requireAdmin);
   router.get('/users', async (req, res) => {
@@ -19,6 +20,10 @@ export function adminRouter({ auth }: AppContext) {
     const { userId } = parsed(res, userParamsSchema, 'params');
     await viaAuth(() => auth.api.setRole({ headers: fromNodeHeaders(req.headers), body: { userId, role: parsed(res, accountRoleBodySchema).role } }), 'role');
     res.status(204).end();
+  });
+  // E-mails that failed to render or send (pg-boss retries them; the last error stays here until one works).
+  router.get('/email-failures', async (_req, res) => {
+    res.json({ failures: await failedEmails(db) });
   });
   return router;
 }

@@ -14,7 +14,7 @@ export function invitationsRouter({ db, auth }: AppContext) {
     res.json(await invitationForInvitee(db, parsed(res, invitationIdParamsSchema, 'params').invitationId, session(res).user.email));
   });
   router.post('/:invitationId/accept', validate(invitationIdParamsSchema, 'params'), async (req, res) => {
-    await acceptInvitation(db, auth, fromNodeHeaders(req.headers), parsed(res, invitationIdParamsSchema, 'params').invitationId, session(res).user.email);
+    await acceptInvitation(db, auth, fromNodeHeaders(req.headers), parsed(res, invitationIdParamsSchema, 'params').invitationId, session(res).user.email, { id: session(res).user.id, name: session(res).user.name });
     res.status(204).end();
   });
   return router;

@@ -3,6 +3,9 @@ import { Router } from 'express';
 import type { AppContext } from '../context';
 import { session } from '../middleware/session';
 import { householdsOfUser } from '../repositories/rigs';
+import { emailPrefsSchema } from '@/shared/schemas/email-prefs';
+import { parsed, validate } from '../middleware/validate';
+import { prefsOf, savePrefs } from '../services/email-prefs';
 
 /** /api/me: who is signed in, with their account role and households. */
 export function meRouter({ db }: AppContext) {
@@ -13,6 +16,12 @@ export function meRouter({ db }: AppContext) {
       user: { id: user.id, name: user.name, email: user.email, role: user.role ?? 'traveller' },
       households: await householdsOfUser(db, user.id),
     });
+  });
+  router.get('/email-prefs', async (_req, res) => {
+    res.json(await prefsOf(db, session(res).user.id));
+  });
+  router.put('/email-prefs', validate(emailPrefsSchema), async (_req, res) => {
+    res.json(await savePrefs(db, session(res).user.id, parsed(res, emailPrefsSchema)));
   });
   return router;
 }

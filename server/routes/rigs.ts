@@ -1,4 +1,4 @@
-import { Router } from 'express';
+import { type Response, Router } from 'express';
 import { fromNodeHeaders } from 'better-auth/node';
 
 import { invitationCreateSchema, invitationParamsSchema, memberParamsSchema, memberRoleSchema } from '@/shared/schemas/people';
@@ -14,10 +14,26 @@ import * as people from '../services/people';
 import * as cableRuns from '../services/cable-runs';
 import * as notes from '../services/notes';
 import * as rigs from '../services/rigs';
+import * as reports from '../services/reports';
+import { historyOf } from '../services/history';
+import { noteRecipients } from '../jobs/notes';
+import { HttpError } from '../errors';
+import { emailParamsSchema } from '@/shared/schemas/email-prefs';
 
 /** /api/rigs: every route below runs after requireSession (app.ts) and one rigAccess check. */
-export function rigsRouter({ db, auth }: AppContext) {
+export function rigsRouter({ db, auth, jobs, config }: AppContext) {
   const router = Router();
+  const actor = (res: Response) => ({ id: session(res).user.id, name: session(res).user.name });
+
+  // After a change that can move the forecast, the rig's margin is checked (low-margin warnings).
+  router.use('/:rigId', (req, res, next) => {
+    if (req.method !== 'GET' && !/\/(notes|try)(\/|$)/.test(req.path)) {
+      res.on('finish', () => {
+        if (res.statusCode < 300 && typeof req.params.rigId === 'string') void jobs.rigChanged(req.params.rigId);
+      });
+    }
+    next();
+  });
   const headers = (req: { headers: Record<string, string | string[] | undefined> }) => fromNodeHeaders(req.headers);
 
   router.get('/', async (_req, res) => {
@@ -34,7 +50,7 @@ export function rigsRouter({ db, auth }: AppContext) {
   });
 
   router.patch('/:rigId', rigAccess(db, { rig: ['update'] }), validate(rigUpdateSchema), async (_req, res) => {
-    res.json(await rigs.changeRig(db, rigOf(res), parsed(res, rigUpdateSchema)));
+    res.json(await rigs.changeRig(db, rigOf(res), actor(res), parsed(res, rigUpdateSchema)));
   });
 
   router.delete('/:rigId', rigAccess(db, { rig: ['delete'] }), async (_req, res) => {
@@ -51,15 +67,15 @@ export function rigsRouter({ db, auth }: AppContext) {
   });
 
   router.post('/:rigId/loads', rigAccess(db, { load: ['create'] }), validate(loadSchema), async (_req, res) => {
-    res.status(201).json(await rigs.addLoad(db, rigOf(res), session(res).user.id, parsed(res, loadSchema)));
+    res.status(201).json(await rigs.addLoad(db, rigOf(res), actor(res), parsed(res, loadSchema)));
   });
 
   router.patch('/:rigId/loads/:loadId', rigAccess(db, { load: ['update'] }), validate(loadParamsSchema, 'params'), validate(loadSchema), async (_req, res) => {
-    res.json(await rigs.editLoad(db, rigOf(res), parsed(res, loadParamsSchema, 'params').loadId, parsed(res, loadSchema)));
+    res.json(await rigs.editLoad(db, rigOf(res), actor(res), parsed(res, loadParamsSchema, 'params').loadId, parsed(res, loadSchema)));
   });
 
   router.delete('/:rigId/loads/:loadId', rigAccess(db, { load: ['delete'] }), validate(loadParamsSchema, 'params'), async (_req, res) => {
-    await rigs.removeLoad(db, rigOf(res).id, parsed(res, loadParamsSchema, 'params').loadId);
+    await rigs.removeLoad(db, rigOf(res), actor(res), parsed(res, loadParamsSchema, 'params').loadId);
     res.status(204).end();
   });
 
@@ -85,7 +101,10 @@ export function rigsRouter({ db, auth }: AppContext) {
   });
 
   router.post('/:rigId/notes', rigAccess(db, { note: ['create'] }), validate(noteCreateSchema), async (_req, res) => {
-    res.status(201).json({ id: await notes.addNote(db, rigOf(res), session(res).user.id, parsed(res, noteCreateSchema)) });
+    const rig = rigOf(res);
+    const id = await notes.addNote(db, rig, session(res).user.id, parsed(res, noteCreateSchema));
+    await jobs.noteWritten(rig.id, await noteRecipients({ db }, rig.household_id, session(res).user.id));
+    res.status(201).json({ id });
   });
 
   router.post('/:rigId/notes/read', rigAccess(db, { rig: ['read'] }), async (_req, res) => {
@@ -113,6 +132,31 @@ export function rigsRouter({ db, auth }: AppContext) {
     res.status(204).end();
   });
 
+  router.get('/:rigId/history', rigAccess(db, { rig: ['read'] }), async (_req, res) => {
+    res.json({ history: await historyOf(db, rigOf(res).id) });
+  });
+
+  router.get('/:rigId/emails', rigAccess(db, { rig: ['read'] }), async (_req, res) => {
+    res.json({ emails: await reports.sentEmailsOf(db, rigOf(res).id) });
+  });
+
+  // The e-mail as it was sent, for the Reports screen's frame: its own strict policy, no scripts.
+  router.get('/:rigId/emails/:emailId', rigAccess(db, { rig: ['read'] }), validate(emailParamsSchema, 'params'), async (_req, res) => {
+    const { rigId, emailId } = parsed(res, emailParamsSchema, 'params');
+    const mail = await reports.sentEmail(db, rigId, emailId);
+    res
+      .set('Content-Security-Policy', "default-src 'none'; img-src 'self'; style-src 'unsafe-inline'; frame-ancestors 'self' " + config.TRUSTED_ORIGINS.join(' '))
+      .type('html')
+      .send((mail.html ?? '').replaceAll('cid:week-ahead', `/api/rigs/${rigId}/emails/${emailId}/chart.png`));
+  });
+
+  router.get('/:rigId/emails/:emailId/chart.png', rigAccess(db, { rig: ['read'] }), validate(emailParamsSchema, 'params'), async (_req, res) => {
+    const { rigId, emailId } = parsed(res, emailParamsSchema, 'params');
+    const mail = await reports.sentEmail(db, rigId, emailId);
+    if (!mail.chart_png) throw new HttpError(404, 'not_found', 'This e-mail has no chart.');
+    res.type('png').send(mail.chart_png);
+  });
+
   router.get('/:rigId/people', rigAccess(db, { people: ['read'] }), async (_req, res) => {
     res.json(await people.listPeople(db, rigOf(res).household_id));
   });
@@ -133,18 +177,18 @@ export function rigsRouter({ db, auth }: AppContext) {
 
   router.patch('/:rigId/members/:memberId', rigAccess(db, { people: ['manage'] }), validate(memberParamsSchema, 'params'), validate(memberRoleSchema), async (req, res) => {
     const { memberId } = parsed(res, memberParamsSchema, 'params');
-    await people.changeRole(db, auth, headers(req), rigOf(res).household_id, memberId, parsed(res, memberRoleSchema).role);
+    await people.changeRole(db, auth, headers(req), rigOf(res).household_id, memberId, parsed(res, memberRoleSchema).role, actor(res));
     res.status(204).end();
   });
 
   router.delete('/:rigId/members/:memberId', rigAccess(db, { people: ['manage'] }), validate(memberParamsSchema, 'params'), async (req, res) => {
-    await people.removePerson(db, auth, headers(req), rigOf(res).household_id, parsed(res, memberParamsSchema, 'params').memberId);
+    await people.removePerson(db, auth, headers(req), rigOf(res).household_id, parsed(res, memberParamsSchema, 'params').memberId, actor(res));
     res.status(204).end();
   });
 
   router.post('/:rigId/leave', rigAccess(db, { rig: ['read'] }), async (req, res) => {
     const rig = rigOf(res);
-    await people.leave(db, auth, headers(req), rig.household_id, rig.role);
+    await people.leave(db, auth, headers(req), rig.household_id, rig.role, actor(res));
     res.status(204).end();
   });
 

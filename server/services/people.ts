@@ -3,6 +3,7 @@ import type { Auth } from '../auth';
 import { viaAuth } from '../auth-errors';
 import { HttpError } from '../errors';
 import { countOwners, findInvitation, findMember, householdPeople } from '../repositories/rigs';
+import { type Actor, recordMembership } from './history';
 
 type Headers = globalThis.Headers;
 const isOwner = (role: string) => role.split(',').includes('owner');
@@ -37,29 +38,34 @@ export async function revokeInvitation(db: Db, auth: Auth, headers: Headers, hou
   await viaAuth(() => auth.api.cancelInvitation({ headers, body: { invitationId } }));
 }
 
-export async function changeRole(db: Db, auth: Auth, headers: Headers, householdId: string, memberId: string, role: string) {
+export async function changeRole(db: Db, auth: Auth, headers: Headers, householdId: string, memberId: string, role: string, actor: Actor) {
   const member = await findMember(db, householdId, memberId);
   if (!member) throw new HttpError(404, 'not_found', 'No such person in this household.');
   if (isOwner(member.role) && role !== 'owner' && (await countOwners(db, householdId)) <= 1) {
     throw new HttpError(409, 'conflict', 'A household needs an owner: make someone else owner first.', [{ path: 'role', message: 'The last owner keeps the owner role.' }]);
   }
   await viaAuth(() => auth.api.updateMemberRole({ headers, body: { memberId, role: role as 'member', organizationId: householdId } }), 'role');
+  await recordMembership(db, householdId, actor, 'role-changed', `made ${await nameOf(db, member.userId)} ${role}`);
 }
 
-export async function removePerson(db: Db, auth: Auth, headers: Headers, householdId: string, memberId: string) {
+const nameOf = async (db: Db, userId: string) => (await db.selectFrom('user').select('name').where('id', '=', userId).executeTakeFirst())?.name ?? 'someone';
+
+export async function removePerson(db: Db, auth: Auth, headers: Headers, householdId: string, memberId: string, actor: Actor) {
   const member = await findMember(db, householdId, memberId);
   if (!member) throw new HttpError(404, 'not_found', 'No such person in this household.');
   if (isOwner(member.role) && (await countOwners(db, householdId)) <= 1) {
     throw new HttpError(409, 'conflict', 'The last owner cannot be removed.');
   }
   await viaAuth(() => auth.api.removeMember({ headers, body: { memberIdOrEmail: memberId, organizationId: householdId } }));
+  await recordMembership(db, householdId, actor, 'member-removed', `removed ${await nameOf(db, member.userId)} (${member.role}) from the household`);
 }
 
-export async function leave(db: Db, auth: Auth, headers: Headers, householdId: string, role: string) {
+export async function leave(db: Db, auth: Auth, headers: Headers, householdId: string, role: string, actor: Actor) {
   if (isOwner(role) && (await countOwners(db, householdId)) <= 1) {
     throw new HttpError(409, 'conflict', 'The last owner cannot leave: make someone else owner first.');
   }
   await viaAuth(() => auth.api.leaveOrganization({ headers, body: { organizationId: householdId } }));
+  await recordMembership(db, householdId, actor, 'member-left', `left the household (was ${role})`);
 }
 
 /** An invitation as its invitee sees it: only to the address it was sent to, only once, only in time. */
@@ -74,7 +80,9 @@ export async function invitationForInvitee(db: Db, invitationId: string, email: 
   return { id: inv.id, householdName: inv.householdName, inviterName: inv.inviterName, role: inv.role, expiresAt: new Date(inv.expiresAt as unknown as Date).toISOString() };
 }
 
-export async function acceptInvitation(db: Db, auth: Auth, headers: Headers, invitationId: string, email: string) {
+export async function acceptInvitation(db: Db, auth: Auth, headers: Headers, invitationId: string, email: string, actor: Actor) {
   await invitationForInvitee(db, invitationId, email);
   await viaAuth(() => auth.api.acceptInvitation({ headers, body: { invitationId } }));
+  const inv = await findInvitation(db, invitationId);
+  if (inv) await recordMembership(db, inv.householdId, actor, 'member-joined', `joined the household as ${inv.role ?? 'member'}`);
 }

@@ -1,50 +1,15 @@
 import type { Db } from '@/db/client';
-import type { LoadRow } from '@/db/schema';
 import { compare, project } from '@/shared/energy/project';
 import { can, type HouseholdRole } from '@/shared/permissions';
 import { type Load, projectionInputSchema, type RigPower, rigPowerSchema } from '@/shared/schemas/projection';
+import { loadFromRow, loadToRow, modelInput, type SavedLoad, stripLoad } from './rigs-model';
+import { type Actor, daysParkedOf, describeLoad, describeLoadEdit, describePowerChange } from './history';
+import { insertHistory } from '../repositories/history';
 import type { RigCreateInput, RigUpdateInput } from '@/shared/schemas/rig';
 import type { Auth } from '../auth';
 import { viaAuth } from '../auth-errors';
 import { HttpError } from '../errors';
 import { deleteLoad, deleteRig, householdRole, insertLoad, insertRig, listRigsForUser, loadsOfRigs, updateLoad, updateRigIfVersion } from '../repositories/rigs';
-
-export type SavedLoad = Load & { id: string; addedBy: { id: string; name: string } | null };
-
-export function loadFromRow(row: LoadRow & { added_by_name?: string | null }): SavedLoad {
-  return {
-    id: row.id,
-    name: row.name,
-    supply: row.supply,
-    ...(row.amps !== null ? { amps: row.amps } : { watts: row.watts ?? 0 }),
-    dutyPercent: row.duty_percent,
-    hoursPerDay: row.hours_per_day,
-    ...(row.start_hour !== null ? { startHour: row.start_hour } : {}),
-    ...(row.weekdays ? { weekdays: row.weekdays } : {}),
-    when: row.when,
-    status: row.status,
-    quantity: row.quantity,
-    addedBy: row.added_by ? { id: row.added_by, name: row.added_by_name ?? '' } : null,
-  };
-}
-
-export function loadToRow(load: Load, position: number, addedBy: string | null) {
-  return {
-    name: load.name,
-    supply: load.supply,
-    watts: load.amps === undefined ? (load.watts ?? 0) : null,
-    amps: load.amps ?? null,
-    duty_percent: load.dutyPercent,
-    hours_per_day: load.hoursPerDay,
-    start_hour: load.startHour ?? null,
-    weekdays: load.weekdays ?? null,
-    when: load.when,
-    status: load.status,
-    quantity: load.quantity,
-    position,
-    added_by: addedBy,
-  };
-}
 
 /** What the role may do, for the client to hide controls (the server checks every request anyway). */
 export function permissionsOf(role: string) {
@@ -76,10 +41,6 @@ export function rigDto(row: RigRowWithRole, loads: SavedLoad[]) {
   };
 }
 export type RigDto = ReturnType<typeof rigDto>;
-
-export function modelInput(power: RigPower, loads: (Load | SavedLoad)[]) {
-  return projectionInputSchema.parse({ ...power, loads: loads.map((l) => ('id' in l ? stripLoad(l) : l)) });
-}
 
 export async function listRigs(db: Db, userId: string) {
   const rows = await listRigsForUser(db, userId);
@@ -156,41 +117,95 @@ export async function tryLoads(db: Db, rig: RigRowWithRole, candidates: Load[]) 
   return compare({ rig: model, candidates });
 }
 
-const stripLoad = ({ id: _id, addedBy: _by, ...load }: SavedLoad): Load => load;
 
-export async function changeRig(db: Db, rig: RigRowWithRole, input: RigUpdateInput) {
-  if (input.power) {
-    const loads = (await loadsOfRigs(db, [rig.id])).map(loadFromRow).map(stripLoad);
-    validateModel(input.power, loads, 'power.');
-  }
-  const updated = await updateRigIfVersion(db, rig.id, input.version, { name: input.name, vehicle: input.vehicle, power: input.power });
-  if (!updated) {
-    throw new HttpError(409, 'conflict', 'Someone else changed this rig since you opened it. Reload to see their change, then make yours again.', [
-      { path: 'version', message: `This rig is now at version ${rig.version}; your edit started from version ${input.version}.` },
-    ]);
-  }
-  return updated;
+export async function changeRig(db: Db, rig: RigRowWithRole, actor: Actor, input: RigUpdateInput) {
+  const loads = (await loadsOfRigs(db, [rig.id])).map(loadFromRow).map(stripLoad);
+  if (input.power) validateModel(input.power, loads, 'power.');
+  const before = rigPowerSchema.parse(rig.power);
+  return db.transaction().execute(async (trx) => {
+    const updated = await updateRigIfVersion(trx, rig.id, input.version, { name: input.name, vehicle: input.vehicle, power: input.power });
+    if (!updated) {
+      throw new HttpError(409, 'conflict', 'Someone else changed this rig since you opened it. Reload to see their change, then make yours again.', [
+        { path: 'version', message: `This rig is now at version ${rig.version}; your edit started from version ${input.version}.` },
+      ]);
+    }
+    const change = input.power ? describePowerChange(before, input.power) : null;
+    const renamed = (input.name !== undefined && input.name !== rig.name) || (input.vehicle !== undefined && input.vehicle !== rig.vehicle);
+    if (change || renamed) {
+      await insertHistory(trx, {
+        rigId: rig.id,
+        actor,
+        kind: change?.kind ?? 'rig',
+        summary: change?.summary ?? `renamed the rig ${input.name ?? rig.name}${input.vehicle ? ` (${input.vehicle})` : ''}`,
+        daysParkedBefore: daysParkedOf(before, loads),
+        daysParkedAfter: daysParkedOf(input.power ?? before, loads),
+      });
+    }
+    return updated;
+  });
 }
 
-export async function addLoad(db: Db, rig: RigRowWithRole, userId: string, load: Load) {
+export async function addLoad(db: Db, rig: RigRowWithRole, actor: Actor, load: Load) {
   const dto = await readRig(db, rig);
-  validateModel(dto.power, [...dto.loads.map(stripLoad), load].map((l) => ({ ...l, status: 'installed' as const })));
-  const { position: _p, ...row } = loadToRow(load, 0, userId);
-  return loadFromRow(await insertLoad(db, rig.id, row));
+  const current = dto.loads.map(stripLoad);
+  validateModel(dto.power, [...current, load].map((l) => ({ ...l, status: 'installed' as const })));
+  const { position: _p, ...row } = loadToRow(load, 0, actor.id);
+  return db.transaction().execute(async (trx) => {
+    const saved = loadFromRow(await insertLoad(trx, rig.id, row));
+    await insertHistory(trx, {
+      rigId: rig.id,
+      actor,
+      kind: 'load-added',
+      summary: `added ${describeLoad(load)}`,
+      daysParkedBefore: daysParkedOf(dto.power, current),
+      daysParkedAfter: daysParkedOf(dto.power, [...current, load]),
+    });
+    return saved;
+  });
 }
 
-export async function editLoad(db: Db, rig: RigRowWithRole, loadId: string, load: Load) {
+export async function editLoad(db: Db, rig: RigRowWithRole, actor: Actor, loadId: string, load: Load) {
   const dto = await readRig(db, rig);
-  if (!dto.loads.some((l) => l.id === loadId)) throw new HttpError(404, 'not_found', 'No such load on this rig.');
-  validateModel(dto.power, dto.loads.map((l) => (l.id === loadId ? load : stripLoad(l))).map((l) => ({ ...l, status: 'installed' as const })));
+  const old = dto.loads.find((l) => l.id === loadId);
+  if (!old) throw new HttpError(404, 'not_found', 'No such load on this rig.');
+  const current = dto.loads.map(stripLoad);
+  const next = dto.loads.map((l) => (l.id === loadId ? load : stripLoad(l)));
+  validateModel(dto.power, next.map((l) => ({ ...l, status: 'installed' as const })));
   const { position: _p, added_by: _a, ...row } = loadToRow(load, 0, null);
-  const updated = await updateLoad(db, rig.id, loadId, row);
-  if (!updated) throw new HttpError(404, 'not_found', 'No such load on this rig.');
-  return loadFromRow(updated);
+  return db.transaction().execute(async (trx) => {
+    const updated = await updateLoad(trx, rig.id, loadId, row);
+    if (!updated) throw new HttpError(404, 'not_found', 'No such load on this rig.');
+    await insertHistory(trx, {
+      rigId: rig.id,
+      actor,
+      kind: 'load-edited',
+      summary: `edited ${describeLoadEdit(stripLoad(old), load)}`,
+      daysParkedBefore: daysParkedOf(dto.power, current),
+      daysParkedAfter: daysParkedOf(dto.power, next),
+    });
+    return loadFromRow(updated);
+  });
 }
 
-export async function removeLoad(db: Db, rigId: string, loadId: string) {
-  if (!(await deleteLoad(db, rigId, loadId))) throw new HttpError(404, 'not_found', 'No such load on this rig.');
+export async function removeLoad(db: Db, rig: RigRowWithRole, actor: Actor, loadId: string) {
+  const dto = await readRig(db, rig);
+  const old = dto.loads.find((l) => l.id === loadId);
+  if (!old) throw new HttpError(404, 'not_found', 'No such load on this rig.');
+  const current = dto.loads.map(stripLoad);
+  await db.transaction().execute(async (trx) => {
+    if (!(await deleteLoad(trx, rig.id, loadId))) throw new HttpError(404, 'not_found', 'No such load on this rig.');
+    await insertHistory(trx, {
+      rigId: rig.id,
+      actor,
+      kind: 'load-removed',
+      summary: `removed ${describeLoad(stripLoad(old))}`,
+      daysParkedBefore: daysParkedOf(dto.power, current),
+      daysParkedAfter: daysParkedOf(
+        dto.power,
+        dto.loads.filter((l) => l.id !== loadId).map(stripLoad),
+      ),
+    });
+  });
 }
 
 export async function removeRig(db: Db, rigId: string) {

@@ -8,11 +8,28 @@ import { migrateAll } from '@/server/migrate';
 export const TEST_DATABASE_URL = process.env.DATABASE_URL ?? 'postgres://keyoff@127.0.0.1:54329/keyoff_test';
 export const TEST_ORIGIN = 'http://127.0.0.1:8080';
 
-/** The real app on the real test database (npm test empties, migrates and seeds it) and real SMTP (maildev). */
-export async function makeTestApp(env: Record<string, string> = {}) {
-  const config = loadConfig({ ...process.env, NODE_ENV: 'test', DATABASE_URL: TEST_DATABASE_URL, SERVE_WEB: 'false', KEYOFF_URL: TEST_ORIGIN, SIGN_IN_LIMIT_PER_MINUTE: '10000', ...env });
-  const ctx: AppContext = createContext(process.env, { config, logger: pino({ level: 'silent' }) });
+/**
+ * The real app on the real test database (npm test empties, migrates and seeds it), real SMTP (maildev)
+ * and a real pg-boss queue in a schema of its own, so that one test's jobs never reach another's
+ * workers. Workers run only where a test asks for them (RUN_WORKERS: 'true'); `clock` sets the time.
+ */
+export async function makeTestApp(env: Record<string, string> = {}, overrides: Partial<Pick<AppContext, 'clock' | 'mailer'>> = {}) {
+  const config = loadConfig({
+    ...process.env,
+    NODE_ENV: 'test',
+    DATABASE_URL: TEST_DATABASE_URL,
+    SERVE_WEB: 'false',
+    KEYOFF_URL: TEST_ORIGIN,
+    SIGN_IN_LIMIT_PER_MINUTE: '10000',
+    JOBS_SCHEMA: `pgboss_t${Math.random().toString(36).slice(2, 10)}`,
+    RUN_WORKERS: 'false',
+    JOB_POLL_SECONDS: '0.5',
+    JOB_RETRY_DELAY_SECONDS: '1',
+    ...env,
+  });
+  const ctx: AppContext = createContext(process.env, { config, logger: pino({ level: 'silent' }), ...overrides });
   await migrateAll(ctx.auth, ctx.db);
+  await ctx.jobs.start();
   const app = createApp(ctx);
   return { ...ctx, app };
 }

@@ -5,6 +5,7 @@ import { MarginBadge } from '@/components/margin-badge';
 import { Body, Button, Card, Heading, Small } from '@/components/ui';
 import { formatEnergy, useUnits } from '@/components/units';
 import { useIsWide } from '@/components/use-layout';
+import { FIX_WIRING_CAUTION, needsWiringCaution } from '@/shared/safety';
 import { colors, radius, space, type } from '@/shared/theme';
 import { type Outlook, useOutlookQuery } from '../api/rig';
 import { SocChart } from './chart/soc-chart';
@@ -129,12 +130,9 @@ function Fixes({ outlook }: { outlook: Outlook }) {
           <Small>Cost in convenience: {f.convenience}</Small>
         </View>
       ))}
-      {outlook.fixes.some((f) => ['cutoff-switch', 'ignition-relay', 'low-voltage-disconnect', 'solar', 'more-battery'].includes(f.kind)) ? (
+      {needsWiringCaution(outlook.fixes) ? (
         <View style={styles.caution} role="note">
-          <Small style={{ color: colors.ink }}>
-            Wiring changes: fit protection as close to the battery as possible, use proper terminals and strain relief, disconnect the battery before work, and follow local codes and a qualified auto
-            electrician. These figures are estimates, not a guarantee.
-          </Small>
+          <Small style={{ color: colors.ink }}>{FIX_WIRING_CAUTION}</Small>
         </View>
       ) : null}
     </Card>

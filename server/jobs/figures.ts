@@ -1,0 +1,71 @@
+import type { Db } from '@/db/client';
+import { type FixKind, project } from '@/shared/energy/project';
+import { rigPowerSchema } from '@/shared/schemas/projection';
+import { loadsOfRigs } from '../repositories/rigs';
+import { loadFromRow, modelInput } from '../services/rigs-model';
+
+/** The Outlook's figures a report or a warning quotes: the same model run as GET /api/rigs/:rigId/outlook. */
+export type RigFigures = {
+  rigId: string;
+  rigName: string;
+  version: number;
+  daysParked: number | null;
+  daysOnRoutine: number | null;
+  holds: boolean;
+  marginState: 'comfortable' | 'tight' | 'short';
+  marginDays: number | null;
+  plannedStayDays: number;
+  horizonDays: number;
+  standbySharePercent: number;
+  drains: { name: string; kind: 'load' | 'standby'; ahPerDay: number; sharePercent: number }[];
+  fixes: { kind: FixKind; summary: string; daysGainedParked: number; daysGainedRoutine: number }[];
+  /** The first week's state of charge, hour by hour, for the small chart. */
+  weekSocPercent: number[];
+  cutoffSocPercent: number;
+  startWeekday: number;
+};
+
+type RigRow = { id: string; name: string; version: number; power: unknown };
+
+export function figuresOf(rig: RigRow, loads: ReturnType<typeof loadFromRow>[]): RigFigures {
+  const power = rigPowerSchema.parse(rig.power);
+  const p = project(modelInput(power, loads));
+  const round1 = (x: number) => Math.round(x * 10) / 10;
+  return {
+    rigId: rig.id,
+    rigName: rig.name,
+    version: rig.version,
+    daysParked: p.parked.daysToCutoff,
+    daysOnRoutine: p.routine.daysToCutoff,
+    holds: p.routine.holds,
+    marginState: p.margin.state,
+    marginDays: p.margin.days,
+    plannedStayDays: p.margin.plannedStayDays,
+    horizonDays: p.horizonDays,
+    standbySharePercent: Math.round(p.breakdown.filter((b) => b.kind === 'standby').reduce((s, b) => s + b.share, 0) * 100),
+    drains: p.breakdown.slice(0, 4).map((b) => ({ name: b.name, kind: b.kind, ahPerDay: b.ahPerDay, sharePercent: Math.round(b.share * 100) })),
+    fixes: p.fixes.slice(0, 3).map((f) => ({ kind: f.kind, summary: f.summary, daysGainedParked: f.daysGainedParked, daysGainedRoutine: f.daysGainedRoutine })),
+    weekSocPercent: p.series.slice(0, 169).map((s) => round1(s.socPercent)),
+    cutoffSocPercent: p.cutoffSocPercent,
+    startWeekday: power.start.weekday,
+  };
+}
+
+export async function figuresOfRigs(db: Db, rigs: RigRow[]): Promise<Map<string, RigFigures>> {
+  const out = new Map<string, RigFigures>();
+  for (let i = 0; i < rigs.length; i += 500) {
+    const chunk = rigs.slice(i, i + 500);
+    const loads = await loadsOfRigs(db, chunk.map((r) => r.id));
+    const byRig = new Map<string, ReturnType<typeof loadFromRow>[]>();
+    for (const l of loads) {
+      const list = byRig.get(l.rig_id) ?? [];
+      list.push(loadFromRow(l));
+      byRig.set(l.rig_id, list);
+    }
+    for (const rig of chunk) out.set(rig.id, figuresOf(rig, byRig.get(rig.id) ?? []));
+  }
+  return out;
+}
+
+export const daysText = (days: number | null, horizonDays: number) => (days === null ? `more than ${horizonDays} days` : `${days.toFixed(1)} days`);
+export const STATE_WORD = { comfortable: 'Comfortable', tight: 'Tight', short: 'Short' } as const;

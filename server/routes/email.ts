@@ -1,0 +1,40 @@
+import { Router } from 'express';
+
+import { unsubscribeQuerySchema } from '@/shared/schemas/email-prefs';
+import type { AppContext } from '../context';
+import { esc } from '../emails/render';
+import { readUnsubscribeToken } from '../emails/unsubscribe';
+import { HttpError } from '../errors';
+import { parsed, validate } from '../middleware/validate';
+import { turnOff } from '../services/email-prefs';
+
+const LIST_NAME = { reports: 'Weekly reports', warnings: 'Low-margin warnings', notes: 'Note e-mails' } as const;
+
+/**
+ * /api/email/unsubscribe: open, no sign-in; the signed token says who and which e-mails.
+ * GET is the link in the e-mail (one click, answers a small page); POST is RFC 8058's one-click from
+ * the List-Unsubscribe header (answers JSON).
+ */
+export function emailRouter({ db, config }: AppContext) {
+  const router = Router();
+  const handle = async (token: string) => {
+    const who = readUnsubscribeToken(config.AUTH_SECRET, token);
+    if (!who) throw new HttpError(400, 'validation_failed', 'This unsubscribe link is not valid.', [{ path: 'token', message: 'The token was changed or is not ours.' }]);
+    const user = await db.selectFrom('user').select('id').where('id', '=', who.userId).executeTakeFirst();
+    if (!user) throw new HttpError(404, 'not_found', 'No such account.');
+    await turnOff(db, who.userId, who.list);
+    return who;
+  };
+  router.get('/unsubscribe', validate(unsubscribeQuerySchema, 'query'), async (_req, res) => {
+    const who = await handle(parsed(res, unsubscribeQuerySchema, 'query').token);
+    res.type('html').send(`<!doctype html><html lang="en"><head><meta charset="utf-8"><meta name="viewport" content="width=device-width,initial-scale=1"><title>Keyoff: e-mails turned off</title></head>
+<body style="font-family:Nunito,Segoe UI,Helvetica,Arial,sans-serif;background:#F6F3EC;color:#1C2630;padding:32px;max-width:560px;margin:auto">
+<h1 style="font-size:22px">${esc(LIST_NAME[who.list])} are off</h1>
+<p>You will get no more ${esc(LIST_NAME[who.list].toLowerCase())} from Keyoff. You can turn them back on in <a href="${esc(config.KEYOFF_URL)}/settings">Settings</a>.</p></body></html>`);
+  });
+  router.post('/unsubscribe', validate(unsubscribeQuerySchema, 'query'), async (_req, res) => {
+    const who = await handle(parsed(res, unsubscribeQuerySchema, 'query').token);
+    res.json({ list: who.list, on: false });
+  });
+  return router;
+}
