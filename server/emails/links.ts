@@ -14,5 +14,5 @@ export const listHeaders = (config: Config, userId: string, list: MailList) => (
 
 export const footerFor = (config: Config, userId: string, list: MailList) => [
   `You get ${LIST_NAME[list]} because you share this rig on Keyoff. <a href="${esc(unsubscribeUrl(config, userId, list))}">Turn off ${LIST_NAME[list]}</a> in one click, or choose in <a href="${esc(`${config.KEYOFF_URL}/settings`)}">Settings</a>.`,
-  'Keyoff: your vehicle&#39;s battery budget. Figures are estimates from the model, not a guarantee.',
+  'Keyoff: your vehicle’s battery budget. Figures are estimates from the model, not a guarantee.',
 ];

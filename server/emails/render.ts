@@ -19,8 +19,8 @@ export async function renderLetter(letter: Letter): Promise<{ html: string; text
   const section = (s: Section) => `
     <mj-section background-color="#FFFFFF" padding="8px 16px"><mj-column>
       ${s.heading ? `<mj-text font-size="17px" font-weight="700" padding="8px 8px 4px">${esc(s.heading)}</mj-text>` : ''}
-      ${(s.lines ?? []).map((l) => `<mj-text padding="2px 8px">${esc(l)}</mj-text>`).join('')}
       ${s.rows?.length ? `<mj-table padding="4px 8px" font-size="14px" line-height="20px">${s.rows.map(([a, b]) => `<tr><td style="padding:3px 0">${esc(a)}</td><td style="padding:3px 0;text-align:right;font-weight:700">${esc(b)}</td></tr>`).join('')}</mj-table>` : ''}
+      ${(s.lines ?? []).map((l) => `<mj-text padding="2px 8px">${esc(l)}</mj-text>`).join('')}
       ${s.image ? `<mj-image src="cid:${esc(s.image.cid)}" alt="${esc(s.image.alt)}" padding="8px" />` : ''}
       ${s.caution ? `<mj-text padding="6px 8px" font-size="13px" color="${colors.tight}">${esc(s.caution)}</mj-text>` : ''}
     </mj-column></mj-section>`;
@@ -45,7 +45,7 @@ export async function renderLetter(letter: Letter): Promise<{ html: string; text
     letter.heading,
     '',
     ...letter.intro,
-    ...letter.sections.flatMap((s) => ['', ...(s.heading ? [s.heading.toUpperCase()] : []), ...(s.lines ?? []), ...(s.rows ?? []).map(([a, b]) => `  ${a}: ${b}`), ...(s.image ? [`[${s.image.alt}]`] : []), ...(s.caution ? [s.caution] : [])]),
+    ...letter.sections.flatMap((s) => ['', ...(s.heading ? [s.heading.toUpperCase()] : []), ...(s.rows ?? []).map(([a, b]) => `  ${a}: ${b}`), ...(s.lines ?? []), ...(s.image ? [`[${s.image.alt}]`] : []), ...(s.caution ? [s.caution] : [])]),
     '',
     `${letter.action.label}: ${letter.action.url}`,
     '',

@@ -216,85 +216,99 @@ export function run(r: Resolved, demand: DemandProfile, opts: RunOptions): RunRe
     // Driving part first, then parked.
     for (let part = 0; part < 2; part++) {
       const driving = part === 0;
-      const dt = driving ? f : 1 - f;
-      if (dt <= 1e-12) continue;
+      const partHours = driving ? f : 1 - f;
+      // A low-voltage disconnect opens the moment the charge reaches its threshold, inside the hour:
+      // the part is then split there and the rest runs with the inverter off.
+      for (let done = 0; partHours - done > 1e-12; ) {
+        let dt = partHours - done;
+        let acOn = false;
+        let idleOn = false;
+        if (inv) {
+          if (inv.control === 'low-voltage-disconnect') {
+            const soc = (ah / full) * 100;
+            if (lvdOn && soc <= inv.lvdSoc) lvdOn = false;
+            else if (!lvdOn && soc >= inv.lvdSoc + inv.lvdReconnectPoints) lvdOn = true;
+            acOn = idleOn = lvdOn;
+          } else if (inv.control === 'always-on') {
+            acOn = idleOn = true;
+          } else if (inv.control === 'manual-switch') {
+            // Switched on only while an AC load runs; its own losses are in the efficiency.
+            acOn = true;
+          } else {
+            acOn = idleOn = driving;
+          }
+        }
+        const dc = driving ? demand.dcDriving[how] : demand.dcParked[how];
+        const acDemand = driving ? demand.acDriving[how] : demand.acParked[how];
+        const acActive = driving ? demand.acActiveDriving[how] : demand.acActiveParked[how];
+        const acFloor = driving ? demand.acFloorDriving[how] : demand.acFloorParked[how];
+        const ac = acOn ? acDemand : 0;
+        // Idle in the part of the hour no AC load runs, and the floor's excess while one runs.
+        const idle = (inv && idleOn ? inv.idleA * (1 - acActive) : 0) + (acOn ? acFloor - acDemand : 0);
+        const keyOff = driving ? 0 : r.keyOffA;
+        const loadA = dc + ac + idle + keyOff;
+        if (acOn) {
+          const w = driving ? demand.acWattsDriving[how] : demand.acWattsParked[how];
+          if (w > maxAcWatts) maxAcWatts = w;
+        }
+        if (acOn && (idle > 0 || acActive > 0)) inverterOnAny = true;
+        if (inv && idleOn) inverterOnAny = true;
 
-      let acOn = false;
-      let idleOn = false;
-      if (inv) {
-        if (inv.control === 'low-voltage-disconnect') {
-          const soc = (ah / full) * 100;
-          if (lvdOn && soc <= inv.lvdSoc) lvdOn = false;
-          else if (!lvdOn && soc >= inv.lvdSoc + inv.lvdReconnectPoints) lvdOn = true;
-          acOn = idleOn = lvdOn;
-        } else if (inv.control === 'always-on') {
-          acOn = idleOn = true;
-        } else if (inv.control === 'manual-switch') {
-          // Switched on only while an AC load runs; its own losses are in the efficiency.
-          acOn = true;
+        const chargeA = sources + (driving ? r.alternatorA : 0);
+        let lvdOpens = false;
+        if (inv && inv.control === 'low-voltage-disconnect' && lvdOn && chargeA < loadA) {
+          const lvdAh = (inv.lvdSoc / 100) * full;
+          const rate = peukert(loadA - chargeA, r.ratedCurrentA, r.peukertExponent) + r.selfDischargeAPerHour;
+          if (ah > lvdAh && ah - rate * dt < lvdAh) {
+            dt = (ah - lvdAh) / rate;
+            lvdOpens = true;
+          }
+        }
+        const before = ah;
+        let chargeUsedAh: number;
+        if (chargeA >= loadA) {
+          // In the taper the acceptance falls as the battery fills: short sub-steps keep the
+          // integration from overshooting (a lower battery never ends an hour above a fuller one).
+          const n = ah >= taperStartAh - 1e-9 || ah + chargeA * dt >= taperStartAh ? Math.min(200, Math.max(1, Math.ceil(taperStiffness * dt))) : 1;
+          const h = dt / n;
+          for (let k = 0; k < n; k++) {
+            const into = Math.min(chargeA - loadA, acceptance(ah));
+            ah = Math.min(full, ah + into * r.chargeEfficiency * h);
+          }
+          chargeUsedAh = loadA * dt + (ah - before);
         } else {
-          acOn = idleOn = driving;
+          const deficit = loadA - chargeA;
+          ah -= peukert(deficit, r.ratedCurrentA, r.peukertExponent) * dt;
+          chargeUsedAh = chargeA * dt;
         }
-      }
-      const dc = driving ? demand.dcDriving[how] : demand.dcParked[how];
-      const acDemand = driving ? demand.acDriving[how] : demand.acParked[how];
-      const acActive = driving ? demand.acActiveDriving[how] : demand.acActiveParked[how];
-      const acFloor = driving ? demand.acFloorDriving[how] : demand.acFloorParked[how];
-      const ac = acOn ? acDemand : 0;
-      // Idle in the part of the hour no AC load runs, and the floor's excess while one runs.
-      const idle = (inv && idleOn ? inv.idleA * (1 - acActive) : 0) + (acOn ? acFloor - acDemand : 0);
-      const keyOff = driving ? 0 : r.keyOffA;
-      const loadA = dc + ac + idle + keyOff;
-      if (acOn) {
-        const w = driving ? demand.acWattsDriving[how] : demand.acWattsParked[how];
-        if (w > maxAcWatts) maxAcWatts = w;
-      }
-      if (acOn && (idle > 0 || acActive > 0)) inverterOnAny = true;
-      if (inv && idleOn) inverterOnAny = true;
+        ah -= r.selfDischargeAPerHour * dt;
+        const unclamped = ah;
+        if (ah < 0) ah = 0;
 
-      const chargeA = sources + (driving ? r.alternatorA : 0);
-      const before = ah;
-      let chargeUsedAh: number;
-      if (chargeA >= loadA) {
-        // In the taper the acceptance falls as the battery fills: short sub-steps keep the
-        // integration from overshooting (a lower battery never ends an hour above a fuller one).
-        const n = ah >= taperStartAh - 1e-9 || ah + chargeA * dt >= taperStartAh ? Math.min(200, Math.max(1, Math.ceil(taperStiffness * dt))) : 1;
-        const h = dt / n;
-        for (let k = 0; k < n; k++) {
-          const into = Math.min(chargeA - loadA, acceptance(ah));
-          ah = Math.min(full, ah + into * r.chargeEfficiency * h);
+        // Interpolate the moment of crossing inside the part-hour.
+        const t0 = t + (driving ? 0 : f) + done;
+        if (hoursToCutoff === null && unclamped <= cutAh && before > cutAh) {
+          hoursToCutoff = t0 + (dt * (before - cutAh)) / (before - unclamped);
         }
-        chargeUsedAh = loadA * dt + (ah - before);
-      } else {
-        const deficit = loadA - chargeA;
-        ah -= peukert(deficit, r.ratedCurrentA, r.peukertExponent) * dt;
-        chargeUsedAh = chargeA * dt;
-      }
-      ah -= r.selfDischargeAPerHour * dt;
-      const unclamped = ah;
-      if (ah < 0) ah = 0;
-
-      // Interpolate the moment of crossing inside the part-hour.
-      const t0 = t + (driving ? 0 : f);
-      if (hoursToCutoff === null && unclamped <= cutAh && before > cutAh) {
-        hoursToCutoff = t0 + (dt * (before - cutAh)) / (before - unclamped);
-      }
-      if (hoursToFlat === null && unclamped <= 1e-9 && before > 0) {
-        hoursToFlat = t0 + (dt * before) / Math.max(1e-12, before - unclamped);
-      }
-
-      if (week && inWeek) {
-        week.loadAh += (dc + ac) * dt;
-        week.inverterIdleAh += idle * dt;
-        week.keyOffAh += keyOff * dt;
-        week.selfDischargeAh += r.selfDischargeAPerHour * dt;
-        week.chargeAh += chargeUsedAh;
-        if (!acOn) week.acNotServedAh += acDemand * dt;
-        for (let i = 0; perLoad && i < demand.loads.length; i++) {
-          const lp = demand.loads[i];
-          if (lp.ac && !acOn) continue;
-          week.perLoadAh[i] += (driving ? lp.drivingA[how] : lp.parkedA[how]) * dt;
+        if (hoursToFlat === null && unclamped <= 1e-9 && before > 0) {
+          hoursToFlat = t0 + (dt * before) / Math.max(1e-12, before - unclamped);
         }
+
+        if (week && inWeek) {
+          week.loadAh += (dc + ac) * dt;
+          week.inverterIdleAh += idle * dt;
+          week.keyOffAh += keyOff * dt;
+          week.selfDischargeAh += r.selfDischargeAPerHour * dt;
+          week.chargeAh += chargeUsedAh;
+          if (!acOn) week.acNotServedAh += acDemand * dt;
+          for (let i = 0; perLoad && i < demand.loads.length; i++) {
+            const lp = demand.loads[i];
+            if (lp.ac && !acOn) continue;
+            week.perLoadAh[i] += (driving ? lp.drivingA[how] : lp.parkedA[how]) * dt;
+          }
+        }
+        done += dt;
+        if (lvdOpens) lvdOn = false;
       }
     }
     const soc = (ah / full) * 100;

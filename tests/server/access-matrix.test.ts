@@ -3,6 +3,7 @@ import type { Test } from 'supertest';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 
+import { unsubscribeToken } from '@/server/emails/unsubscribe';
 import { householdFixture, uniqueEmail, WREN_POWER } from './helpers';
 import { makeTestApp, TEST_ORIGIN } from './test-app';
 
@@ -87,6 +88,20 @@ const editRole = (ok: number) => ({ anonymous: 401, outsider: 404, advisor: 403,
 
 const memberIdOf = async (userId: string) =>
   (await ctx.db.selectFrom('member').select('id').where('organizationId', '=', fx.householdId).where('userId', '=', userId).executeTakeFirstOrThrow()).id;
+
+/** An e-mail recorded as sent about the rig (what the report job leaves), for the Reports routes. */
+let sentEmail: string | null = null;
+async function sentEmailId() {
+  sentEmail ??= (
+    await ctx.db
+      .insertInto('email_log')
+      .values({ idempotency_key: `matrix:${fx.rigId}`, kind: 'report', user_id: fx.users.owner.id, rig_id: fx.rigId, status: 'sent', to_address: fx.users.owner.email, subject: 'Report', html: '<p>Report <img src="cid:week-ahead"></p>', text: 'Report', chart_png: Buffer.from([0x89, 0x50, 0x4e, 0x47]), last_error: null, created_at: new Date(), sent_at: new Date() })
+      .returning('id')
+      .executeTakeFirstOrThrow()
+  ).id;
+  return sentEmail;
+}
+const PREFS = { reportsOn: true, reportWeekday: 6, reportHour: 18, timeZone: 'UTC', warningsOn: true, warnAt: 'tight', noteEmailsOn: true };
 
 const MATRIX: Record<string, Entry> = {
   'GET /api/health/': { send: (a) => a.get('/api/health'), expect: all(200) },
@@ -194,6 +209,16 @@ const MATRIX: Record<string, Entry> = {
     send: async (a) => a.post(`/api/invitations/${await pendingInvitation()}/accept`).set('Origin', TEST_ORIGIN),
     expect: { ...all(403), anonymous: 401 },
   },
+  'GET /api/rigs/:rigId/history': { send: (a, c) => a.get(`/api/rigs/${c.rigId}/history`), expect: readRig },
+  'GET /api/rigs/:rigId/emails': { send: (a, c) => a.get(`/api/rigs/${c.rigId}/emails`), expect: readRig },
+  'GET /api/rigs/:rigId/emails/:emailId': { send: async (a, c) => a.get(`/api/rigs/${c.rigId}/emails/${await sentEmailId()}`), expect: readRig },
+  'GET /api/rigs/:rigId/emails/:emailId/chart.png': { send: async (a, c) => a.get(`/api/rigs/${c.rigId}/emails/${await sentEmailId()}/chart.png`), expect: readRig },
+  'GET /api/me/email-prefs': { send: (a) => a.get('/api/me/email-prefs'), expect: { ...all(200), anonymous: 401 } },
+  'PUT /api/me/email-prefs': { send: (a) => a.put('/api/me/email-prefs').set('Origin', TEST_ORIGIN).send(PREFS), expect: { ...all(200), anonymous: 401 } },
+  // Open: the signed token is the permission (here the outsider's own).
+  'GET /api/email/unsubscribe': { send: (a) => a.get(`/api/email/unsubscribe?token=${unsubscribeToken(ctx.config.AUTH_SECRET, fx.users.outsider.id, 'notes')}`), expect: all(200) },
+  'POST /api/email/unsubscribe': { send: (a) => a.post(`/api/email/unsubscribe?token=${unsubscribeToken(ctx.config.AUTH_SECRET, fx.users.outsider.id, 'notes')}`).set('Origin', TEST_ORIGIN), expect: all(200) },
+  'GET /api/admin/email-failures': { send: (a) => a.get('/api/admin/email-failures'), expect: { ...all(403), anonymous: 401, admin: 200 } },
   'GET /api/admin/users': { send: (a) => a.get('/api/admin/users'), expect: { ...all(403), anonymous: 401, admin: 200 } },
   'PUT /api/admin/users/:userId/role': {
     send: (a) => a.put(`/api/admin/users/${fx.users.outsider.id}/role`).set('Origin', TEST_ORIGIN).send({ role: 'traveller' }),

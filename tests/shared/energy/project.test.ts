@@ -159,6 +159,21 @@ describe('inverter controls', () => {
     expect(min).toBeLessThanOrEqual(70.01);
     expect(p.series.at(-1)!.inverterOn).toBe(false);
   });
+
+  it('low-voltage disconnect: opens inside the hour it reaches the threshold, not at the next hour', () => {
+    // 5 A idle on 100 Ah AGM (5 A is the 20-hour rate: no Peukert) from 61 %: 1 Ah to the 60 % threshold
+    // takes 0.2 h; the rest of the hour the inverter is off. Stepping whole hours would end at 56 %.
+    const p = project(
+      parse(
+        bareRig({
+          battery: { chemistry: 'agm', capacityAh: 100, startSocPercent: 61, selfDischargePercentPerMonth: 0, cutoffSocPercent: 50 },
+          inverter: { ratedW: 300, idleA: 5, efficiencyPercent: 90, control: 'low-voltage-disconnect', lvdSocPercent: 60 },
+        }),
+      ),
+    );
+    expect(p.series[0].socPercent).toBeCloseTo(60, 6);
+    expect(p.parked.daysToCutoff).toBeNull();
+  });
 });
 
 describe('charging', () => {

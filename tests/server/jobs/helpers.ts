@@ -1,0 +1,69 @@
+import { spawn, type ChildProcess } from 'node:child_process';
+import { createConnection } from 'node:net';
+
+import type { AppContext } from '@/server/context';
+import { MAILDEV } from '../helpers';
+
+export type MailDevFull = { id: string; subject: string; text: string; html: string; to: { address: string }[]; headers: Record<string, string>; attachments?: { contentId: string; contentType: string }[] };
+
+export async function mailsTo(address: string, base = MAILDEV): Promise<MailDevFull[]> {
+  const all = (await (await fetch(`${base}/api/email`)).json()) as MailDevFull[];
+  return all.filter((m) => m.to.some((t) => t.address.toLowerCase() === address.toLowerCase()));
+}
+
+/** One header of the message as it arrived (maildev's parsed headers leave some out), unfolded. */
+export async function rawHeader(id: string, name: string, base = MAILDEV): Promise<string | null> {
+  const source = await (await fetch(`${base}/api/email/${id}/source`)).text();
+  const head = source.split(/\r?\n\r?\n/)[0].replace(/\r?\n[ \t]+/g, ' ');
+  const line = head.split(/\r?\n/).find((l) => l.toLowerCase().startsWith(`${name.toLowerCase()}:`));
+  return line ? line.slice(name.length + 1).trim() : null;
+}
+
+/** Polls until the check returns something truthy (the queue's workers run on their own timers). */
+export async function waitFor<T>(check: () => Promise<T | null | undefined | false>, timeoutMs = 15_000, what = 'the condition'): Promise<T> {
+  const deadline = Date.now() + timeoutMs;
+  for (;;) {
+    const v = await check();
+    if (v) return v;
+    if (Date.now() > deadline) throw new Error(`timed out waiting for ${what}`);
+    await new Promise((r) => setTimeout(r, 150));
+  }
+}
+
+/** A clock the test moves by hand. */
+export function handClock(iso: string) {
+  let now = new Date(iso);
+  return { now: () => now, set: (next: string) => (now = new Date(next)) };
+}
+
+export const emailLog = (ctx: AppContext, key: string) => ctx.db.selectFrom('email_log').selectAll().where('idempotency_key', '=', key).executeTakeFirst();
+
+const portOpen = (port: number) =>
+  new Promise<boolean>((resolve) => {
+    const s = createConnection({ host: '127.0.0.1', port }, () => {
+      s.destroy();
+      resolve(true);
+    });
+    s.on('error', () => resolve(false));
+  });
+
+/** A second, private maildev (its own ports), started and stopped by the test: an SMTP server that can go down. */
+export function privateMaildev(smtp: number, web: number) {
+  let child: ChildProcess | null = null;
+  return {
+    base: `http://127.0.0.1:${web}`,
+    async start() {
+      child = spawn('node_modules/.bin/maildev', ['--ip', '127.0.0.1', '--web-ip', '127.0.0.1', '--smtp', String(smtp), '--web', String(web), '--silent'], { stdio: 'ignore' });
+      await waitFor(async () => (await portOpen(smtp)) && (await portOpen(web)), 15_000, `maildev on ${smtp}`);
+    },
+    async stop() {
+      if (!child) return;
+      const c = child;
+      child = null;
+      await new Promise<void>((resolve) => {
+        c.once('exit', () => resolve());
+        c.kill('SIGTERM');
+      });
+    },
+  };
+}

@@ -1,0 +1,93 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+
+import { checkMargin, warningKey } from '@/server/jobs/margin';
+import { signIn, verifiedUser, WREN_POWER } from '../helpers';
+import { makeTestApp, TEST_ORIGIN } from '../test-app';
+import { emailLog, mailsTo, waitFor } from './helpers';
+
+let ctx: Awaited<ReturnType<typeof makeTestApp>>;
+let owner: { id: string; email: string };
+let member: { id: string; email: string };
+let agent: Awaited<ReturnType<typeof signIn>>;
+let rigId: string;
+
+// A rig whose margin the test moves with the planned stay alone: 400 Ah of AGM and a 45 W fridge at 35 %
+// lasts several days, so a stay of 1 day is Comfortable, one just under the days is Tight, one over is Short
+// (the thresholds in shared/energy/defaults.ts: Tight below max(1 day, a quarter of the stay)).
+const POWER = { ...WREN_POWER, battery: { chemistry: 'agm', capacityAh: 400 }, inverter: null };
+
+async function setStay(days: number) {
+  const rig = (await agent.get(`/api/rigs/${rigId}`).expect(200)).body;
+  await agent.patch(`/api/rigs/${rigId}`).set('Origin', TEST_ORIGIN).send({ version: rig.version, power: { ...rig.power, plannedStayDays: days } }).expect(200);
+  return (await agent.get(`/api/rigs/${rigId}/outlook`).expect(200)).body;
+}
+const warnings = async (email: string) => (await mailsTo(email)).filter((m) => /: margin (Tight|Short)/.test(m.subject));
+
+beforeAll(async () => {
+  ctx = await makeTestApp({ RUN_WORKERS: 'true' });
+  await ctx.jobs.start({ workers: true });
+  owner = await verifiedUser(ctx, 'margin-owner');
+  member = await verifiedUser(ctx, 'margin-member');
+  agent = await signIn(ctx.app, owner.email);
+  const created = await agent
+    .post('/api/rigs')
+    .set('Origin', TEST_ORIGIN)
+    .send({ name: 'Margin van', vehicle: 'test', power: { ...POWER, plannedStayDays: 1 }, loads: [{ name: 'Fridge', supply: 'dc', watts: 45, dutyPercent: 35, hoursPerDay: 24 }] })
+    .expect(201);
+  rigId = created.body.id;
+  const householdId = (await agent.get(`/api/rigs/${rigId}`)).body.householdId;
+  await ctx.auth.api.addMember({ body: { userId: member.id, role: 'member', organizationId: householdId } });
+  // The member hears only of Short.
+  const memberAgent = await signIn(ctx.app, member.email);
+  await memberAgent.put('/api/me/email-prefs').set('Origin', TEST_ORIGIN).send({ reportsOn: false, reportWeekday: 6, reportHour: 18, timeZone: 'UTC', warningsOn: true, warnAt: 'short', noteEmailsOn: false }).expect(200);
+});
+afterAll(async () => {
+  await ctx.jobs.stop();
+  await ctx.db.destroy();
+});
+
+describe('low-margin warnings', () => {
+  it('warns once per fall, says who changed what, and again only after a recovery', async () => {
+    const start = await setStay(1);
+    expect(start.margin.state).toBe('comfortable');
+    await checkMargin(ctx, rigId);
+    const days = start.routine.daysToCutoff as number;
+    expect(days).toBeGreaterThan(3);
+
+    // Comfortable → Tight: one warning to the owner (the member waits for Short).
+    const tight = await setStay(Math.floor(days * 10) / 10 - 0.3);
+    expect(tight.margin.state).toBe('tight');
+    const first = await waitFor(async () => (await warnings(owner.email))[0], 15_000, 'the first warning');
+    expect(first.subject).toBe(`Margin van: margin Tight, ${start.parked.daysToCutoff.toFixed(1)} days parked`);
+    expect(first.text).toMatch(/margin-owner changed planned stay 1 → [\d.]+ days: days parked [\d.]+ days → [\d.]+ days\./);
+    expect(first.text).toContain('THE TOP FIX');
+
+    // Still Tight after another change: nothing more.
+    await setStay(Math.floor(days * 10) / 10 - 0.2);
+    await checkMargin(ctx, rigId);
+    await new Promise((r) => setTimeout(r, 1500));
+    expect(await warnings(owner.email)).toHaveLength(1);
+    expect(await warnings(member.email)).toHaveLength(0);
+
+    // Recovery, then a fall to Short: a second warning to the owner, the first to the member.
+    expect((await setStay(1)).margin.state).toBe('comfortable');
+    await checkMargin(ctx, rigId);
+    expect((await setStay(Math.ceil(days) + 2)).margin.state).toBe('short');
+    await checkMargin(ctx, rigId);
+    await waitFor(async () => (await warnings(owner.email)).length === 2 && (await warnings(member.email)).length === 1, 15_000, 'the second fall’s warnings');
+    expect((await emailLog(ctx, warningKey(owner.id, rigId, 2)))?.status).toBe('sent');
+    await new Promise((r) => setTimeout(r, 1000));
+    expect(await warnings(owner.email)).toHaveLength(2);
+  });
+
+  it('sends nothing to someone who turned warnings off', async () => {
+    await ctx.db.updateTable('email_prefs').set({ warnings_on: false }).where('user_id', '=', member.id).execute();
+    await setStay(1);
+    await checkMargin(ctx, rigId);
+    await setStay(60);
+    const result = await checkMargin(ctx, rigId);
+    expect(result.state).toBe('short');
+    await waitFor(async () => (await warnings(owner.email)).length === 3, 15_000, 'the owner’s third warning');
+    expect(await warnings(member.email)).toHaveLength(1);
+  });
+});
