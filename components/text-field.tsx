@@ -9,6 +9,7 @@ export function TextField<T extends FieldValues>({
   name,
   label,
   hint,
+  style,
   ...input
 }: { control: Control<T>; name: FieldPath<T>; label: string; hint?: string } & Omit<TextInputProps, 'value' | 'onChangeText'>) {
   const id = `field-${name}`;
@@ -28,8 +29,9 @@ export function TextField<T extends FieldValues>({
             value={field.value ?? ''}
             onChangeText={field.onChange}
             onBlur={field.onBlur}
-            style={[styles.input, fieldState.error ? styles.inputError : null]}
+            placeholderTextColor={colors.inkSoft}
             {...input}
+            style={[styles.input, fieldState.error ? styles.inputError : null, style]}
           />
           {hint && !fieldState.error ? <Text style={styles.hint}>{hint}</Text> : null}
           {fieldState.error ? (

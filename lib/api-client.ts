@@ -1,6 +1,9 @@
 // One fetch wrapper for every feature: same origin in production, EXPO_PUBLIC_API_URL in `npm run dev`.
 const base = process.env.EXPO_PUBLIC_API_URL ?? '';
 
+/** The full address of an API path, for what is not fetched as JSON (an e-mail shown in a frame). */
+export const apiUrl = (path: string) => base + path;
+
 /** A problem-style error from the API, with the fields that were wrong. */
 export class ApiError extends Error {
   constructor(

@@ -8,7 +8,7 @@ export default function AppLayout() {
   return (
     <SessionGate>
       {(me) => (
-        <AppShell account={<AccountMenu me={me} />} accountCompact={<AccountMenu me={me} compact />}>
+        <AppShell account={<AccountMenu me={me} />} accountCompact={<AccountMenu me={me} compact />} advisor={me.user.role === 'advisor' || me.households.some((h) => h.role === 'advisor')}>
           <Slot />
         </AppShell>
       )}

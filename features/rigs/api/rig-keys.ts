@@ -2,7 +2,10 @@
 export const rigKeys = {
   all: ['rigs'] as const,
   list: () => [...rigKeys.all, 'list'] as const,
+  clients: () => [...rigKeys.all, 'clients'] as const,
   detail: (rigId: string) => [...rigKeys.all, 'detail', rigId] as const,
   outlook: (rigId: string) => [...rigKeys.all, 'outlook', rigId] as const,
   cableRuns: (rigId: string) => [...rigKeys.all, 'cable-runs', rigId] as const,
+  history: (rigId: string) => [...rigKeys.all, 'history', rigId] as const,
+  emails: (rigId: string) => [...rigKeys.all, 'emails', rigId] as const,
 };

@@ -34,7 +34,13 @@ function useRigMutation<V, R>(rigId: string, fn: (v: V) => Promise<R>) {
   const client = useQueryClient();
   return useMutation({
     mutationFn: fn,
-    onSuccess: () => Promise.all([client.invalidateQueries({ queryKey: rigKeys.detail(rigId) }), client.invalidateQueries({ queryKey: rigKeys.outlook(rigId) }), client.invalidateQueries({ queryKey: rigKeys.list() })]),
+    onSuccess: () =>
+      Promise.all([
+        client.invalidateQueries({ queryKey: rigKeys.detail(rigId) }),
+        client.invalidateQueries({ queryKey: rigKeys.outlook(rigId) }),
+        client.invalidateQueries({ queryKey: rigKeys.history(rigId) }),
+        client.invalidateQueries({ queryKey: rigKeys.list() }),
+      ]),
   });
 }
 

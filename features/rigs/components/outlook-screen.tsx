@@ -20,9 +20,10 @@ const FIX_TITLE: Record<string, string> = {
 };
 
 /** Outlook: the headline figures, margin, the charge chart, the biggest drains, warnings and Fixes. */
-export function OutlookScreen({ rigId }: { rigId: string }) {
+/** `narrow`: lay out as on a phone even on a wide screen (the Outlook shares the width with Notes on Clients). */
+export function OutlookScreen({ rigId, narrow = false }: { rigId: string; narrow?: boolean }) {
   const outlook = useOutlookQuery(rigId);
-  const wide = useIsWide();
+  const wide = useIsWide() && !narrow;
   if (outlook.isPending) return <ActivityIndicator color={colors.night} />;
   if (outlook.isError)
     return (

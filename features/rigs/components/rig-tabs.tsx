@@ -5,8 +5,8 @@ import { Small, Title } from '@/components/ui';
 import { colors, radius, space, type } from '@/shared/theme';
 import { useRigQuery } from '../api/rig';
 
-/** The rig's name and its screens: Outlook, Loads, Power, Try a load, People. */
-export function RigTabs({ rigId }: { rigId: string }) {
+/** The rig's name and its screens; `unreadNotes` (from the Notes feature) shows on the Notes tab. */
+export function RigTabs({ rigId, unreadNotes = 0 }: { rigId: string; unreadNotes?: number }) {
   const rig = useRigQuery(rigId);
   const pathname = usePathname();
   const tabs: { href: Href; label: string; path: string }[] = [
@@ -15,7 +15,10 @@ export function RigTabs({ rigId }: { rigId: string }) {
     { href: { pathname: '/rigs/[rigId]/power', params: { rigId } }, label: 'Power', path: `/rigs/${rigId}/power` },
     { href: { pathname: '/rigs/[rigId]/try', params: { rigId } }, label: 'Try a load', path: `/rigs/${rigId}/try` },
     { href: { pathname: '/rigs/[rigId]/cable-runs', params: { rigId } }, label: 'Cable runs', path: `/rigs/${rigId}/cable-runs` },
+    { href: { pathname: '/rigs/[rigId]/notes', params: { rigId } }, label: unreadNotes ? `Notes (${unreadNotes} new)` : 'Notes', path: `/rigs/${rigId}/notes` },
     { href: { pathname: '/rigs/[rigId]/people', params: { rigId } }, label: 'People', path: `/rigs/${rigId}/people` },
+    { href: { pathname: '/rigs/[rigId]/history', params: { rigId } }, label: 'History', path: `/rigs/${rigId}/history` },
+    { href: { pathname: '/rigs/[rigId]/reports', params: { rigId } }, label: 'Reports', path: `/rigs/${rigId}/reports` },
   ];
   return (
     <View style={{ gap: space.sm }}>
@@ -30,8 +33,8 @@ export function RigTabs({ rigId }: { rigId: string }) {
         {tabs.map((t) => {
           const on = pathname === t.path;
           return (
-            <Link key={t.label} href={t.href} asChild>
-              <Pressable role="tab" aria-selected={on} testID={`tab-${t.label}`} style={StyleSheet.flatten([styles.tab, on && styles.tabOn])}>
+            <Link key={t.path} href={t.href} asChild>
+              <Pressable role="tab" aria-selected={on} testID={`tab-${t.label.replace(/ \(.*\)$/, '')}`} style={StyleSheet.flatten([styles.tab, on && styles.tabOn])}>
                 <Text style={[styles.label, on && styles.labelOn]}>{t.label}</Text>
               </Pressable>
             </Link>

@@ -3,6 +3,8 @@ import { Pressable, StyleSheet, Text, View } from 'react-native';
 import { Body, Card, Heading, Small, Title } from '@/components/ui';
 import { type Units, useUnits } from '@/components/units';
 import { colors, space, type } from '@/shared/theme';
+import { DeliveryProblemsCard } from './delivery-problems-card';
+import { EmailPrefsCard } from './email-prefs-card';
 
 const CHOICES: { key: keyof Units; label: string; options: { value: string; label: string }[] }[] = [
   { key: 'power', label: 'Device power', options: [{ value: 'W', label: 'Watts (W)' }, { value: 'A', label: 'Amps at the battery (A)' }] },
@@ -11,12 +13,13 @@ const CHOICES: { key: keyof Units; label: string; options: { value: string; labe
   { key: 'wire', label: 'Wire sizes', options: [{ value: 'AWG', label: 'AWG' }, { value: 'mm2', label: 'mm²' }] },
 ];
 
-/** Settings: units (kept on this device). */
-export function SettingsScreen() {
+/** Settings: e-mail preferences (kept on the server), units (kept on this device), and for admins the e-mail failures. */
+export function SettingsScreen({ isAdmin = false }: { isAdmin?: boolean }) {
   const { units, setUnits } = useUnits();
   return (
     <View style={{ gap: space.lg }} testID="settings-screen">
       <Title>Settings</Title>
+      <EmailPrefsCard />
       <Card>
         <Heading>Units</Heading>
         <Small>Kept on this device. The model always works in amps and amp-hours at the battery.</Small>
@@ -36,6 +39,7 @@ export function SettingsScreen() {
           </View>
         ))}
       </Card>
+      {isAdmin ? <DeliveryProblemsCard /> : null}
     </View>
   );
 }

@@ -8,18 +8,20 @@ import { colors, space, type } from '@/shared/theme';
 
 const mark = require('@/assets/images/mark.png');
 
-const destinations: { href: Href; label: string }[] = [
+const destinations: { href: Href; label: string; advisorOnly?: boolean }[] = [
   { href: '/', label: 'Rigs' },
+  { href: '/clients', label: 'Clients', advisorOnly: true },
   { href: '/cable-runs', label: 'Cable runs' },
   { href: '/settings', label: 'Settings' },
 ];
 
 /** Phone first: a top bar and a bottom bar; from WIDE_BREAKPOINT a side rail beside the content. */
-export function AppShell({ children, account, accountCompact }: { children: ReactNode; account?: ReactNode; accountCompact?: ReactNode }) {
+/** `advisor`: show Clients (an advisor account, or anyone advising some household). */
+export function AppShell({ children, account, accountCompact, advisor = false }: { children: ReactNode; account?: ReactNode; accountCompact?: ReactNode; advisor?: boolean }) {
   const wide = useIsWide();
   const pathname = usePathname();
 
-  const nav = destinations.map((d) => {
+  const nav = destinations.filter((d) => advisor || !d.advisorOnly).map((d) => {
     const active = pathname === d.href;
     return (
       <Link key={d.label} href={d.href} asChild>

@@ -1,13 +1,15 @@
 import { Slot, useLocalSearchParams } from 'expo-router';
 import { View } from 'react-native';
 
+import { useNotesQuery } from '@/features/notes/api/notes';
 import { RigTabs } from '@/features/rigs/components/rig-tabs';
 
 export default function RigLayout() {
   const { rigId } = useLocalSearchParams<{ rigId: string }>();
+  const notes = useNotesQuery(rigId);
   return (
     <View style={{ gap: 16 }}>
-      <RigTabs rigId={rigId} />
+      <RigTabs rigId={rigId} unreadNotes={notes.data?.unread} />
       <Slot />
     </View>
   );

@@ -1,0 +1,6 @@
+import { Small } from '@/components/ui';
+
+/** On a phone app the e-mail is in the mail program; the web shows it in a frame (email-frame.web.tsx). */
+export function EmailFrame(_props: { rigId: string; emailId: string; title: string }) {
+  return <Small>Open this e-mail in your mail program; the web app shows it here.</Small>;
+}

@@ -1,0 +1,48 @@
+import { ActivityIndicator, StyleSheet, Text, View } from 'react-native';
+
+import { formatDays, formatWhen } from '@/components/format';
+import { Body, Card, Heading, Small } from '@/components/ui';
+import { colors, space, type } from '@/shared/theme';
+import { useHistoryQuery } from '../api/history';
+import { useOutlookQuery } from '../api/rig';
+
+/** History: who changed what on the rig and when, with the Days parked before and after each change. */
+export function HistoryScreen({ rigId }: { rigId: string }) {
+  const history = useHistoryQuery(rigId);
+  const outlook = useOutlookQuery(rigId);
+  const horizon = outlook.data?.horizonDays ?? 14;
+  if (history.isPending) return <ActivityIndicator color={colors.night} />;
+  if (history.isError) return <Body style={{ color: colors.short }}>{history.error.message}</Body>;
+  return (
+    <Card testID="history">
+      <Heading>History</Heading>
+      {history.data.length ? null : <Small>No changes yet. Edits to loads, the battery, the inverter, charging and the routine, and people joining or leaving, show here.</Small>}
+      {history.data.map((h) => {
+        const moved = h.daysParkedBefore !== h.daysParkedAfter;
+        return (
+          <View key={h.id} style={styles.row} testID={`history-${h.kind}`}>
+            <View style={{ flex: 1, minWidth: 200, gap: 2 }}>
+              <Text style={styles.summary}>
+                {h.actor.name} {h.summary}
+              </Text>
+              <Small>{formatWhen(h.at)}</Small>
+            </View>
+            <View style={styles.days}>
+              <Small>Days parked</Small>
+              <Text style={[styles.figure, moved && (h.daysParkedAfter ?? Infinity) < (h.daysParkedBefore ?? Infinity) ? { color: colors.short } : null]}>
+                {moved ? `${formatDays(h.daysParkedBefore, horizon)} → ${formatDays(h.daysParkedAfter, horizon)}` : `${formatDays(h.daysParkedAfter, horizon)} (no change)`}
+              </Text>
+            </View>
+          </View>
+        );
+      })}
+    </Card>
+  );
+}
+
+const styles = StyleSheet.create({
+  row: { flexDirection: 'row', flexWrap: 'wrap', gap: space.md, paddingVertical: space.sm, borderTopWidth: 1, borderTopColor: colors.line },
+  summary: { ...type.body, color: colors.ink },
+  days: { alignItems: 'flex-end', minWidth: 150 },
+  figure: { ...type.heading, color: colors.ink },
+});

@@ -1,0 +1,74 @@
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useForm, useWatch } from 'react-hook-form';
+import { ActivityIndicator, Text } from 'react-native';
+
+import { ChoiceField, NumberField, SwitchField } from '@/components/form';
+import { TextField } from '@/components/text-field';
+import { Body, Button, Card, Heading, Small } from '@/components/ui';
+import { type EmailPrefs, emailPrefsSchema } from '@/shared/schemas/email-prefs';
+import { colors } from '@/shared/theme';
+import { useEmailPrefsMutation, useEmailPrefsQuery } from '../api/email-prefs';
+
+const WEEKDAYS = ['Monday', 'Tuesday', 'Wednesday', 'Thursday', 'Friday', 'Saturday', 'Sunday'].map((label, value) => ({ value, label }));
+const deviceZone = () => {
+  try {
+    return Intl.DateTimeFormat().resolvedOptions().timeZone || 'UTC';
+  } catch {
+    return 'UTC';
+  }
+};
+
+/** E-mail preferences: the weekly report's day and hour in your zone, warnings and their threshold, note e-mails. */
+export function EmailPrefsCard() {
+  const prefs = useEmailPrefsQuery();
+  if (prefs.isPending) return <ActivityIndicator color={colors.night} />;
+  if (prefs.isError) return <Body style={{ color: colors.short }}>{prefs.error.message}</Body>;
+  // Until someone saves, the zone offered is this device's.
+  const initial = prefs.data.saved ? prefs.data : { ...prefs.data, timeZone: deviceZone() };
+  return <PrefsForm initial={initial} saved={prefs.data.saved} />;
+}
+
+function PrefsForm({ initial, saved }: { initial: EmailPrefs; saved: boolean }) {
+  const save = useEmailPrefsMutation();
+  const { control, handleSubmit, setError } = useForm<EmailPrefs>({ resolver: zodResolver(emailPrefsSchema), defaultValues: initial });
+  const reportsOn = useWatch({ control, name: 'reportsOn' });
+  const warningsOn = useWatch({ control, name: 'warningsOn' });
+  const submit = handleSubmit(async (values) => {
+    try {
+      await save.mutateAsync(values);
+    } catch (err) {
+      const fields = (err as { fields?: { path: string; message: string }[] }).fields ?? [];
+      for (const f of fields) setError(f.path as keyof EmailPrefs, { message: f.message });
+      if (!fields.length) setError('timeZone', { message: err instanceof Error ? err.message : 'Could not save.' });
+    }
+  });
+  return (
+    <Card testID="email-prefs">
+      <Heading>E-mail</Heading>
+      <Small>For every rig you share. Each e-mail also has a link that turns its kind off in one click.</Small>
+      <SwitchField control={control} name="reportsOn" label="Weekly budget report" hint="Days parked, the margin, the biggest drains and the top Fixes for the week ahead." />
+      {reportsOn ? (
+        <>
+          <ChoiceField control={control} name="reportWeekday" label="Report day" options={WEEKDAYS} />
+          <NumberField control={control} name="reportHour" label="Report hour (0 to 23)" unit="h" />
+          <TextField control={control} name="timeZone" label="Time zone" hint="A name such as Europe/Lisbon or America/Denver." autoCapitalize="none" autoCorrect={false} />
+        </>
+      ) : null}
+      <SwitchField control={control} name="warningsOn" label="Low-margin warning" hint="One e-mail when a rig's margin falls, with what changed and the top Fix; no repeat until it recovers." />
+      {warningsOn ? (
+        <ChoiceField
+          control={control}
+          name="warnAt"
+          label="Warn me when the margin is"
+          options={[
+            { value: 'tight', label: 'Tight or Short' },
+            { value: 'short', label: 'Short only' },
+          ]}
+        />
+      ) : null}
+      <SwitchField control={control} name="noteEmailsOn" label="New notes" hint="Notes written within 10 minutes come together in one e-mail." />
+      <Button label="Save e-mail preferences" onPress={submit} busy={save.isPending} testID="save-email-prefs" />
+      {save.isSuccess ? <Text role="status" style={{ color: colors.comfortable }}>Saved.</Text> : !saved ? <Small>Not saved yet: these are the defaults.</Small> : null}
+    </Card>
+  );
+}

@@ -1,0 +1,77 @@
+import path from 'node:path';
+import type { Browser } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+
+import { launchChromium, PHONE, SHOTS, signInAs, WIDE } from './browser';
+
+let browser: Browser;
+beforeAll(async () => {
+  browser = await launchChromium();
+});
+afterAll(async () => {
+  await browser?.close();
+});
+
+describe('notes between an advisor and a household', () => {
+  it('the advisor writes on the fridge from Clients; the owner sees it unread, replies and resolves; at phone and wide sizes', async () => {
+    const text = `Duty cycle looks high for a 40 L fridge (${Date.now()}).`;
+
+    // The advisor on a phone: Clients lists Wren; opening it goes to its Notes.
+    const advisor = await browser.newPage({ viewport: PHONE });
+    await signInAs(advisor, 'marguerite@example.org');
+    await advisor.getByRole('link', { name: 'Clients' }).click();
+    await advisor.getByTestId('clients-screen').waitFor();
+    await advisor.getByTestId('client-Wren').click();
+    await advisor.getByTestId('new-note').waitFor();
+    await advisor.getByRole('radio', { name: 'Compressor fridge (40 L)' }).click();
+    await advisor.getByTestId('field-body').fill(text);
+    await advisor.getByTestId('post-note').click();
+    const thread = advisor.locator('[data-testid^="thread-"]', { hasText: text });
+    await thread.waitFor();
+    expect(await thread.innerText()).toContain('About Compressor fridge (40 L)');
+    await advisor.screenshot({ path: path.join(SHOTS, 'notes-advisor-phone.png'), fullPage: true });
+
+    // The owner on a wide screen: the Notes tab counts it, she replies and resolves the thread.
+    const owner = await browser.newPage({ viewport: WIDE });
+    await signInAs(owner, 'ines@example.org');
+    await owner.getByTestId('open-Wren').click();
+    await owner.getByTestId('outlook-screen').waitFor();
+    const tab = owner.getByTestId('tab-Notes');
+    await expect.poll(() => tab.innerText()).toMatch(/^Notes \(\d+ new\)$/);
+    await tab.click();
+    const ownerThread = owner.locator('[data-testid^="thread-"]', { hasText: text });
+    await ownerThread.waitFor();
+    const threadId = (await ownerThread.getAttribute('data-testid'))!.replace('thread-', '');
+    await owner.getByTestId(`reply-${threadId}`).click();
+    await ownerThread.getByTestId('field-body').fill('Turned the thermostat down a notch.');
+    await owner.getByTestId(`post-reply-${threadId}`).click();
+    await ownerThread.getByText('Turned the thermostat down a notch.').waitFor();
+    await owner.getByTestId(`resolve-${threadId}`).click();
+    await owner.getByTestId('toggle-resolved').waitFor();
+    await expect.poll(() => tab.innerText()).toBe('Notes');
+    await owner.screenshot({ path: path.join(SHOTS, 'notes-owner-wide.png'), fullPage: true });
+
+    // The advisor on a wide screen: Clients shows the unread reply; the rig opens with Notes beside it.
+    const advisorWide = await browser.newPage({ viewport: WIDE });
+    await signInAs(advisorWide, 'marguerite@example.org');
+    await advisorWide.getByRole('link', { name: 'Clients' }).click();
+    await advisorWide.getByTestId('unread-Wren').waitFor();
+    await advisorWide.getByTestId('client-Wren').click();
+    await advisorWide.getByTestId('client-detail').waitFor();
+    await advisorWide.getByTestId('outlook-screen').waitFor();
+    await advisorWide.getByTestId('toggle-resolved').click();
+    const resolved = advisorWide.locator('[data-testid^="thread-"]', { hasText: text });
+    await resolved.getByText('Turned the thermostat down a notch.').waitFor();
+    expect(await resolved.innerText()).toContain('resolved');
+    await advisorWide.screenshot({ path: path.join(SHOTS, 'clients-advisor-wide.png'), fullPage: true });
+
+    // The owner on a phone sees the same thread, resolved.
+    const ownerPhone = await browser.newPage({ viewport: PHONE });
+    await signInAs(ownerPhone, 'ines@example.org');
+    await ownerPhone.getByTestId('open-Wren').click();
+    await ownerPhone.getByTestId('tab-Notes').click();
+    await ownerPhone.getByTestId('toggle-resolved').click();
+    await ownerPhone.locator('[data-testid^="thread-"]', { hasText: text }).waitFor();
+    await ownerPhone.screenshot({ path: path.join(SHOTS, 'notes-owner-phone.png'), fullPage: true });
+  }, 120_000);
+});
