@@ -24,8 +24,8 @@ export function EmailPrefsCard() {
   if (prefs.isPending) return <ActivityIndicator color={colors.night} />;
   if (prefs.isError) return <Body style={{ color: colors.short }}>{prefs.error.message}</Body>;
   // Until someone saves, the zone offered is this device's.
-  const initial = prefs.data.saved ? prefs.data : { ...prefs.data, timeZone: deviceZone() };
-  return <PrefsForm initial={initial} saved={prefs.data.saved} />;
+  const { saved, ...values } = prefs.data;
+  return <PrefsForm initial={saved ? values : { ...values, timeZone: deviceZone() }} saved={saved} />;
 }
 
 function PrefsForm({ initial, saved }: { initial: EmailPrefs; saved: boolean }) {
@@ -33,7 +33,7 @@ function PrefsForm({ initial, saved }: { initial: EmailPrefs; saved: boolean }) 
   const { control, handleSubmit, setError } = useForm<EmailPrefs>({ resolver: zodResolver(emailPrefsSchema), defaultValues: initial });
   const reportsOn = useWatch({ control, name: 'reportsOn' });
   const warningsOn = useWatch({ control, name: 'warningsOn' });
-  const submit = handleSubmit(async (values) => {
+  const submit = handleSubmit(async ({ ...values }) => {
     try {
       await save.mutateAsync(values);
     } catch (err) {

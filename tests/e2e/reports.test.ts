@@ -1,0 +1,69 @@
+import path from 'node:path';
+import { pino } from 'pino';
+import type { Browser } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+
+import { loadConfig } from '@/server/config';
+import { type AppContext, createContext } from '@/server/context';
+import { enqueueDueReports } from '@/server/jobs/reports';
+import { launchChromium, PHONE, SHOTS, signInAs, WIDE } from './browser';
+
+let browser: Browser;
+let ctx: AppContext;
+beforeAll(async () => {
+  browser = await launchChromium();
+  // The schedule's tick, run from here at a time the test picks; the server's own workers send the e-mail.
+  const config = loadConfig({ ...process.env, RUN_WORKERS: 'false', LOG_LEVEL: 'silent' });
+  ctx = createContext(process.env, { config, logger: pino({ level: 'silent' }) });
+  await ctx.jobs.start();
+});
+afterAll(async () => {
+  await browser?.close();
+  await ctx?.jobs.stop();
+  await ctx?.db.destroy();
+});
+
+const WEEKDAY = ['Monday', 'Tuesday', 'Wednesday', 'Thursday', 'Friday', 'Saturday', 'Sunday'];
+
+describe('weekly report settings and the Reports screen', () => {
+  it('Tobi chooses his report hour in Settings; the report arrives and shows on Reports as sent', async () => {
+    const now = new Date();
+    const weekday = (now.getUTCDay() + 6) % 7;
+    const page = await browser.newPage({ viewport: PHONE });
+    await signInAs(page, 'tobi@example.org');
+    await page.getByRole('link', { name: 'Settings' }).click();
+    await page.getByTestId('email-prefs').waitFor();
+    await page.getByRole('radio', { name: WEEKDAY[weekday] }).click();
+    const hour = page.getByTestId('field-reportHour');
+    await hour.fill('');
+    await hour.fill(String(now.getUTCHours()));
+    await page.getByTestId('field-timeZone').fill('Mars/Olympus');
+    await page.getByTestId('save-email-prefs').click();
+    await page.getByText('Not a time zone this server knows').waitFor();
+    await page.getByTestId('field-timeZone').fill('UTC');
+    await page.getByTestId('save-email-prefs').click();
+    await page.getByText('Saved.').waitFor();
+    await page.screenshot({ path: path.join(SHOTS, 'settings-email-phone.png'), fullPage: true });
+
+    expect(await enqueueDueReports(ctx, ctx.jobs, now)).toBeGreaterThanOrEqual(1);
+
+    const wide = await browser.newPage({ viewport: WIDE });
+    await signInAs(wide, 'tobi@example.org');
+    await wide.getByTestId('open-Wren').click();
+    await wide.getByTestId('tab-Reports').click();
+    const row = wide.locator('[data-testid^="email-"]', { hasText: 'Weekly report to Tobi' }).first();
+    await expect.poll(async () => {
+      await wide.reload();
+      await wide.getByTestId('reports').waitFor();
+      return row.count();
+    }, { timeout: 20_000 }).toBeGreaterThan(0);
+    await row.click();
+    const frame = wide.frameLocator('[data-testid="email-frame"]');
+    await frame.getByText('Wren: your week ahead').waitFor();
+    await frame.getByText('Days on your routine', { exact: true }).first().waitFor();
+    // The chart image loads from the server (a PNG drawn there), not a broken picture.
+    const loaded = await frame.locator('img[alt^="State of charge"]').evaluate((img: HTMLImageElement) => img.complete && img.naturalWidth > 500);
+    expect(loaded).toBe(true);
+    await wide.screenshot({ path: path.join(SHOTS, 'reports-wide.png'), fullPage: true });
+  }, 90_000);
+});
