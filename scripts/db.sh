@@ -6,7 +6,7 @@ set -euo pipefail
 ROOT=$(cd "$(dirname "$0")/.." && pwd)
 PGPORT=${PGPORT:-54329}
 DATA=${KEYOFF_PGDATA:-$ROOT/.data/pg}
-DATABASES=${KEYOFF_DATABASES:-keyoff keyoff_test}
+DATABASES=${KEYOFF_DATABASES:-keyoff keyoff_test keyoff_bench}
 
 log() { echo "[db] $*"; }
 
