@@ -5,7 +5,7 @@ import type { Logger } from 'pino';
 import type { Db } from '@/db/client';
 import { accountAc, accountRoles, householdAc, householdRoles } from '@/shared/permissions';
 import type { Config } from './config';
-import { type Mailer, templates } from './mail';
+import { type Mail, type Mailer, templates } from './mail';
 
 /** The header the server sets from the socket before the auth handler, so its rate limit sees the real client. */
 export const CLIENT_IP_HEADER = 'x-keyoff-client-ip';
@@ -17,13 +17,15 @@ export const INVITATION_DAYS = 7;
  * account roles (admin plugin: traveller, advisor, admin) and households (organization plugin: owner,
  * member, advisor).
  */
-export function createAuth({ config, db, mailer, logger }: { config: Config; db: Db; mailer: Mailer; logger: Logger }) {
-  const send = async (mail: Parameters<Mailer['send']>[0]) => {
+export function createAuth({ config, db, mailer, logger, retryMail }: { config: Config; db: Db; mailer: Mailer; logger: Logger; retryMail?: (mail: Mail) => Promise<void> }) {
+  // Account e-mails go out at once (someone is waiting for the link); when the SMTP server fails, the
+  // mail goes to the job queue, which retries it with backoff. The request itself succeeds either way.
+  const send = async (mail: Mail) => {
     try {
       await mailer.send(mail);
     } catch (err) {
-      // better-auth only logs a failing hook; we log it too, with the address, and the request goes on.
-      logger.error({ err, to: mail.to }, 'mail could not be sent');
+      logger.error({ err, to: mail.to }, 'mail could not be sent; queued for retry');
+      await retryMail?.(mail).catch((queueErr) => logger.error({ err: queueErr, to: mail.to }, 'mail could not be queued either'));
     }
   };
 

@@ -15,8 +15,8 @@ export function createContext(env: NodeJS.ProcessEnv = process.env, overrides: P
   const logger = overrides.logger ?? pino({ level: config.LOG_LEVEL });
   const db = overrides.db ?? createDb(config.DATABASE_URL);
   const mailer = overrides.mailer ?? createMailer(config, logger);
-  const auth = overrides.auth ?? createAuth({ config, db, mailer, logger });
   const clock = overrides.clock ?? { now: () => new Date() };
   const jobs = overrides.jobs ?? createJobs({ config, logger, db, mailer, clock });
+  const auth = overrides.auth ?? createAuth({ config, db, mailer, logger, retryMail: jobs.retryMail });
   return { config, logger, db, mailer, auth, clock, jobs };
 }

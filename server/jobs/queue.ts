@@ -1,5 +1,7 @@
 import PgBoss from 'pg-boss';
 
+import type { Mail } from '../mail';
+
 import { checkMargin, queueDailyMarginChecks } from './margin';
 import { sendNoteDigest } from './notes';
 import { enqueueDueReports, sendReport, type ReportJob } from './reports';
@@ -14,6 +16,8 @@ export type Jobs = {
   rigChanged: (rigId: string) => Promise<void>;
   /** A new note: tell the others on the rig, gathered over NOTE_EMAIL_GATHER_SECONDS. */
   noteWritten: (rigId: string, recipients: string[]) => Promise<void>;
+  /** An account e-mail that failed at once: retried with backoff until the SMTP server takes it. */
+  retryMail: (mail: Mail) => Promise<void>;
 };
 
 /** pg-boss on the project's own PostgreSQL: jobs survive restarts and several server processes share them. */
@@ -58,6 +62,7 @@ export function createJobs(deps: JobDeps): Jobs {
         await boss.createQueue(QUEUES.reportSend, { name: QUEUES.reportSend, ...retry });
         await boss.createQueue(QUEUES.marginCheck, { name: QUEUES.marginCheck, policy: 'short', ...retry });
         await boss.createQueue(QUEUES.noteDigest, { name: QUEUES.noteDigest, policy: 'short', ...retry });
+        await boss.createQueue(QUEUES.mailRetry, { name: QUEUES.mailRetry, ...retry });
         if (opts.workers ?? config.RUN_WORKERS) {
           if (!config.RUN_WORKERS) throw new Error('workers asked for, but RUN_WORKERS is false');
           await boss.schedule(QUEUES.reportsTick, '*/10 * * * *', {});
@@ -67,6 +72,7 @@ export function createJobs(deps: JobDeps): Jobs {
           await each<ReportJob>(QUEUES.reportSend, (d) => sendReport(deps, d));
           await each<{ rigId: string }>(QUEUES.marginCheck, (d) => checkMargin(deps, d.rigId));
           await each<{ rigId: string; userId: string }>(QUEUES.noteDigest, (d) => sendNoteDigest(deps, d));
+          await each<{ mail: Mail }>(QUEUES.mailRetry, (d) => deps.mailer.send(d.mail));
         }
       })();
       return started;
@@ -85,6 +91,10 @@ export function createJobs(deps: JobDeps): Jobs {
         // The daily check catches up; the edit itself is saved.
         logger.error({ err, rigId }, 'could not queue a margin check');
       }
+    },
+    async retryMail(mail) {
+      // A link in an account e-mail is single-use and short-lived: no attachments, small JSON.
+      await boss.send(QUEUES.mailRetry, { mail }, { startAfter: config.JOB_RETRY_DELAY_SECONDS });
     },
     async noteWritten(rigId, recipients) {
       for (const userId of recipients) {

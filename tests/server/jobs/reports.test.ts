@@ -125,3 +125,26 @@ describe('when the SMTP server is down', () => {
     }
   }, 60_000);
 });
+
+describe('account e-mails while the SMTP server is down', () => {
+  it('queues the verification e-mail and delivers it when the server is back', async () => {
+    const smtp = privateMaildev(1128, 1182);
+    const down = await makeTestApp({ RUN_WORKERS: 'true', SMTP_PORT: '1128', JOB_RETRY_DELAY_SECONDS: '1' });
+    try {
+      await down.jobs.start({ workers: true });
+      const { default: request } = await import('supertest');
+      const email = `late-${Date.now()}@example.org`;
+      await request(down.app).post('/api/auth/sign-up/email').set('Origin', TEST_ORIGIN).send({ name: 'Late', email, password: 'a-long-test-password' }).expect(200);
+      await new Promise((r) => setTimeout(r, 1500));
+      await smtp.start();
+      const mail = await waitFor(async () => (await mailsTo(email, smtp.base))[0], 30_000, 'the retried verification e-mail');
+      expect(mail.subject).toBe('Confirm your e-mail address for Keyoff');
+      await new Promise((r) => setTimeout(r, 1500));
+      expect(await mailsTo(email, smtp.base)).toHaveLength(1);
+    } finally {
+      await down.jobs.stop();
+      await down.db.destroy();
+      await smtp.stop();
+    }
+  }, 60_000);
+});
