@@ -51,6 +51,7 @@ export interface RigTable {
   power: ColumnType<unknown, string, string>;
   version: Generated<number>;
   seed_key: string | null;
+  log_mapping: ColumnType<unknown, string | null | undefined, string | null>;
   created_at: Timestamp;
   updated_at: Timestamp;
 }
@@ -173,6 +174,39 @@ export interface EmailLogTable {
   sent_at: ColumnType<Date | null, Date | null | undefined, Date | null>;
 }
 
+export interface UploadTable {
+  id: Generated<string>;
+  rig_id: string;
+  kind: 'log' | 'photo';
+  file_name: string;
+  content_type: string;
+  size_bytes: number;
+  object_key: string;
+  thumb_key: string | null;
+  caption: Generated<string>;
+  row_count: Generated<number>;
+  error_count: Generated<number>;
+  errors: ColumnType<unknown, string | null | undefined, string | null>;
+  mapping: ColumnType<unknown, string | null | undefined, string | null>;
+  created_by: string | null;
+  created_at: Timestamp;
+}
+
+export interface ReadingTable {
+  id: Generated<string>;
+  rig_id: string;
+  upload_id: string | null;
+  at: ColumnType<Date, Date | string, Date | string>;
+  voltage_v: number;
+  current_a: number | null;
+  soc_percent: number | null;
+  rested: boolean;
+  place: 'terminals' | 'device' | 'ground';
+  note: Generated<string>;
+  created_by: string | null;
+  created_at: Timestamp;
+}
+
 export interface Database {
   user: UserTable;
   organization: OrganizationTable;
@@ -187,6 +221,8 @@ export interface Database {
   email_prefs: EmailPrefsTable;
   rig_margin: RigMarginTable;
   email_log: EmailLogTable;
+  uploads: UploadTable;
+  readings: ReadingTable;
 }
 
 export type RigRow = Selectable<RigTable>;

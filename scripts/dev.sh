@@ -10,6 +10,7 @@ start_db
 export DATABASE_URL=${DATABASE_URL:-postgres://keyoff@127.0.0.1:54329/keyoff}
 (cd "$ROOT" && npx tsx db/seed-cli.ts)
 start_maildev
+start_s3
 cd "$ROOT"
 KEYOFF_URL=http://127.0.0.1:8081 TRUSTED_ORIGINS=http://127.0.0.1:8081,http://localhost:8081 node_modules/.bin/tsx watch server/index.ts &
 STARTED_PIDS+=($!)

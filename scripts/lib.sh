@@ -53,6 +53,16 @@ start_maildev() {
   say "maildev on http://127.0.0.1:1080/index.html (SMTP 127.0.0.1:1025)"
 }
 
+# s3rver (object storage for logs and photos) on loopback: 127.0.0.1:4569, bucket "keyoff", data in .data/s3.
+start_s3() {
+  if port_open 4569; then say "object storage already answers on 4569"; return; fi
+  mkdir -p "$ROOT/.data/s3"
+  "$ROOT/node_modules/.bin/s3rver" -d "$ROOT/.data/s3" -a 127.0.0.1 -p 4569 --configure-bucket keyoff --silent >"$ROOT/.data/s3rver.log" 2>&1 &
+  STARTED_PIDS+=($!)
+  wait_port 4569 20 || { say "s3rver did not start; see .data/s3rver.log"; exit 1; }
+  say "object storage (s3rver) on http://127.0.0.1:4569, bucket keyoff"
+}
+
 # The web export, rebuilt only when a source it depends on changed.
 build_web() {
   local hash

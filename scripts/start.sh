@@ -10,6 +10,7 @@ start_db
 export DATABASE_URL=${DATABASE_URL:-postgres://keyoff@127.0.0.1:54329/keyoff}
 (cd "$ROOT" && npx tsx db/seed-cli.ts)
 start_maildev
+start_s3
 build_web
 
 export NODE_ENV=production PORT=${PORT:-8080}

@@ -15,6 +15,7 @@ export DATABASE_URL=postgres://keyoff@127.0.0.1:54329/keyoff_test
   -c "do \$\$ declare s text; begin for s in select nspname from pg_namespace where nspname like 'pgboss%' loop execute format('drop schema %I cascade', s); end loop; end \$\$;" >/dev/null
 (cd "$ROOT" && npx tsx db/seed-cli.ts)
 start_maildev
+start_s3
 
 cd "$ROOT"
 say "type check"; npx tsc --noEmit

@@ -17,6 +17,7 @@ import { healthRouter } from './routes/health';
 import { invitationsRouter } from './routes/invitations';
 import { meRouter } from './routes/me';
 import { projectionsRouter } from './routes/projections';
+import { readingsAnalyzeRouter, rigReadingsRouter } from './routes/readings';
 import { rigsRouter } from './routes/rigs';
 import { serveWeb } from './web';
 
@@ -34,7 +35,8 @@ export function createApp(ctx: AppContext): Express {
           // Expo's static pages carry small inline scripts; Skia's charts need WebAssembly.
           'script-src': ["'self'", "'unsafe-inline'", "'wasm-unsafe-eval'"],
           'style-src': ["'self'", "'unsafe-inline'"],
-          'img-src': ["'self'", 'data:', 'blob:'],
+          // Photos load from object storage through short-lived signed addresses.
+          'img-src': ["'self'", 'data:', 'blob:', new URL(config.S3_ENDPOINT).origin],
           'font-src': ["'self'", 'data:'],
           'connect-src': ["'self'", ...config.TRUSTED_ORIGINS],
           'upgrade-insecure-requests': null,
@@ -58,7 +60,8 @@ export function createApp(ctx: AppContext): Express {
   app.use('/api/cable-runs', rateLimitedOpen(config.RATE_LIMIT_PER_MINUTE), cableRunsRouter());
   app.use('/api/email', rateLimitedOpen(config.RATE_LIMIT_PER_MINUTE), express.urlencoded({ extended: false, limit: '10kb' }), emailRouter(ctx));
   app.use('/api/me', requireSession(auth), meRouter(ctx));
-  app.use('/api/rigs', requireSession(auth), rigsRouter(ctx));
+  app.use('/api/readings', rateLimitedOpen(config.RATE_LIMIT_PER_MINUTE), readingsAnalyzeRouter());
+  app.use('/api/rigs', requireSession(auth), rigsRouter(ctx), rigReadingsRouter(ctx));
   app.use('/api/invitations', requireSession(auth), invitationsRouter(ctx));
   app.use('/api/clients', requireSession(auth), clientsRouter(ctx));
   app.use('/api/admin', requireSession(auth), adminRouter(ctx));

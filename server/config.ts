@@ -51,6 +51,14 @@ const configSchema = z.object({
   JOB_RETRY_LIMIT: z.coerce.number().int().min(0).default(10),
   /** A send that started this long ago without finishing is taken to have crashed and may be tried again. */
   SEND_LEASE_SECONDS: z.coerce.number().int().min(1).default(300),
+  /** Object storage for logs and photos (s3rver on loopback locally; any S3-compatible service). */
+  S3_ENDPOINT: z.string().url().default('http://127.0.0.1:4569'),
+  S3_REGION: z.string().default('us-east-1'),
+  S3_BUCKET: z.string().default('keyoff'),
+  S3_ACCESS_KEY_ID: z.string().default('S3RVER'),
+  S3_SECRET_ACCESS_KEY: z.string().default('S3RVER'),
+  /** How long a download address handed to a browser works. */
+  SIGNED_URL_SECONDS: z.coerce.number().int().min(1).max(3600).default(300),
   /** Several notes within this many seconds make one e-mail. */
   NOTE_EMAIL_GATHER_SECONDS: z.coerce.number().int().min(0).default(600),
 });

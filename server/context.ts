@@ -6,9 +6,10 @@ import { type Config, loadConfig } from './config';
 import { createJobs, type Jobs } from './jobs/queue';
 import type { Clock } from './jobs/types';
 import { createMailer, type Mailer } from './mail';
+import { createStorage, type Storage } from './storage';
 
-/** Everything the app is built from, made once: configuration, logger, database, mailer, auth, the clock and the job queue. */
-export type AppContext = { config: Config; logger: Logger; db: Db; mailer: Mailer; auth: Auth; clock: Clock; jobs: Jobs };
+/** Everything the app is built from, made once: configuration, logger, database, mailer, auth, the clock, the job queue and object storage. */
+export type AppContext = { config: Config; logger: Logger; db: Db; mailer: Mailer; auth: Auth; clock: Clock; jobs: Jobs; storage: Storage };
 
 export function createContext(env: NodeJS.ProcessEnv = process.env, overrides: Partial<AppContext> = {}): AppContext {
   const config = overrides.config ?? loadConfig(env);
@@ -18,5 +19,6 @@ export function createContext(env: NodeJS.ProcessEnv = process.env, overrides: P
   const clock = overrides.clock ?? { now: () => new Date() };
   const jobs = overrides.jobs ?? createJobs({ config, logger, db, mailer, clock });
   const auth = overrides.auth ?? createAuth({ config, db, mailer, logger, retryMail: jobs.retryMail });
-  return { config, logger, db, mailer, auth, clock, jobs };
+  const storage = overrides.storage ?? createStorage(config);
+  return { config, logger, db, mailer, auth, clock, jobs, storage };
 }

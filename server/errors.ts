@@ -10,6 +10,9 @@ export type ErrorCode =
   | 'rate_limited'
   | 'no_conductor'
   | 'expired'
+  | 'unsupported_media_type'
+  | 'unprocessable'
+  | 'storage_unavailable'
   | 'internal';
 
 export type FieldError = { path: string; message: string };

@@ -13,7 +13,21 @@ const describeLoad = (l: LoadSnapshot) => `${l.name} was ${l.watts !== null ? `$
 
 /** A rig's notes as threads, each reply under its root, with what changed since a note about a load was written. */
 export async function notesOf(db: Db, rig: RigAccess, userId: string) {
-  const [rows, loads, unread] = await Promise.all([listNotes(db, rig.id), loadsOfRigs(db, [rig.id]), unreadCount(db, userId, rig.id)]);
+  const [rows, loads, unread, runs, uploads] = await Promise.all([
+    listNotes(db, rig.id),
+    loadsOfRigs(db, [rig.id]),
+    unreadCount(db, userId, rig.id),
+    listCableRuns(db, rig.id),
+    db.selectFrom('uploads').select(['id', 'kind', 'file_name']).where('rig_id', '=', rig.id).execute(),
+  ]);
+  const otherName = (kind: string, id: string | null) => {
+    if (kind === 'cable-run') return runs.find((r) => r.id === id)?.label ?? null;
+    if (kind === 'reading') {
+      const u = uploads.find((x) => x.id === id);
+      return u ? `${u.kind === 'photo' ? 'photo' : 'log'} ${u.file_name}` : 'a reading';
+    }
+    return null;
+  };
   const view = (n: (typeof rows)[number]) => {
     const snap = n.target_snapshot as LoadSnapshot | null;
     const load = n.target_kind === 'load' ? loads.find((l) => l.id === n.target_id) : undefined;
@@ -30,7 +44,7 @@ export async function notesOf(db: Db, rig: RigAccess, userId: string) {
       parentId: n.parent_id,
       targetKind: n.target_kind,
       targetId: n.target_id,
-      targetName: n.target_kind === 'load' ? (load?.name ?? snap?.name ?? null) : null,
+      targetName: n.target_kind === 'load' ? (load?.name ?? snap?.name ?? null) : otherName(n.target_kind, n.target_id),
       author: n.author_id ? { id: n.author_id, name: n.author_name ?? '' } : null,
       body: n.body,
       rigVersion: n.rig_version,
@@ -63,7 +77,10 @@ export async function addNote(db: Db, rig: RigAccess, userId: string, input: Not
   } else if (targetKind === 'cable-run') {
     if (!(await listCableRuns(db, rig.id)).some((r) => r.id === targetId)) throw new HttpError(400, 'validation_failed', 'That cable run is not on this rig.', [{ path: 'targetId', message: 'No such cable run on this rig.' }]);
   } else if (targetKind === 'reading') {
-    throw new HttpError(400, 'validation_failed', 'Readings are not kept yet.', [{ path: 'targetKind', message: 'Notes on readings come with Readings.' }]);
+    // A spot reading, or an uploaded log or photo of this rig.
+    const reading = await db.selectFrom('readings').select('id').where('rig_id', '=', rig.id).where('id', '=', targetId!).executeTakeFirst();
+    const upload = reading ? null : await db.selectFrom('uploads').select('id').where('rig_id', '=', rig.id).where('id', '=', targetId!).executeTakeFirst();
+    if (!reading && !upload) throw new HttpError(400, 'validation_failed', 'That reading is not on this rig.', [{ path: 'targetId', message: 'No such reading, log or photo on this rig.' }]);
   }
   const row = await insertNote(db, { rig_id: rig.id, parent_id: input.parentId ?? null, target_kind: targetKind, target_id: targetId, author_id: userId, body: input.body, rig_version: rig.version, target_snapshot: snapshot });
   await markRead(db, userId, rig.id);
