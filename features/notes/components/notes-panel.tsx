@@ -1,7 +1,7 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useEffect, useState } from 'react';
 import { useForm } from 'react-hook-form';
-import { ActivityIndicator, Pressable, StyleSheet, Text, View } from 'react-native';
+import { ActivityIndicator, Image, Pressable, StyleSheet, Text, View } from 'react-native';
 import { z } from 'zod';
 
 import { ChoiceField } from '@/components/form';
@@ -12,11 +12,12 @@ import { noteCreateSchema, noteEditSchema } from '@/shared/schemas/note';
 import { colors, radius, space, type } from '@/shared/theme';
 import { type Note, type Thread, useNoteCreateMutation, useNoteDeleteMutation, useNoteEditMutation, useNotesQuery, useNotesReadMutation, useThreadResolveMutation } from '../api/notes';
 
-export type NoteTarget = { kind: 'rig' | 'load' | 'cable-run'; id?: string; name: string };
-type Props = { rigId: string; canComment: boolean; canDeleteAny: boolean; targets: NoteTarget[] };
+export type NoteTarget = { kind: 'rig' | 'load' | 'cable-run' | 'reading'; id?: string; name: string };
+export type NotePhoto = { id: string; thumbUrl: string; caption: string };
+type Props = { rigId: string; canComment: boolean; canDeleteAny: boolean; targets: NoteTarget[]; photos?: NotePhoto[]; onOpenPhoto?: (id: string) => void };
 
 /** Notes: a rig's comment threads, open ones first; write, reply, resolve, reopen, edit or delete your own. */
-export function NotesPanel({ rigId, canComment, canDeleteAny, targets }: Props) {
+export function NotesPanel({ rigId, canComment, canDeleteAny, targets, photos = [], onOpenPhoto }: Props) {
   const notes = useNotesQuery(rigId);
   const read = useNotesReadMutation(rigId);
   const [showResolved, setShowResolved] = useState(false);
@@ -32,6 +33,18 @@ export function NotesPanel({ rigId, canComment, canDeleteAny, targets }: Props) 
   const resolved = notes.data.threads.filter((t) => t.resolved);
   return (
     <View style={{ gap: space.lg }} testID="notes-panel">
+      {photos.length ? (
+        <View style={{ gap: space.xs }} testID="note-photos">
+          <Small>Install photos (from Readings)</Small>
+          <View style={styles.photos}>
+            {photos.map((p) => (
+              <Pressable key={p.id} role="link" aria-label={`Open ${p.caption || 'photo'}`} onPress={() => onOpenPhoto?.(p.id)}>
+                <Image source={{ uri: p.thumbUrl }} style={styles.thumb} accessibilityLabel={p.caption || 'Install photo'} />
+              </Pressable>
+            ))}
+          </View>
+        </View>
+      ) : null}
       {canComment ? <NewNote rigId={rigId} targets={targets} /> : null}
       <Heading>{open.length ? `Open (${open.length})` : 'No open notes'}</Heading>
       {open.map((t) => (
@@ -178,4 +191,6 @@ const styles = StyleSheet.create({
   chip: { borderWidth: 1, borderColor: colors.line, borderRadius: radius.md, paddingHorizontal: space.md, paddingVertical: space.xs + 2, backgroundColor: colors.card },
   chipText: { ...type.small, color: colors.ink, fontFamily: 'Nunito_700Bold' },
   link: { ...type.small, color: colors.focus, fontFamily: 'Nunito_700Bold' },
+  photos: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm },
+  thumb: { width: 96, height: 72, borderRadius: radius.sm, backgroundColor: colors.paper },
 });

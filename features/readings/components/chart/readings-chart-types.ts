@@ -1,0 +1,3 @@
+/** Hours since the first reading; `measured` from the readings, `model` the projection over the same hours. */
+export type ReadingsChartPoint = { h: number; measured: number; model: number | null };
+export type ReadingsChartProps = { points: ReadingsChartPoint[]; unit: '%' | 'V' };
