@@ -1,8 +1,9 @@
-// npm run bench: the energy model's speed. Target: a 14-day hourly projection of a rig with 40 loads,
-// Fixes included, in under 2 ms on one core. Prints the median and the 95th percentile.
+// npm run bench: the energy model's speed on one core, for 5, 40 and 200 loads: a plain 14-day hourly
+// projection (target under 100 µs for 40 loads) and one with its Fixes (target under 2 ms for 40 loads).
 import { project } from '@/shared/energy/project';
 import { WREN } from '@/shared/demo/scenario';
 import { type LoadInput, projectionInputSchema } from '@/shared/schemas/projection';
+import { record } from './bench-results';
 
 const kinds: LoadInput[] = [
   { name: 'Fridge', supply: 'dc', watts: 45, dutyPercent: 35, hoursPerDay: 24 },
@@ -11,11 +12,17 @@ const kinds: LoadInput[] = [
   { name: 'Laptop', supply: 'ac', watts: 60, dutyPercent: 70, hoursPerDay: 3, startHour: 14, when: 'parked' },
   { name: 'Pump', supply: 'dc', amps: 4, hoursPerDay: 0.3, startHour: 8, weekdays: [0, 2, 4] },
 ];
-const loads = Array.from({ length: 40 }, (_, i) => ({ ...kinds[i % kinds.length], name: `${kinds[i % kinds.length].name} ${i + 1}`, watts: kinds[i % kinds.length].watts && kinds[i % kinds.length].watts! / 8, amps: kinds[i % kinds.length].amps && kinds[i % kinds.length].amps! / 8 }));
-const rig = projectionInputSchema.parse({ ...WREN, loads, horizonDays: 14, battery: { ...WREN.battery, capacityAh: 200 } });
+const rigWith = (n: number) => {
+  const scale = n / 5;
+  const loads = Array.from({ length: n }, (_, i) => {
+    const k = kinds[i % kinds.length];
+    return { ...k, name: `${k.name} ${i + 1}`, watts: k.watts && k.watts / scale, amps: k.amps && k.amps / scale };
+  });
+  return projectionInputSchema.parse({ ...WREN, loads, horizonDays: 14, battery: { ...WREN.battery, capacityAh: 200 } });
+};
 
-function time(label: string, fn: () => void, runs: number) {
-  for (let i = 0; i < 50; i++) fn(); // warm-up
+function time(fn: () => void, runs: number) {
+  for (let i = 0; i < Math.min(200, runs); i++) fn(); // warm-up
   const samples: number[] = [];
   for (let i = 0; i < runs; i++) {
     const t0 = process.hrtime.bigint();
@@ -23,15 +30,17 @@ function time(label: string, fn: () => void, runs: number) {
     samples.push(Number(process.hrtime.bigint() - t0) / 1e6);
   }
   samples.sort((a, b) => a - b);
-  const median = samples[Math.floor(runs / 2)];
-  const p95 = samples[Math.floor(runs * 0.95)];
-  console.log(`${label.padEnd(48)} median ${median.toFixed(3)} ms   p95 ${p95.toFixed(3)} ms   (${runs} runs)`);
-  return median;
+  return { medianMs: +samples[Math.floor(runs / 2)].toFixed(4), p95Ms: +samples[Math.floor(runs * 0.95)].toFixed(4), runs };
 }
 
-const withFixes = project(rig);
-console.log(`rig: ${rig.loads.length} loads, ${rig.horizonDays} days hourly; ${withFixes.fixes.length} Fixes found: ${withFixes.fixes.map((f) => f.kind).join(', ')}`);
-time('projection, 40 loads, 14 days, Fixes included', () => project(rig), 500);
-time('projection, 40 loads, 14 days, no Fixes', () => project(rig, { fixes: false }), 1000);
-const median = time('parse + projection with Fixes (as the API does)', () => project(projectionInputSchema.parse({ ...WREN, loads })), 500);
-console.log(median < 2 ? 'target met: under 2 ms' : 'target missed: 2 ms');
+const out: Record<string, unknown> = {};
+for (const n of [5, 40, 200]) {
+  const rig = rigWith(n);
+  const plain = time(() => project(rig, { fixes: false }), n === 200 ? 300 : 2000);
+  const fixes = time(() => project(rig), n === 200 ? 100 : 500);
+  out[`${n} loads`] = { plain, withFixes: fixes };
+  console.log(`model, ${String(n).padStart(3)} loads, 14 days hourly: plain median ${(plain.medianMs * 1000).toFixed(0)} µs (p95 ${(plain.p95Ms * 1000).toFixed(0)}), with Fixes median ${fixes.medianMs.toFixed(2)} ms (p95 ${fixes.p95Ms.toFixed(2)})`);
+}
+const forty = out['40 loads'] as { plain: { medianMs: number }; withFixes: { medianMs: number } };
+console.log(`targets (40 loads): plain under 100 µs: ${forty.plain.medianMs < 0.1 ? 'met' : 'missed'}; with Fixes under 2 ms: ${forty.withFixes.medianMs < 2 ? 'met' : 'missed'}`);
+record('model', out);

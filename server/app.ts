@@ -8,6 +8,7 @@ import type { AppContext } from './context';
 import { devCors } from './middleware/cors';
 import { errorHandler, notFoundApi } from './middleware/error-handler';
 import { rateLimitedOpen } from './middleware/rate-limit';
+import { sameOrigin } from './middleware/same-origin';
 import { requireSession } from './middleware/session';
 import { adminRouter } from './routes/admin';
 import { cableRunsRouter } from './routes/cable-runs';
@@ -54,6 +55,7 @@ export function createApp(ctx: AppContext): Express {
     next();
   }, toNodeHandler(auth));
 
+  app.use('/api', sameOrigin([config.KEYOFF_URL, ...config.TRUSTED_ORIGINS]));
   app.use('/api', express.json({ limit: '1mb' }));
   app.use('/api/health', healthRouter(db, APP_VERSION));
   app.use('/api/projections', rateLimitedOpen(config.RATE_LIMIT_PER_MINUTE), projectionsRouter());

@@ -13,6 +13,7 @@ export type ErrorCode =
   | 'unsupported_media_type'
   | 'unprocessable'
   | 'storage_unavailable'
+  | 'unavailable'
   | 'internal';
 
 export type FieldError = { path: string; message: string };

@@ -6,10 +6,15 @@ import { HttpError } from '../errors';
 
 export type SessionData = NonNullable<Awaited<ReturnType<Auth['api']['getSession']>>>;
 
-/** Reads the better-auth session; 401 without one. Handlers read it with `session(res)`. */
+/**
+ * Reads the better-auth session; 401 without one. Handlers read it with `session(res)`. Reads may use the
+ * signed session cookie cache (up to a minute old); every write checks the session in the database, so a
+ * revoked session (password reset or change) can change nothing from that moment.
+ */
 export function requireSession(auth: Auth) {
   return async (req: Request, res: Response, next: NextFunction) => {
-    const data = await auth.api.getSession({ headers: fromNodeHeaders(req.headers) });
+    const write = req.method !== 'GET' && req.method !== 'HEAD';
+    const data = await auth.api.getSession({ headers: fromNodeHeaders(req.headers), query: { disableCookieCache: write } });
     if (!data) return next(new HttpError(401, 'unauthenticated', 'Sign in to continue.'));
     res.locals.session = data;
     next();

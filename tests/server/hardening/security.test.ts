@@ -1,0 +1,73 @@
+import { execFileSync } from 'node:child_process';
+import { readFileSync } from 'node:fs';
+import request from 'supertest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+
+import { linkIn, latestMailTo, PASSWORD, signIn, verifiedUser, WREN_POWER } from '../helpers';
+import { makeTestApp, TEST_ORIGIN } from '../test-app';
+
+let ctx: Awaited<ReturnType<typeof makeTestApp>>;
+beforeAll(async () => {
+  ctx = await makeTestApp();
+});
+afterAll(async () => {
+  await ctx.jobs.stop();
+  await ctx.db.destroy();
+});
+
+const newRig = { name: 'Security van', power: WREN_POWER };
+
+describe('security', () => {
+  it('refuses writes a browser sends from another site, on our routes as on the auth routes', async () => {
+    const user = await verifiedUser(ctx, 'origin');
+    const agent = await signIn(ctx.app, user.email);
+    const res = await agent.post('/api/rigs').set('Origin', 'https://evil.example').send(newRig).expect(403);
+    expect(res.body.fields[0].path).toBe('Origin');
+    await agent.post('/api/rigs').set('Origin', TEST_ORIGIN).send(newRig).expect(201);
+    await request(ctx.app).post('/api/auth/sign-in/email').set('Origin', 'https://evil.example').send({ email: user.email, password: PASSWORD }).expect(403);
+  });
+
+  it('sets the session cookie HttpOnly and SameSite=Lax', async () => {
+    const user = await verifiedUser(ctx, 'cookie');
+    const res = await request(ctx.app).post('/api/auth/sign-in/email').set('Origin', TEST_ORIGIN).send({ email: user.email, password: PASSWORD }).expect(200);
+    const session = (res.headers['set-cookie'] as unknown as string[]).find((c) => c.includes('session_token'))!;
+    expect(session).toMatch(/HttpOnly/i);
+    expect(session).toMatch(/SameSite=Lax/i);
+  });
+
+  it('revokes other sessions on a password change and every session on a reset: they can change nothing after', async () => {
+    const user = await verifiedUser(ctx, 'revoke');
+    const laptop = await signIn(ctx.app, user.email);
+    const phone = await signIn(ctx.app, user.email);
+    await laptop.post('/api/rigs').set('Origin', TEST_ORIGIN).send(newRig).expect(201);
+    await laptop.post('/api/auth/change-password').set('Origin', TEST_ORIGIN).send({ currentPassword: PASSWORD, newPassword: 'a-changed-password-1', revokeOtherSessions: true }).expect(200);
+    await phone.post('/api/rigs').set('Origin', TEST_ORIGIN).send(newRig).expect(401);
+
+    const tablet = await signIn(ctx.app, user.email, 'a-changed-password-1');
+    await request(ctx.app).post('/api/auth/request-password-reset').set('Origin', TEST_ORIGIN).send({ email: user.email, redirectTo: `${TEST_ORIGIN}/reset-password` }).expect(200);
+    const link = linkIn(await latestMailTo(user.email, /Reset/));
+    const token = new URL((await request(ctx.app).get(link.pathname + link.search).expect(302)).headers.location).searchParams.get('token');
+    await request(ctx.app).post('/api/auth/reset-password').set('Origin', TEST_ORIGIN).send({ newPassword: 'a-reset-password-22', token }).expect(200);
+    await tablet.post('/api/rigs').set('Origin', TEST_ORIGIN).send(newRig).expect(401);
+    // The token worked once.
+    await request(ctx.app).post('/api/auth/reset-password').set('Origin', TEST_ORIGIN).send({ newPassword: 'a-third-password-333', token }).expect(400);
+  });
+
+  it('keeps no secrets in the repository', () => {
+    const files = execFileSync('git', ['ls-files'], { encoding: 'utf8' }).split('\n').filter(Boolean);
+    expect(files.filter((f) => /(^|\/)\.env($|\.)|\.pem$|\.key$|id_rsa/.test(f))).toEqual([]);
+    const patterns = [/-----BEGIN [A-Z ]*PRIVATE KEY-----/, /AKIA[0-9A-Z]{16}/, /xox[baprs]-[0-9A-Za-z-]{10,}/, /ghp_[0-9A-Za-z]{36}/];
+    const hits = files
+      .filter((f) => !/\.(png|jpg|ttf|wasm|ico)$/.test(f) && f !== 'package-lock.json')
+      .flatMap((f) => {
+        let text = '';
+        try {
+          text = readFileSync(f, 'utf8');
+        } catch {
+          return [];
+        }
+        return patterns.filter((p) => p.test(text)).map((p) => `${f}: ${p}`);
+      });
+    expect(hits).toEqual([]);
+  });
+});
