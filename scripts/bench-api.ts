@@ -1,10 +1,18 @@
-// The Outlook of a 40-load rig through the API (real server, real PostgreSQL, a signed-in session):
-// target under 20 ms at the median. Also the bytes a browser downloads for the first screen and the Outlook.
+// The API under load and the web app's weight and speed, on the real server with real PostgreSQL:
+// - the Outlook of a 40-load rig, sequential requests (latency at the median);
+// - autocannon on loopback, 50 connections for 10 s each: the bare GET /api/health, then a signed-in
+//   GET /api/rigs/:rigId/outlook (target: 30 % or more of the bare route's throughput, p99 under 50 ms);
+// - the gzipped JavaScript of the first screen and of the Outlook (target under 800 KB, no CanvasKit);
+// - in chromium, the time to the first screen and to the Outlook's chart drawn.
 import { existsSync, readdirSync, readFileSync } from 'node:fs';
 import type { AddressInfo } from 'node:net';
 import path from 'node:path';
 import { gzipSync } from 'node:zlib';
+import autocannon from 'autocannon';
 import { pino } from 'pino';
+
+import { launchChromium } from '@/tests/e2e/browser';
+import { record } from './bench-results';
 
 import { createApp } from '@/server/app';
 import { loadConfig } from '@/server/config';
@@ -14,11 +22,13 @@ import { WREN, WREN_LOADS } from '@/shared/demo/scenario';
 
 async function outlookLatency() {
   const url = process.env.DATABASE_URL ?? 'postgres://keyoff@127.0.0.1:54329/keyoff_test';
-  const config = loadConfig({ ...process.env, DATABASE_URL: url, NODE_ENV: 'production', SERVE_WEB: 'false', LOG_LEVEL: 'silent', KEYOFF_URL: 'http://127.0.0.1:8093' });
+  const web = existsSync('dist/sign-in.html');
+  const config = loadConfig({ ...process.env, DATABASE_URL: url, NODE_ENV: 'production', SERVE_WEB: String(web), LOG_LEVEL: 'silent', KEYOFF_URL: 'http://127.0.0.1:8093', RUN_WORKERS: 'false', RATE_LIMIT_PER_MINUTE: '1000000' });
   const ctx = createContext(process.env, { config, logger: pino({ level: 'silent' }), mailer: { send: async () => {} } });
   await migrateAll(ctx.auth, ctx.db);
   const app = createApp(ctx);
-  const server = app.listen(0, '127.0.0.1');
+  await ctx.jobs.start();
+  const server = app.listen(8093, '127.0.0.1');
   await new Promise((r) => server.once('listening', r));
   const base = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
   const email = `bench-${Date.now()}@example.org`;
@@ -44,14 +54,61 @@ async function outlookLatency() {
   const median = samples[Math.floor(samples.length / 2)];
   console.log(`GET /api/rigs/:rigId/outlook, 40 loads, Fixes included: median ${median.toFixed(2)} ms, p95 ${samples[Math.floor(samples.length * 0.95)].toFixed(2)} ms (${samples.length} sequential requests)`);
   console.log(median < 20 ? 'target met: under 20 ms' : 'target missed: 20 ms');
+
+  const load = async (path: string, extra: Record<string, string> = {}) => {
+    const r = await autocannon({ url: base + path, connections: 50, duration: 10, headers: extra });
+    return { requestsPerSecond: Math.round(r.requests.average), p50Ms: r.latency.p50, p99Ms: r.latency.p99, non2xx: r.non2xx, errors: r.errors };
+  };
+  const bare = await load('/api/health');
+  console.log(`autocannon GET /api/health, 50 connections, 10 s: ${bare.requestsPerSecond} req/s, p50 ${bare.p50Ms} ms, p99 ${bare.p99Ms} ms`);
+  const outlook = await load(`/api/rigs/${id}/outlook`, { cookie });
+  const ratio = Math.round((outlook.requestsPerSecond / bare.requestsPerSecond) * 1000) / 10;
+  console.log(`autocannon GET /api/rigs/:rigId/outlook signed in, 50 connections, 10 s: ${outlook.requestsPerSecond} req/s, p50 ${outlook.p50Ms} ms, p99 ${outlook.p99Ms} ms (${outlook.non2xx} not 2xx)`);
+  console.log(`outlook / bare throughput: ${ratio} % (target 30 % or more: ${ratio >= 30 ? 'met' : 'missed'}); outlook p99 under 50 ms: ${outlook.p99Ms < 50 ? 'met' : 'missed'}`);
+
+  let browser: Record<string, number> | null = null;
+  if (web) browser = await browserTimes(base, email, id);
   await fetch(`${base}/api/rigs/${id}`, { method: 'DELETE', headers: { ...headers, cookie } });
   server.close();
+  await ctx.jobs.stop();
   await ctx.db.destroy();
+  return { sequentialOutlookMedianMs: +median.toFixed(2), health: bare, outlook, outlookToBarePercent: ratio, browser };
+}
+
+/** Debian's chromium on loopback: the first screen (sign-in) shown, then a rig's Outlook with its chart drawn. */
+async function browserTimes(base: string, email: string, rigId: string) {
+  const browser = await launchChromium();
+  try {
+    const page = await browser.newPage({ viewport: { width: 1280, height: 800 } });
+    let t0 = performance.now();
+    await page.goto(`${base}/sign-in`);
+    await page.getByTestId('sign-in-screen').waitFor();
+    const firstScreenMs = Math.round(performance.now() - t0);
+    await page.getByTestId('field-email').fill(email);
+    await page.getByTestId('field-password').fill('a-long-bench-password');
+    await page.getByTestId('sign-in-submit').click();
+    await page.getByTestId('home-screen').waitFor();
+    t0 = performance.now();
+    await page.goto(`${base}/rigs/${rigId}`);
+    await page.getByTestId('soc-chart').locator('canvas').waitFor();
+    await page.waitForFunction(() => {
+      const c = document.querySelector('[data-testid="soc-chart"] canvas') as HTMLCanvasElement | null;
+      return !!c && c.width > 0;
+    });
+    const chartMs = Math.round(performance.now() - t0);
+    console.log(`chromium on loopback: first screen shown in ${firstScreenMs} ms; the Outlook's chart drawn ${chartMs} ms after opening the rig`);
+    return { firstScreenMs, outlookChartMs: chartMs };
+  } finally {
+    await browser.close();
+  }
 }
 
 function bundleBytes() {
   const dist = 'dist';
-  if (!existsSync(path.join(dist, 'sign-in.html'))) return console.log('no web build: run npm run build:web for the bundle sizes');
+  if (!existsSync(path.join(dist, 'sign-in.html'))) {
+    console.log('no web build: run npm run build:web for the bundle sizes');
+    return null;
+  }
   const gz = (file: string) => gzipSync(readFileSync(file)).length;
   const scripts = (html: string) => [...readFileSync(html, 'utf8').matchAll(/<script[^>]*src="([^"]+)"/g)].map((m) => path.join(dist, m[1]));
   const kb = (n: number) => `${(n / 1024).toFixed(0)} KB`;
@@ -65,10 +122,15 @@ function bundleBytes() {
   const firstHasSkia = first.some((f) => readFileSync(f, 'utf8').includes('MakeWebGLCanvasSurface'));
   console.log(`first screen (sign-in): ${kb(firstTotal)} gzipped in ${first.length} files; Skia/CanvasKit code in it: ${firstHasSkia ? 'yes' : 'no'}`);
   for (const f of skia) console.log(`  loaded only on a screen with a chart: ${path.basename(f)} ${kb(gz(f))} gzipped`);
-  console.log(`Outlook: ${kb(firstTotal + skia.reduce((s, f) => s + gz(f), 0))} gzipped in all (first screen plus the chart's code and canvaskit.wasm)`);
+  const outlookTotal = firstTotal + skia.reduce((s, f) => s + gz(f), 0);
+  console.log(`Outlook: ${kb(outlookTotal)} gzipped in all (first screen plus the chart's code and canvaskit.wasm)`);
+  console.log(`first screen under 800 KB with no CanvasKit: ${firstTotal < 800 * 1024 && !firstHasSkia ? 'met' : 'missed'}`);
+  return { firstScreenGzipKb: Math.round(firstTotal / 1024), firstScreenHasCanvasKit: firstHasSkia, outlookGzipKb: Math.round(outlookTotal / 1024) };
 }
 
 void (async () => {
-  bundleBytes();
-  await outlookLatency();
+  const bundles = bundleBytes();
+  const api = await outlookLatency();
+  record('web', bundles);
+  record('api', api);
 })();

@@ -13,6 +13,7 @@ import { enqueueDueReports } from '@/server/jobs/reports';
 import { loadToRow } from '@/server/services/rigs-model';
 import { WREN, WREN_LOADS } from '@/shared/demo/scenario';
 import { loadSchema } from '@/shared/schemas/projection';
+import { record } from './bench-results';
 
 const RIGS = Number(process.env.BENCH_RIGS ?? 10_000);
 const SEND_SAMPLE = Number(process.env.BENCH_SEND_SAMPLE ?? 300);
@@ -70,7 +71,7 @@ async function main() {
   const result = { rigs: RIGS, setupSeconds: +setupS.toFixed(1), queued, batchSeconds: +batchS.toFixed(2), perRigMs: +((batchS * 1000) / RIGS).toFixed(3), sent: SEND_SAMPLE, sendSeconds: +sendS.toFixed(1), emailsPerSecond: +(SEND_SAMPLE / sendS).toFixed(1) };
   console.log(`weekly reports: ${queued} of ${RIGS} rigs computed and queued in ${result.batchSeconds} s (${result.perRigMs} ms a rig; target under 60 s)`);
   console.log(`report e-mails rendered and sent to maildev: ${SEND_SAMPLE} in ${result.sendSeconds} s = ${result.emailsPerSecond} a second`);
-  if (process.env.BENCH_JSON) console.log(JSON.stringify({ reports: result }));
+  record('reports', result);
 }
 
 main().catch((err) => {

@@ -7,6 +7,9 @@ trap cleanup EXIT
 ensure_deps
 start_db
 cd "$ROOT"
+rm -f bench-results/latest.json
+build_web
+ensure_chromium
 npx tsx scripts/bench-model.ts
 DATABASE_URL=postgres://keyoff@127.0.0.1:54329/keyoff_test npx tsx scripts/bench-api.ts
 start_maildev
@@ -14,3 +17,13 @@ start_maildev
   -c "drop schema if exists public cascade; create schema public;" \
   -c "do \$\$ declare s text; begin for s in select nspname from pg_namespace where nspname like 'pgboss%' loop execute format('drop schema %I cascade', s); end loop; end \$\$;" >/dev/null
 DATABASE_URL=postgres://keyoff@127.0.0.1:54329/keyoff_bench npx tsx scripts/bench-reports.ts
+say "summary (also in bench-results/latest.json)"
+node -e '
+  const r = require("./bench-results/latest.json");
+  const m = r.model["40 loads"];
+  console.log(`machine: ${r.machine.cpus} cores, ${r.machine.cpu}, ${r.machine.memoryGb} GB, Node ${r.machine.node}`);
+  console.log(`model, 40 loads: plain ${(m.plain.medianMs * 1000).toFixed(0)} µs, with Fixes ${m.withFixes.medianMs} ms (medians)`);
+  console.log(`API: health ${r.api.health.requestsPerSecond} req/s; outlook ${r.api.outlook.requestsPerSecond} req/s (${r.api.outlookToBarePercent} %), p99 ${r.api.outlook.p99Ms} ms`);
+  if (r.web) console.log(`web: first screen ${r.web.firstScreenGzipKb} KB gz, Outlook ${r.web.outlookGzipKb} KB gz; chromium: first screen ${r.api.browser?.firstScreenMs} ms, chart ${r.api.browser?.outlookChartMs} ms`);
+  console.log(`reports: ${r.reports.queued} rigs in ${r.reports.batchSeconds} s; ${r.reports.emailsPerSecond} e-mails a second to maildev`);
+'

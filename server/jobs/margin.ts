@@ -4,7 +4,7 @@ import { FIX_WIRING_CAUTION, needsWiringCaution } from '@/shared/safety';
 import { footerFor, listHeaders } from '../emails/links';
 import { renderLetter } from '../emails/render';
 import { listHistory } from '../repositories/history';
-import { deliver } from './deliver';
+import { deliver, SendInFlight } from './deliver';
 import { daysText, figuresOfRigs, STATE_WORD } from './figures';
 import type { Jobs } from './queue';
 import { type JobDeps, QUEUES } from './types';
@@ -47,7 +47,8 @@ export async function checkMargin(deps: JobDeps, rigId: string) {
   const changes = (await listHistory(db, rigId, { since: transition.prev.checked_at as unknown as Date, limit: 5 })).filter((h) => h.kind.startsWith('load') || ['battery', 'inverter', 'charging', 'routine', 'stay'].includes(h.kind));
   let sent = 0;
   for (const person of wanted) {
-    const result = await deliver(deps, { idempotencyKey: warningKey(person.id, rigId, transition.falls), kind: 'warning', userId: person.id, rigId }, async () => {
+    // Another check of this rig may be sending this very warning: it is its job then (and its retry's).
+    const result = await deliverOnce(deps, { idempotencyKey: warningKey(person.id, rigId, transition.falls), kind: 'warning', userId: person.id, rigId }, async () => {
       const f = figures;
       const what = changes.length
         ? changes.map((c) => `${c.actor_name} ${c.summary}: days parked ${daysText(c.days_parked_before, f.horizonDays)} → ${daysText(c.days_parked_after, f.horizonDays)}.`)
@@ -79,6 +80,15 @@ export async function checkMargin(deps: JobDeps, rigId: string) {
     if (result === 'sent') sent += 1;
   }
   return { state: figures.marginState, sent };
+}
+
+async function deliverOnce(...args: Parameters<typeof deliver>) {
+  try {
+    return await deliver(...args);
+  } catch (err) {
+    if (err instanceof SendInFlight) return 'skipped' as const;
+    throw err;
+  }
 }
 
 /** The daily pass: one margin check per rig (the short queue drops a rig already waiting). */

@@ -101,10 +101,25 @@ export async function readRig(db: Db, rig: RigRowWithRole) {
   return rigDto(rig, loads);
 }
 
+/**
+ * Outlooks by rig and version: every change to what the model reads (power, routine, loads) moves the
+ * rig's version on, so a cached Outlook is never stale. A small map, oldest out first.
+ */
+const outlookCache = new Map<string, ReturnType<typeof project> & { rigId: string; version: number }>();
+const OUTLOOK_CACHE_SIZE = 200;
+
 /** The saved rig through the model: the Outlook, Fixes included. */
 export async function rigOutlook(db: Db, rig: RigRowWithRole) {
+  const key = `${rig.id}:${rig.version}`;
+  const hit = outlookCache.get(key);
+  if (hit) return hit;
   const dto = await readRig(db, rig);
-  return { rigId: dto.id, version: dto.version, ...project(modelInput(dto.power, dto.loads)) };
+  const outlook = { rigId: dto.id, version: dto.version, ...project(modelInput(dto.power, dto.loads)) };
+  if (dto.version === rig.version) {
+    outlookCache.set(key, outlook);
+    if (outlookCache.size > OUTLOOK_CACHE_SIZE) outlookCache.delete(outlookCache.keys().next().value!);
+  }
+  return outlook;
 }
 
 export async function tryLoads(db: Db, rig: RigRowWithRole, candidates: Load[]) {
