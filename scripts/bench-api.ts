@@ -115,7 +115,7 @@ function bundleBytes() {
   const first = [path.join(dist, 'sign-in.html'), ...scripts(path.join(dist, 'sign-in.html'))];
   const firstTotal = first.reduce((s, f) => s + gz(f), 0);
   const js = path.join(dist, '_expo/static/js/web');
-  const lazy = readdirSync(js).filter((f) => /^(soc-chart-impl|index)-/.test(f)).map((f) => path.join(js, f));
+  const lazy = readdirSync(js).filter((f) => /^(charts-impl|index)-/.test(f)).map((f) => path.join(js, f));
   const wasm = path.join(dist, 'canvaskit.wasm');
   const skia = [...lazy, ...(existsSync(wasm) ? [wasm] : [])];
   // Skia's web code names this CanvasKit call; the first screen's files must not contain it.

@@ -26,7 +26,7 @@ import {
   useVoltageDropMutation,
 } from '../api/readings';
 import { ReadingsChart } from './chart/readings-chart';
-import type { ReadingsChartPoint } from './chart/readings-chart-types';
+import type { ReadingsChartPoint } from '@/components/charts/chart-types';
 
 export const MEASURING_CAUTION =
   'Measuring safely: clip the meter to the battery posts themselves; for a rested reading leave the battery two hours with no charging and nothing switched on. Under load, keep hands and leads clear of the fan and belts, never bridge the terminals with a probe, wear eye protection near a lead-acid battery (it can vent explosive gas), and leave a lithium battery\'s protection system alone. If in doubt, ask a qualified auto electrician. Figures are estimates, not a guarantee.';

@@ -1,13 +1,14 @@
-import { View } from 'react-native';
+import { ActivityIndicator, View } from 'react-native';
 
-import ReadingsChartImpl from './readings-chart-impl';
-import type { ReadingsChartProps } from './readings-chart-types';
+import type { ReadingsChartProps } from '@/components/charts/chart-types';
+import { useCharts } from '@/components/charts/lazy-charts';
+import { colors } from '@/shared/theme';
 
-/** On a device Skia is ready at once. */
 export function ReadingsChart(props: ReadingsChartProps) {
+  const charts = useCharts();
   return (
     <View style={{ height: 240 }} testID="readings-chart">
-      <ReadingsChartImpl {...props} />
+      {charts ? <charts.ReadingsChart {...props} /> : <ActivityIndicator color={colors.night} />}
     </View>
   );
 }

@@ -1,13 +1,14 @@
-import { View } from 'react-native';
+import { ActivityIndicator, View } from 'react-native';
 
-import SocChartImpl from './soc-chart-impl';
-import type { SocChartProps } from './soc-chart-types';
+import type { SocChartProps } from '@/components/charts/chart-types';
+import { useCharts } from '@/components/charts/lazy-charts';
+import { colors } from '@/shared/theme';
 
-/** On a device Skia is ready at once. */
 export function SocChart(props: SocChartProps) {
+  const charts = useCharts();
   return (
     <View style={{ height: 240 }} testID="soc-chart">
-      <SocChartImpl {...props} />
+      {charts ? <charts.SocChart {...props} /> : <ActivityIndicator color={colors.night} />}
     </View>
   );
 }

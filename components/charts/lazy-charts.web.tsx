@@ -1,0 +1,26 @@
+import { useEffect, useState } from 'react';
+
+import type { Charts } from './charts-impl';
+
+let loading: Promise<Charts> | null = null;
+
+/**
+ * On the web Skia builds its API from CanvasKit when first imported, so CanvasKit (served from our own
+ * origin) loads first and the charts' code follows as one lazy chunk. Screens without a chart load neither.
+ */
+export function useCharts(): Charts | null {
+  const [charts, setCharts] = useState<Charts | null>(null);
+  useEffect(() => {
+    let live = true;
+    loading ??= (async () => {
+      const { LoadSkiaWeb } = await import('@shopify/react-native-skia/lib/module/web');
+      await LoadSkiaWeb({ locateFile: (file: string) => `/${file}` });
+      return (await import('./charts-impl')).default;
+    })();
+    loading.then((c) => live && setCharts(c));
+    return () => {
+      live = false;
+    };
+  }, []);
+  return charts;
+}
