@@ -59,7 +59,7 @@ export function rigsRouter({ db, auth, jobs, config }: AppContext) {
   });
 
   router.get('/:rigId/outlook', rigAccess(db, { rig: ['read'] }), async (_req, res) => {
-    res.json(await rigs.rigOutlook(db, rigOf(res)));
+    res.type('json').send(await rigs.rigOutlookJson(db, rigOf(res)));
   });
 
   router.post('/:rigId/try', rigAccess(db, { rig: ['read'] }), validate(tryLoadsSchema), async (_req, res) => {

@@ -105,21 +105,19 @@ export async function readRig(db: Db, rig: RigRowWithRole) {
  * Outlooks by rig and version: every change to what the model reads (power, routine, loads) moves the
  * rig's version on, so a cached Outlook is never stale. A small map, oldest out first.
  */
-const outlookCache = new Map<string, ReturnType<typeof project> & { rigId: string; version: number }>();
+const outlookCache = new Map<string, string>();
 const OUTLOOK_CACHE_SIZE = 200;
 
-/** The saved rig through the model: the Outlook, Fixes included. */
-export async function rigOutlook(db: Db, rig: RigRowWithRole) {
+/** The saved rig through the model: the Outlook, Fixes included, as the JSON the API sends (kept serialized). */
+export async function rigOutlookJson(db: Db, rig: RigRowWithRole): Promise<string> {
   const key = `${rig.id}:${rig.version}`;
   const hit = outlookCache.get(key);
   if (hit) return hit;
   const dto = await readRig(db, rig);
-  const outlook = { rigId: dto.id, version: dto.version, ...project(modelInput(dto.power, dto.loads)) };
-  if (dto.version === rig.version) {
-    outlookCache.set(key, outlook);
-    if (outlookCache.size > OUTLOOK_CACHE_SIZE) outlookCache.delete(outlookCache.keys().next().value!);
-  }
-  return outlook;
+  const json = JSON.stringify({ rigId: dto.id, version: dto.version, ...project(modelInput(dto.power, dto.loads)) });
+  outlookCache.set(key, json);
+  if (outlookCache.size > OUTLOOK_CACHE_SIZE) outlookCache.delete(outlookCache.keys().next().value!);
+  return json;
 }
 
 export async function tryLoads(db: Db, rig: RigRowWithRole, candidates: Load[]) {
