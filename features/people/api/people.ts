@@ -6,21 +6,16 @@ import type { InvitationCreateForm } from '@/shared/schemas/people';
 export type Person = { id: string; userId: string; role: string; joinedAt: string; name: string; email: string };
 export type PendingInvitation = { id: string; email: string; role: string | null; status: string; expiresAt: string; expired: boolean };
 export type People = { members: Person[]; invitations: PendingInvitation[] };
-export type RigHeader = { id: string; name: string; role: string; householdName: string; permissions: { managePeople: boolean } };
 
 export const peopleKeys = {
   all: ['people'] as const,
   rig: (rigId: string) => [...peopleKeys.all, rigId] as const,
-  rigHeader: (rigId: string) => [...peopleKeys.all, rigId, 'rig'] as const,
   invitation: (invitationId: string) => [...peopleKeys.all, 'invitation', invitationId] as const,
 };
 
 export const peopleQueryOptions = (rigId: string) =>
   queryOptions({ queryKey: peopleKeys.rig(rigId), queryFn: () => apiFetch<People>(`/api/rigs/${rigId}/people`) });
 export const usePeopleQuery = (rigId: string) => useQuery(peopleQueryOptions(rigId));
-
-export const useRigHeaderQuery = (rigId: string) =>
-  useQuery({ queryKey: peopleKeys.rigHeader(rigId), queryFn: () => apiFetch<RigHeader>(`/api/rigs/${rigId}`) });
 
 function usePeopleMutation<V>(rigId: string, fn: (v: V) => Promise<unknown>) {
   const client = useQueryClient();

@@ -17,7 +17,6 @@ import {
   useMemberRemoveMutation,
   useMemberRoleMutation,
   usePeopleQuery,
-  useRigHeaderQuery,
 } from '../api/people';
 
 const ROLE_OPTIONS = [
@@ -27,15 +26,17 @@ const ROLE_OPTIONS = [
 ];
 const ROLE_WORDS: Record<string, string> = { owner: 'Owner', member: 'Member', advisor: 'Advisor (reads and comments)' };
 
-/** People: members, advisors and pending invitations of a rig's household; actions for the owner only. */
-export function PeopleScreen({ rigId, myUserId, onLeft }: { rigId: string; myUserId: string; onLeft: () => void }) {
-  const rig = useRigHeaderQuery(rigId);
+/**
+ * People: members, advisors and pending invitations of a rig's household; actions for the owner only.
+ * `canManage` comes from the rig the route already holds (the rig's own query), so the rig is fetched once.
+ */
+export function PeopleScreen({ rigId, myUserId, canManage, onLeft }: { rigId: string; myUserId: string; canManage: boolean; onLeft: () => void }) {
   const people = usePeopleQuery(rigId);
   const wide = useIsWide();
   const leave = useLeaveMutation(rigId);
-  if (rig.isPending || people.isPending) return <ActivityIndicator color={colors.night} />;
-  if (rig.isError || people.isError) return <Body style={{ color: colors.short }}>{(rig.error ?? people.error)?.message}</Body>;
-  const owner = rig.data.permissions.managePeople;
+  if (people.isPending) return <ActivityIndicator color={colors.night} />;
+  if (people.isError) return <Body style={{ color: colors.short }}>{people.error.message}</Body>;
+  const owner = canManage;
   return (
     <View style={{ gap: space.lg }} testID="people-screen">
       <Heading>People</Heading>
