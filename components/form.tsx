@@ -1,8 +1,10 @@
 // Form fields on react-hook-form's Controller: a label, the control, the unit and the field's error inline.
 import { useState } from 'react';
-import { type Control, Controller, type FieldPath, type FieldValues } from 'react-hook-form';
+import { type Control, Controller, type FieldPath, type FieldValues, type UseFormSetError } from 'react-hook-form';
 import { Pressable, StyleSheet, Switch, Text, TextInput, View } from 'react-native';
 
+
+import { ApiError } from '@/lib/api-client';
 import { colors, radius, space, type } from '@/shared/theme';
 
 type Base<T extends FieldValues> = { control: Control<T>; name: FieldPath<T>; label: string; hint?: string };
@@ -137,3 +139,13 @@ const styles = StyleSheet.create({
   chipLabelOn: { color: colors.paper },
   switchRow: { flexDirection: 'row', alignItems: 'center', gap: space.md },
 });
+
+/**
+ * Puts the server's field errors (an ApiError's `fields`) beside the fields they name; a refusal that
+ * names no field of this form shows under `fallback`.
+ */
+export function showApiErrors<T extends FieldValues>(err: unknown, setError: UseFormSetError<T>, fallback: FieldPath<T>) {
+  const fields = err instanceof ApiError ? err.fields : [];
+  for (const f of fields) setError(f.path as FieldPath<T>, { message: f.message });
+  if (!fields.length) setError(fallback, { message: err instanceof Error ? err.message : 'Could not save.' });
+}

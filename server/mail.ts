@@ -2,6 +2,7 @@ import nodemailer, { type Transporter } from 'nodemailer';
 import type { Logger } from 'pino';
 
 import type { Config } from './config';
+import { esc } from './emails/escape';
 
 export type Mail = {
   to: string;
@@ -30,7 +31,6 @@ export function createMailer(config: Config, logger: Logger): Mailer {
   };
 }
 
-const escape = (s: string) => s.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!);
 
 /** Keyoff's own e-mail layout: a heading, a few lines, one button, the link spelled out. */
 export function layout(opts: { to: string; subject: string; heading: string; lines: string[]; action: { label: string; url: string }; footer?: string }): Mail {
@@ -39,11 +39,11 @@ export function layout(opts: { to: string; subject: string; heading: string; lin
 <table role="presentation" width="100%" cellpadding="0" cellspacing="0"><tr><td align="center" style="padding:24px">
 <table role="presentation" width="560" cellpadding="0" cellspacing="0" style="background:#FFFFFF;border:1px solid #D9D3C7;border-radius:16px">
 <tr><td style="background:#17324A;color:#F6F3EC;padding:16px 24px;border-radius:16px 16px 0 0;font-size:20px;font-weight:800">Keyoff</td></tr>
-<tr><td style="padding:24px"><h1 style="font-size:20px;margin:0 0 12px">${escape(opts.heading)}</h1>
-${opts.lines.map((l) => `<p style="font-size:15px;line-height:22px;margin:0 0 12px">${escape(l)}</p>`).join('\n')}
-<p style="margin:20px 0"><a href="${escape(opts.action.url)}" style="background:#17324A;color:#F6F3EC;padding:12px 20px;border-radius:10px;text-decoration:none;font-weight:700">${escape(opts.action.label)}</a></p>
-<p style="font-size:13px;color:#55626F;word-break:break-all">Or open this link: ${escape(opts.action.url)}</p></td></tr>
-<tr><td style="padding:16px 24px;font-size:13px;color:#55626F">${escape(opts.footer ?? "Keyoff: your vehicle's battery budget.")}</td></tr>
+<tr><td style="padding:24px"><h1 style="font-size:20px;margin:0 0 12px">${esc(opts.heading)}</h1>
+${opts.lines.map((l) => `<p style="font-size:15px;line-height:22px;margin:0 0 12px">${esc(l)}</p>`).join('\n')}
+<p style="margin:20px 0"><a href="${esc(opts.action.url)}" style="background:#17324A;color:#F6F3EC;padding:12px 20px;border-radius:10px;text-decoration:none;font-weight:700">${esc(opts.action.label)}</a></p>
+<p style="font-size:13px;color:#55626F;word-break:break-all">Or open this link: ${esc(opts.action.url)}</p></td></tr>
+<tr><td style="padding:16px 24px;font-size:13px;color:#55626F">${esc(opts.footer ?? "Keyoff: your vehicle's battery budget.")}</td></tr>
 </table></td></tr></table></body></html>`;
   return { to: opts.to, subject: opts.subject, text, html };
 }

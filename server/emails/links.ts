@@ -1,8 +1,6 @@
 import type { Config } from '../config';
-import { esc } from './render';
-import { type MailList, unsubscribeToken } from './unsubscribe';
-
-const LIST_NAME: Record<MailList, string> = { reports: 'weekly reports', warnings: 'low-margin warnings', notes: 'note e-mails' };
+import { esc } from './escape';
+import { LIST_NAME, type MailList, unsubscribeToken } from './unsubscribe';
 
 export const unsubscribeUrl = (config: Config, userId: string, list: MailList) => `${config.KEYOFF_URL}/api/email/unsubscribe?token=${unsubscribeToken(config.AUTH_SECRET, userId, list)}`;
 

@@ -2,7 +2,7 @@ import mjml2html from 'mjml';
 
 import { colors } from '@/shared/theme';
 
-export const esc = (s: string | number) => String(s).replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!);
+import { esc } from './escape';
 
 export type Section = { heading?: string; lines?: string[]; rows?: [string, string][]; image?: { cid: string; alt: string }; caution?: string };
 export type Letter = {

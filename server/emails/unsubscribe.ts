@@ -3,6 +3,9 @@ import { createHmac, timingSafeEqual } from 'node:crypto';
 export type MailList = 'reports' | 'warnings' | 'notes';
 const LISTS: MailList[] = ['reports', 'warnings', 'notes'];
 
+/** What each kind of e-mail is called in the e-mails and on the unsubscribe page. */
+export const LIST_NAME: Record<MailList, string> = { reports: 'weekly reports', warnings: 'low-margin warnings', notes: 'note e-mails' };
+
 /** A token that turns one kind of e-mail off for one person, signed with the server's secret; it never expires. */
 export function unsubscribeToken(secret: string, userId: string, list: MailList): string {
   const payload = Buffer.from(JSON.stringify({ u: userId, l: list })).toString('base64url');

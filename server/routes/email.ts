@@ -2,13 +2,13 @@ import { Router } from 'express';
 
 import { unsubscribeQuerySchema } from '@/shared/schemas/email-prefs';
 import type { AppContext } from '../context';
-import { esc } from '../emails/render';
-import { readUnsubscribeToken } from '../emails/unsubscribe';
+import { esc } from '../emails/escape';
+import { LIST_NAME, readUnsubscribeToken } from '../emails/unsubscribe';
 import { HttpError } from '../errors';
 import { parsed, validate } from '../middleware/validate';
 import { turnOff } from '../services/email-prefs';
 
-const LIST_NAME = { reports: 'Weekly reports', warnings: 'Low-margin warnings', notes: 'Note e-mails' } as const;
+const title = (s: string) => s.charAt(0).toUpperCase() + s.slice(1);
 
 /**
  * /api/email/unsubscribe: open, no sign-in; the signed token says who and which e-mails.
@@ -29,8 +29,8 @@ export function emailRouter({ db, config }: AppContext) {
     const who = await handle(parsed(res, unsubscribeQuerySchema, 'query').token);
     res.type('html').send(`<!doctype html><html lang="en"><head><meta charset="utf-8"><meta name="viewport" content="width=device-width,initial-scale=1"><title>Keyoff: e-mails turned off</title></head>
 <body style="font-family:Nunito,Segoe UI,Helvetica,Arial,sans-serif;background:#F6F3EC;color:#1C2630;padding:32px;max-width:560px;margin:auto">
-<h1 style="font-size:22px">${esc(LIST_NAME[who.list])} are off</h1>
-<p>You will get no more ${esc(LIST_NAME[who.list].toLowerCase())} from Keyoff. You can turn them back on in <a href="${esc(config.KEYOFF_URL)}/settings">Settings</a>.</p></body></html>`);
+<h1 style="font-size:22px">${esc(title(LIST_NAME[who.list]))} are off</h1>
+<p>You will get no more ${esc(LIST_NAME[who.list])} from Keyoff. You can turn them back on in <a href="${esc(config.KEYOFF_URL)}/settings">Settings</a>.</p></body></html>`);
   });
   router.post('/unsubscribe', validate(unsubscribeQuerySchema, 'query'), async (_req, res) => {
     const who = await handle(parsed(res, unsubscribeQuerySchema, 'query').token);

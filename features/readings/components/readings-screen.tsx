@@ -5,10 +5,11 @@ import { ActivityIndicator, Image, Pressable, StyleSheet, Text, View } from 'rea
 import { z } from 'zod';
 
 import { FilePicker } from '@/components/file-picker';
-import { ChoiceField, NumberField, SwitchField } from '@/components/form';
+import { ChoiceField, NumberField, showApiErrors, SwitchField } from '@/components/form';
 import { TextField } from '@/components/text-field';
 import { Body, Button, Card, Heading, Small } from '@/components/ui';
 import { useIsWide } from '@/components/use-layout';
+import { ApiError } from '@/lib/api-client';
 import { type ColumnMapping, type ReadingForm, readingSchema, voltageDropSchema, type VoltageDropForm } from '@/shared/schemas/reading';
 import { colors, radius, space, type } from '@/shared/theme';
 import {
@@ -173,9 +174,7 @@ function SpotReadingCard({ rigId }: { rigId: string }) {
       await save.mutateAsync({ ...(v as ReadingForm), at: at.toISOString() });
       reset({ ...v, voltageV: Number.NaN, currentA: undefined, note: '' });
     } catch (err) {
-      const fields = (err as { fields?: { path: string; message: string }[] }).fields ?? [];
-      for (const f of fields) setError(f.path as keyof SpotForm, { message: f.message });
-      if (!fields.length) setError('note', { message: err instanceof Error ? err.message : 'Could not save.' });
+      showApiErrors(err, setError, 'note');
     }
   });
   return (
@@ -259,7 +258,7 @@ function UploadsCard({ rigId, readings, canEdit }: { rigId: string; readings: Re
       setFile(null);
     }
   };
-  const apiErrors = (upload.error as { fields?: { path: string; message: string }[] } | null)?.fields ?? [];
+  const apiErrors = upload.error instanceof ApiError ? upload.error.fields : [];
   return (
     <Card testID="uploads">
       <Heading>Logs</Heading>

@@ -2,7 +2,7 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm, useWatch } from 'react-hook-form';
 import { ActivityIndicator, Text } from 'react-native';
 
-import { ChoiceField, NumberField, SwitchField } from '@/components/form';
+import { ChoiceField, NumberField, showApiErrors, SwitchField } from '@/components/form';
 import { TextField } from '@/components/text-field';
 import { Body, Button, Card, Heading, Small } from '@/components/ui';
 import { type EmailPrefs, emailPrefsSchema } from '@/shared/schemas/email-prefs';
@@ -37,9 +37,7 @@ function PrefsForm({ initial, saved }: { initial: EmailPrefs; saved: boolean }) 
     try {
       await save.mutateAsync(values);
     } catch (err) {
-      const fields = (err as { fields?: { path: string; message: string }[] }).fields ?? [];
-      for (const f of fields) setError(f.path as keyof EmailPrefs, { message: f.message });
-      if (!fields.length) setError('timeZone', { message: err instanceof Error ? err.message : 'Could not save.' });
+      showApiErrors(err, setError, 'timeZone');
     }
   });
   return (
