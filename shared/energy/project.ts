@@ -1,7 +1,11 @@
 import type { CompareInput, Load, ProjectionInput } from '../schemas/projection';
 import { MODEL_DEFAULTS } from './defaults';
-import { buildDemandProfile, type DemandProfile, HOURS_PER_WEEK } from './profile';
-import { resolve, type Resolved, round, run } from './simulate';
+import { buildDemandProfile, type DemandProfile, HOURS_PER_WEEK as WEEK } from './profile';
+import { resolve, type Resolved, round as roundTo, run } from './simulate';
+
+// Module-level copies: imported bindings are getters once compiled, too slow for the series loop.
+const HOURS_PER_WEEK = WEEK;
+const round = roundTo;
 
 export type MarginState = 'comfortable' | 'tight' | 'short';
 export type FixKind = 'cutoff-switch' | 'ignition-relay' | 'low-voltage-disconnect' | 'more-driving' | 'more-battery' | 'solar';
@@ -112,8 +116,9 @@ export function project(input: ProjectionInput, options: { fixes?: boolean } = {
   if (r.keyOffA > 0) items.push({ name: 'Key-off draw', kind: 'standby', supply: null, ahPerDay: week.keyOffAh * perDay });
   items.push({ name: 'Self-discharge', kind: 'standby', supply: null, ahPerDay: week.selfDischargeAh * perDay });
   const total = items.reduce((s, x) => s + x.ahPerDay, 0);
-  const breakdown = items
-    .map((x) => ({ ...x, ahPerDay: round(x.ahPerDay, 2), share: total > 0 ? round(x.ahPerDay / total, 4) : 0 }))
+  // Written out field by field: an object spread with overrides is slow in V8.
+  const breakdown: BreakdownItem[] = items
+    .map((x) => ({ name: x.name, kind: x.kind, supply: x.supply, ahPerDay: round(x.ahPerDay, 2), share: total > 0 ? round(x.ahPerDay / total, 4) : 0 }))
     .sort((a, b) => b.ahPerDay - a.ahPerDay);
 
   const marginDays = routineCut === null ? null : round(routineCut - input.plannedStayDays, 2);
@@ -182,7 +187,7 @@ function collectWarnings(
   const warnings: Warning[] = [];
   const inv = r.inverter;
   if (inv?.control === 'ignition-relay') {
-    const cut = demand.loads.filter((lp) => lp.ac && lp.parkedOn.some((x) => x > 0)).map((lp) => lp.load.name);
+    const cut = demand.loads.filter((lp) => lp.ac && lp.runsParked).map((lp) => lp.load.name);
     if (cut.length) {
       warnings.push({
         code: 'ac-loads-cut-while-parked',
@@ -260,7 +265,7 @@ function findFixes(
     inverter: input.inverter ? { ...input.inverter, control } : null,
   });
   const acNames = demand.loads.filter((lp) => lp.ac).map((lp) => lp.load.name);
-  const acParkedNames = demand.loads.filter((lp) => lp.ac && lp.parkedOn.some((x) => x > 0)).map((lp) => lp.load.name);
+  const acParkedNames = demand.loads.filter((lp) => lp.ac && lp.runsParked).map((lp) => lp.load.name);
 
   if (input.inverter && input.inverter.control !== 'manual-switch') {
     const changed = withControl('manual-switch');

@@ -165,6 +165,10 @@ type RunOptions = {
  * One run of the model, hour by hour (each hour split into its driving and parked parts), from the start
  * state of charge. Returns the time to the cut-off and to flat, and on request the series and the first
  * week's totals.
+ *
+ * This is the model's hot loop (a projection runs it twice, the Fixes dozens of times): everything it
+ * reads is copied into locals first and the week's sums are kept in locals, so the loop body touches
+ * only numbers and arrays of doubles.
  */
 export function run(r: Resolved, demand: DemandProfile, opts: RunOptions): RunResult {
   const hours = opts.hours ?? r.horizonHours;
@@ -176,89 +180,107 @@ export function run(r: Resolved, demand: DemandProfile, opts: RunOptions): RunRe
   let minSoc = r.startSoc;
   let maxAcWatts = 0;
   const inv = r.inverter;
+  const hasInverter = inv !== null;
+  const control = inv ? inv.control : 'always-on';
+  const isLvd = hasInverter && control === 'low-voltage-disconnect';
+  const idleA = inv ? inv.idleA : 0;
+  const lvdSoc = inv ? inv.lvdSoc : 0;
+  const lvdReconnectSoc = inv ? inv.lvdSoc + inv.lvdReconnectPoints : 0;
+  const lvdAh = (lvdSoc / 100) * full;
   let lvdOn = true;
-  const trace: Trace | null = opts.record ? { soc: [], ah: [], netA: [], drivingMinutes: [], inverterOn: [] } : null;
+  const record = opts.record === true;
+  // Sized up front (a run that records never stops early).
+  const socs = record ? zeros(hours) : [];
+  const ahs = record ? zeros(hours) : [];
+  const nets = record ? zeros(hours) : [];
+  const minutes = record ? zeros(hours) : [];
+  const inverterOns: boolean[] = record ? new Array<boolean>(hours).fill(false) : [];
   const trackWeek = opts.trackWeek ?? false;
-  const perLoad = opts.perLoad ?? true;
-  const week: RunTotals | null = trackWeek
-    ? {
-        loadAh: 0,
-        inverterIdleAh: 0,
-        keyOffAh: 0,
-        selfDischargeAh: 0,
-        chargeAh: 0,
-        acNotServedAh: 0,
-        perLoadAh: zeros(demand.loads.length),
-        hours: Math.min(hours, HOURS_PER_WEEK),
-      }
-    : null;
+  const perLoad = trackWeek && (opts.perLoad ?? true);
+  const untilCutoff = opts.untilCutoff === true;
+  const withDriving = opts.withDriving;
+  let wLoadAh = 0;
+  let wIdleAh = 0;
+  let wKeyOffAh = 0;
+  let wSelfAh = 0;
+  let wChargeAh = 0;
+  let wNotServedAh = 0;
+  // With perLoad: hours of the first week's parts in which DC loads ran (driving, then parked, per hour
+  // of the week), and AC loads (only while the inverter was on); each load's amp-hours follow after.
+  const ranHours = perLoad ? zeros(4 * HOURS_PER_WEEK) : null;
 
-  const acceptance = (ahNow: number) => {
-    const soc = (ahNow / full) * 100;
-    if (soc < r.taperStartSoc) return r.bulkAcceptanceA;
-    const x = (soc - r.taperStartSoc) / Math.max(1e-9, 100 - r.taperStartSoc);
-    return r.bulkAcceptanceA + (r.taperFloorA - r.bulkAcceptanceA) * Math.min(1, x);
-  };
-  const taperStartAh = (r.taperStartSoc / 100) * full;
+  const { dcDriving, dcParked, acDriving, acParked, acActiveDriving, acActiveParked, acFloorDriving, acFloorParked, acWattsDriving, acWattsParked } = demand;
+  const drivingByHour = r.driving;
+  const solar = r.solarByHourOfDay;
+  const shore = r.shoreByHourOfWeek;
+  const keyOffA = r.keyOffA;
+  const alternatorA = r.alternatorA;
+  const selfA = r.selfDischargeAPerHour;
+  const ratedA = r.ratedCurrentA;
+  const k = r.peukertExponent;
+  const efficiency = r.chargeEfficiency;
+  const bulkA = r.bulkAcceptanceA;
+  const floorA = r.taperFloorA;
+  const taperStartSoc = r.taperStartSoc;
+  const taperStartAh = (taperStartSoc / 100) * full;
+  const taperSpan = Math.max(1e-9, 100 - taperStartSoc);
   // Sub-steps per hour so that efficiency × |d acceptance / d Ah| × step stays at or below 0.5.
-  const taperSlope = Math.max(0, r.bulkAcceptanceA - r.taperFloorA) / Math.max(1e-9, full - taperStartAh);
-  const taperStiffness = (r.chargeEfficiency * taperSlope) / 0.5;
+  const taperSlope = Math.max(0, bulkA - floorA) / Math.max(1e-9, full - taperStartAh);
+  const taperStiffness = (efficiency * taperSlope) / 0.5;
+  const startHow = r.startHourOfWeek;
 
   for (let t = 0; t < hours; t++) {
-    const how = (r.startHourOfWeek + t) % HOURS_PER_WEEK;
+    const how = (startHow + t) % HOURS_PER_WEEK;
     const hod = how % 24;
-    const f = opts.withDriving ? r.driving[how] : 0;
+    const f = withDriving ? drivingByHour[how] : 0;
     const inWeek = trackWeek && t < HOURS_PER_WEEK;
     const ahAtHourStart = ah;
     let inverterOnAny = false;
-    const sources = r.solarByHourOfDay[hod] + r.shoreByHourOfWeek[how];
+    const sources = solar[hod] + shore[how];
 
     // Driving part first, then parked.
     for (let part = 0; part < 2; part++) {
       const driving = part === 0;
       const partHours = driving ? f : 1 - f;
+      if (partHours <= 1e-12) continue;
+      const dc = driving ? dcDriving[how] : dcParked[how];
+      const acDemand = driving ? acDriving[how] : acParked[how];
+      const acActive = driving ? acActiveDriving[how] : acActiveParked[how];
+      const acFloor = driving ? acFloorDriving[how] : acFloorParked[how];
+      const acWatts = driving ? acWattsDriving[how] : acWattsParked[how];
+      const keyOff = driving ? 0 : keyOffA;
+      const chargeA = sources + (driving ? alternatorA : 0);
       // A low-voltage disconnect opens the moment the charge reaches its threshold, inside the hour:
       // the part is then split there and the rest runs with the inverter off.
       for (let done = 0; partHours - done > 1e-12; ) {
         let dt = partHours - done;
         let acOn = false;
         let idleOn = false;
-        if (inv) {
-          if (inv.control === 'low-voltage-disconnect') {
+        if (hasInverter) {
+          if (isLvd) {
             const soc = (ah / full) * 100;
-            if (lvdOn && soc <= inv.lvdSoc) lvdOn = false;
-            else if (!lvdOn && soc >= inv.lvdSoc + inv.lvdReconnectPoints) lvdOn = true;
+            if (lvdOn && soc <= lvdSoc) lvdOn = false;
+            else if (!lvdOn && soc >= lvdReconnectSoc) lvdOn = true;
             acOn = idleOn = lvdOn;
-          } else if (inv.control === 'always-on') {
+          } else if (control === 'always-on') {
             acOn = idleOn = true;
-          } else if (inv.control === 'manual-switch') {
+          } else if (control === 'manual-switch') {
             // Switched on only while an AC load runs; its own losses are in the efficiency.
             acOn = true;
           } else {
             acOn = idleOn = driving;
           }
         }
-        const dc = driving ? demand.dcDriving[how] : demand.dcParked[how];
-        const acDemand = driving ? demand.acDriving[how] : demand.acParked[how];
-        const acActive = driving ? demand.acActiveDriving[how] : demand.acActiveParked[how];
-        const acFloor = driving ? demand.acFloorDriving[how] : demand.acFloorParked[how];
         const ac = acOn ? acDemand : 0;
         // Idle in the part of the hour no AC load runs, and the floor's excess while one runs.
-        const idle = (inv && idleOn ? inv.idleA * (1 - acActive) : 0) + (acOn ? acFloor - acDemand : 0);
-        const keyOff = driving ? 0 : r.keyOffA;
+        const idle = (idleOn ? idleA * (1 - acActive) : 0) + (acOn ? acFloor - acDemand : 0);
         const loadA = dc + ac + idle + keyOff;
-        if (acOn) {
-          const w = driving ? demand.acWattsDriving[how] : demand.acWattsParked[how];
-          if (w > maxAcWatts) maxAcWatts = w;
-        }
-        if (acOn && (idle > 0 || acActive > 0)) inverterOnAny = true;
-        if (inv && idleOn) inverterOnAny = true;
+        if (acOn && acWatts > maxAcWatts) maxAcWatts = acWatts;
+        if ((acOn && (idle > 0 || acActive > 0)) || idleOn) inverterOnAny = true;
 
-        const chargeA = sources + (driving ? r.alternatorA : 0);
         let lvdOpens = false;
-        if (inv && inv.control === 'low-voltage-disconnect' && lvdOn && chargeA < loadA) {
-          const lvdAh = (inv.lvdSoc / 100) * full;
-          const rate = peukert(loadA - chargeA, r.ratedCurrentA, r.peukertExponent) + r.selfDischargeAPerHour;
+        if (isLvd && lvdOn && chargeA < loadA) {
+          const rate = peukert(loadA - chargeA, ratedA, k) + selfA;
           if (ah > lvdAh && ah - rate * dt < lvdAh) {
             dt = (ah - lvdAh) / rate;
             lvdOpens = true;
@@ -271,40 +293,41 @@ export function run(r: Resolved, demand: DemandProfile, opts: RunOptions): RunRe
           // integration from overshooting (a lower battery never ends an hour above a fuller one).
           const n = ah >= taperStartAh - 1e-9 || ah + chargeA * dt >= taperStartAh ? Math.min(200, Math.max(1, Math.ceil(taperStiffness * dt))) : 1;
           const h = dt / n;
-          for (let k = 0; k < n; k++) {
-            const into = Math.min(chargeA - loadA, acceptance(ah));
-            ah = Math.min(full, ah + into * r.chargeEfficiency * h);
+          const surplus = chargeA - loadA;
+          for (let i = 0; i < n; i++) {
+            const soc = (ah / full) * 100;
+            const acceptance = soc < taperStartSoc ? bulkA : bulkA + (floorA - bulkA) * Math.min(1, (soc - taperStartSoc) / taperSpan);
+            const into = surplus < acceptance ? surplus : acceptance;
+            ah = Math.min(full, ah + into * efficiency * h);
           }
           chargeUsedAh = loadA * dt + (ah - before);
         } else {
-          const deficit = loadA - chargeA;
-          ah -= peukert(deficit, r.ratedCurrentA, r.peukertExponent) * dt;
+          ah -= peukert(loadA - chargeA, ratedA, k) * dt;
           chargeUsedAh = chargeA * dt;
         }
-        ah -= r.selfDischargeAPerHour * dt;
+        ah -= selfA * dt;
         const unclamped = ah;
         if (ah < 0) ah = 0;
 
         // Interpolate the moment of crossing inside the part-hour.
-        const t0 = t + (driving ? 0 : f) + done;
         if (hoursToCutoff === null && unclamped <= cutAh && before > cutAh) {
-          hoursToCutoff = t0 + (dt * (before - cutAh)) / (before - unclamped);
+          hoursToCutoff = t + (driving ? 0 : f) + done + (dt * (before - cutAh)) / (before - unclamped);
         }
         if (hoursToFlat === null && unclamped <= 1e-9 && before > 0) {
-          hoursToFlat = t0 + (dt * before) / Math.max(1e-12, before - unclamped);
+          hoursToFlat = t + (driving ? 0 : f) + done + (dt * before) / Math.max(1e-12, before - unclamped);
         }
 
-        if (week && inWeek) {
-          week.loadAh += (dc + ac) * dt;
-          week.inverterIdleAh += idle * dt;
-          week.keyOffAh += keyOff * dt;
-          week.selfDischargeAh += r.selfDischargeAPerHour * dt;
-          week.chargeAh += chargeUsedAh;
-          if (!acOn) week.acNotServedAh += acDemand * dt;
-          for (let i = 0; perLoad && i < demand.loads.length; i++) {
-            const lp = demand.loads[i];
-            if (lp.ac && !acOn) continue;
-            week.perLoadAh[i] += (driving ? lp.drivingA[how] : lp.parkedA[how]) * dt;
+        if (inWeek) {
+          wLoadAh += (dc + ac) * dt;
+          wIdleAh += idle * dt;
+          wKeyOffAh += keyOff * dt;
+          wSelfAh += selfA * dt;
+          wChargeAh += chargeUsedAh;
+          if (!acOn) wNotServedAh += acDemand * dt;
+          if (ranHours) {
+            const at = driving ? how : HOURS_PER_WEEK + how;
+            ranHours[at] += dt;
+            if (acOn) ranHours[2 * HOURS_PER_WEEK + at] += dt;
           }
         }
         done += dt;
@@ -313,21 +336,76 @@ export function run(r: Resolved, demand: DemandProfile, opts: RunOptions): RunRe
     }
     const soc = (ah / full) * 100;
     if (soc < minSoc) minSoc = soc;
-    if (trace) {
-      trace.soc.push(soc);
-      trace.ah.push(ah);
-      trace.netA.push(ah - ahAtHourStart);
-      trace.drivingMinutes.push(f * 60);
-      trace.inverterOn.push(inverterOnAny);
+    if (record) {
+      socs[t] = soc;
+      ahs[t] = ah;
+      nets[t] = ah - ahAtHourStart;
+      minutes[t] = f * 60;
+      inverterOns[t] = inverterOnAny;
     }
-    if (opts.untilCutoff && hoursToCutoff !== null) break;
+    if (untilCutoff && hoursToCutoff !== null) break;
     // Without a series or weekly totals to fill, stop once both answers are known.
-    if (!trace && (!week || t >= HOURS_PER_WEEK) && hoursToCutoff !== null && hoursToFlat !== null) break;
+    if (!record && (!trackWeek || t >= HOURS_PER_WEEK) && hoursToCutoff !== null && hoursToFlat !== null) break;
   }
+
+  let week: RunTotals | null = null;
+  if (trackWeek) {
+    const perLoadAh = zeros(demand.loads.length);
+    if (ranHours) {
+      // Per day, the hours each kind of load ran (for the loads spread over the day).
+      const byDay = zeros(4 * 7);
+      for (let k = 0; k < 4; k++) {
+        for (let h = 0; h < HOURS_PER_WEEK; h++) byDay[k * 7 + ((h / 24) | 0)] += ranHours[k * HOURS_PER_WEEK + h];
+      }
+      for (let i = 0; i < demand.loads.length; i++) {
+        const lp = demand.loads[i];
+        if (lp.hoursPerDay <= 0) continue;
+        // ranHours: DC driving, DC parked, AC driving, AC parked.
+        const d = lp.ac ? 2 : 0;
+        const useD = lp.onDriving ? 1 : 0;
+        const useP = lp.onParked ? 1 : 0;
+        let sum = 0;
+        if (lp.startHour < 0) {
+          for (let day = 0; day < 7; day++) {
+            if ((lp.days & (1 << day)) === 0) continue;
+            sum += useD * byDay[d * 7 + day] + useP * byDay[(d + 1) * 7 + day];
+          }
+          sum *= lp.hoursPerDay / 24;
+        } else {
+          for (let day = 0; day < 7; day++) {
+            if ((lp.days & (1 << day)) === 0) continue;
+            let t = day * 24 + lp.startHour;
+            let left = lp.hoursPerDay;
+            while (left > 1e-12) {
+              const x = left < 1 ? left : 1;
+              const h = t % HOURS_PER_WEEK;
+              sum += x * (useD * ranHours[d * HOURS_PER_WEEK + h] + useP * ranHours[(d + 1) * HOURS_PER_WEEK + h]);
+              left -= x;
+              t++;
+            }
+          }
+        }
+        perLoadAh[i] = lp.amps * sum;
+      }
+    }
+    week = {
+      loadAh: wLoadAh,
+      inverterIdleAh: wIdleAh,
+      keyOffAh: wKeyOffAh,
+      selfDischargeAh: wSelfAh,
+      chargeAh: wChargeAh,
+      acNotServedAh: wNotServedAh,
+      perLoadAh,
+      hours: Math.min(hours, HOURS_PER_WEEK),
+    };
+  }
+  const trace: Trace | null = record ? { soc: socs, ah: ahs, netA: nets, drivingMinutes: minutes, inverterOn: inverterOns } : null;
   return { hoursToCutoff, hoursToFlat, minSoc, maxAcWatts, trace, week };
 }
 
+const SCALES = [1, 10, 100, 1000, 10_000, 100_000, 1_000_000];
+
 export function round(x: number, digits: number): number {
-  const m = 10 ** digits;
+  const m = digits >= 0 && digits < SCALES.length ? SCALES[digits] : 10 ** digits;
   return Math.round(x * m) / m;
 }
