@@ -22,7 +22,8 @@ const rigWith = (n: number) => {
 };
 
 function time(fn: () => void, runs: number) {
-  for (let i = 0; i < Math.min(200, runs); i++) fn(); // warm-up
+  // Warm-up long enough for the optimizing compiler to settle on the code it keeps.
+  for (let i = 0; i < Math.max(1000, runs); i++) fn();
   const samples: number[] = [];
   for (let i = 0; i < runs; i++) {
     const t0 = process.hrtime.bigint();

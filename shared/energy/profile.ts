@@ -52,52 +52,44 @@ export type LoadProfile = {
   runsParked: boolean;
 };
 
-/** The week's demand: per hour, DC and AC currents parked and driving, and how much of the hour an AC load runs. */
+/**
+ * Where each figure of an hour sits in DemandProfile.byHour: hour h's figures start at h × HOUR_STRIDE,
+ * the parked ones first (PARKED), then the driving ones (DRIVING); within each: DC current, AC current,
+ * the fraction of the hour an AC load runs, the AC current with the inverter's idle floor, and the watts
+ * of the AC loads on together. One array with an hour's figures side by side: the run reads them together.
+ */
+export const PARKED = 0;
+export const DRIVING = 5;
+export const DC_A = 0;
+export const AC_A = 1;
+export const AC_ACTIVE = 2;
+export const AC_FLOOR_A = 3;
+export const AC_WATTS = 4;
+export const HOUR_STRIDE = 10;
+
+/** The week's demand: the loads, and per hour their DC and AC figures parked and driving (see HOUR_STRIDE). */
 export type DemandProfile = {
   loads: LoadProfile[];
-  dcParked: number[];
-  dcDriving: number[];
-  acParked: number[];
-  acDriving: number[];
-  acActiveParked: number[];
-  acActiveDriving: number[];
-  /** AC draw with the inverter's floor: while a load runs the inverter draws at least its idle current. */
-  acFloorParked: number[];
-  acFloorDriving: number[];
-  acWattsParked: number[];
-  acWattsDriving: number[];
+  byHour: number[];
 };
 
-// The ten per-hour aggregates, in this order, in the table of spread loads' levels per day.
-const DC_P = 0;
-const DC_D = 1;
-const AC_P = 2;
-const AC_D = 3;
-const ACTIVE_P = 4;
-const ACTIVE_D = 5;
-const FLOOR_P = 6;
-const FLOOR_D = 7;
-const WATTS_P = 8;
-const WATTS_D = 9;
-
 export function buildDemandProfile(loads: Load[], systemVoltage: number, inverterEfficiency: number, inverterIdleA = 0): DemandProfile {
-  const profile: DemandProfile = {
-    loads: [],
-    dcParked: zeros(HOURS_PER_WEEK),
-    dcDriving: zeros(HOURS_PER_WEEK),
-    acParked: zeros(HOURS_PER_WEEK),
-    acDriving: zeros(HOURS_PER_WEEK),
-    acActiveParked: zeros(HOURS_PER_WEEK),
-    acActiveDriving: zeros(HOURS_PER_WEEK),
-    acFloorParked: zeros(HOURS_PER_WEEK),
-    acFloorDriving: zeros(HOURS_PER_WEEK),
-    acWattsParked: zeros(HOURS_PER_WEEK),
-    acWattsDriving: zeros(HOURS_PER_WEEK),
-  };
-  const { dcParked, dcDriving, acParked, acDriving, acActiveParked, acActiveDriving, acFloorParked, acFloorDriving, acWattsParked, acWattsDriving } = profile;
-  // Spread loads add the same to every hour of a day: gathered per day, added to the hours at the end.
-  const levels = zeros(10 * 7);
+  const byHour = zeros(HOURS_PER_WEEK * HOUR_STRIDE);
+  const profile: DemandProfile = { loads: [], byHour };
+  // Spread loads add the same to every hour of a day: gathered per day (same layout), added at the end.
+  const levels = zeros(7 * HOUR_STRIDE);
   let anySpread = false;
+  // Adds one load's share x of an hour to slot i (an hour's or a day's) of the table.
+  const add = (table: number[], i: number, ac: boolean, a: number, floor: number, x: number, watts: number) => {
+    if (!ac) {
+      table[i + DC_A] += a;
+      return;
+    }
+    table[i + AC_A] += a;
+    table[i + AC_FLOOR_A] += floor;
+    if (x > table[i + AC_ACTIVE]) table[i + AC_ACTIVE] = x;
+    table[i + AC_WATTS] += watts;
+  };
   for (const load of loads) {
     const ac = load.supply === 'ac';
     const runningA = loadRunningCurrentA(load, systemVoltage, inverterEfficiency);
@@ -123,26 +115,10 @@ export function buildDemandProfile(loads: Load[], systemVoltage: number, inverte
     if (startHour < 0) {
       anySpread = true;
       const x = hoursPerDay / 24;
-      const a = amps * x;
       for (let day = 0; day < 7; day++) {
         if ((days & (1 << day)) === 0) continue;
-        if (!ac) {
-          if (onParked) levels[DC_P * 7 + day] += a;
-          if (onDriving) levels[DC_D * 7 + day] += a;
-          continue;
-        }
-        if (onParked) {
-          levels[AC_P * 7 + day] += a;
-          levels[FLOOR_P * 7 + day] += floorA * x;
-          if (x > levels[ACTIVE_P * 7 + day]) levels[ACTIVE_P * 7 + day] = x;
-          levels[WATTS_P * 7 + day] += watts;
-        }
-        if (onDriving) {
-          levels[AC_D * 7 + day] += a;
-          levels[FLOOR_D * 7 + day] += floorA * x;
-          if (x > levels[ACTIVE_D * 7 + day]) levels[ACTIVE_D * 7 + day] = x;
-          levels[WATTS_D * 7 + day] += watts;
-        }
+        if (onParked) add(levels, day * HOUR_STRIDE + PARKED, ac, amps * x, floorA * x, x, watts);
+        if (onDriving) add(levels, day * HOUR_STRIDE + DRIVING, ac, amps * x, floorA * x, x, watts);
       }
       continue;
     }
@@ -152,42 +128,24 @@ export function buildDemandProfile(loads: Load[], systemVoltage: number, inverte
       let left = hoursPerDay;
       while (left > 1e-12) {
         const x = left < 1 ? left : 1;
-        const h = t % HOURS_PER_WEEK;
+        const i = (t % HOURS_PER_WEEK) * HOUR_STRIDE;
         left -= x;
         t++;
-        const a = amps * x;
-        if (!ac) {
-          if (onParked) dcParked[h] += a;
-          if (onDriving) dcDriving[h] += a;
-          continue;
-        }
-        const floor = floorA * x;
-        if (onParked) {
-          acParked[h] += a;
-          acFloorParked[h] += floor;
-          if (x > acActiveParked[h]) acActiveParked[h] = x;
-          acWattsParked[h] += watts;
-        }
-        if (onDriving) {
-          acDriving[h] += a;
-          acFloorDriving[h] += floor;
-          if (x > acActiveDriving[h]) acActiveDriving[h] = x;
-          acWattsDriving[h] += watts;
-        }
+        if (onParked) add(byHour, i + PARKED, ac, amps * x, floorA * x, x, watts);
+        if (onDriving) add(byHour, i + DRIVING, ac, amps * x, floorA * x, x, watts);
       }
     }
   }
   if (anySpread) {
-    const byIndex = [dcParked, dcDriving, acParked, acDriving, acActiveParked, acActiveDriving, acFloorParked, acFloorDriving, acWattsParked, acWattsDriving];
-    for (let k = 0; k < 10; k++) {
-      const out = byIndex[k];
-      const isMax = k === ACTIVE_P || k === ACTIVE_D;
-      for (let day = 0; day < 7; day++) {
-        const level = levels[k * 7 + day];
+    for (let day = 0; day < 7; day++) {
+      for (let k = 0; k < HOUR_STRIDE; k++) {
+        const level = levels[day * HOUR_STRIDE + k];
         if (level === 0) continue;
+        const isMax = k === PARKED + AC_ACTIVE || k === DRIVING + AC_ACTIVE;
         for (let h = day * 24, end = h + 24; h < end; h++) {
-          if (!isMax) out[h] += level;
-          else if (level > out[h]) out[h] = level;
+          const i = h * HOUR_STRIDE + k;
+          if (!isMax) byHour[i] += level;
+          else if (level > byHour[i]) byHour[i] = level;
         }
       }
     }

@@ -1,9 +1,10 @@
 import type { InverterControl, ProjectionInput } from '../schemas/projection';
 import { CHEMISTRY_DEFAULTS, MODEL_DEFAULTS, peukertEffectiveCurrent, temperatureFactor } from './defaults';
-import { type DemandProfile, drivingFractions, HOURS_PER_WEEK as WEEK, solarCurrents, zeros } from './profile';
+import * as layout from './profile';
+import { type DemandProfile, drivingFractions, solarCurrents, zeros } from './profile';
 
 // Module-level copies: imported bindings are getters once compiled, too slow for the hot loop.
-const HOURS_PER_WEEK = WEEK;
+const { HOURS_PER_WEEK, HOUR_STRIDE, PARKED, DRIVING, DC_A, AC_A, AC_ACTIVE, AC_FLOOR_A, AC_WATTS } = layout;
 const peukert = peukertEffectiveCurrent;
 
 /** The input with every default filled in: what one run of the model needs, besides the demand profile. */
@@ -126,7 +127,11 @@ export function resolve(input: ProjectionInput): Resolved {
 }
 
 
-export type Trace = { soc: number[]; ah: number[]; netA: number[]; drivingMinutes: number[]; inverterOn: boolean[] };
+/**
+ * Per hour: the charge at its end (Ah), and 1 where the inverter was on (else 0). The state of charge,
+ * the net change and the minutes driven follow from these and the input (see seriesOf in project.ts).
+ */
+export type Trace = { ah: number[]; inverterOn: number[] };
 
 export type RunTotals = {
   loadAh: number;
@@ -145,7 +150,7 @@ export type RunResult = {
   hoursToFlat: number | null;
   minSoc: number;
   maxAcWatts: number;
-  /** Per hour, on request: state of charge (%), Ah, net current, minutes driven, inverter on. */
+  /** Per hour, on request: the charge (Ah) and whether the inverter was on. */
   trace: Trace | null;
   week: RunTotals | null;
 };
@@ -190,11 +195,8 @@ export function run(r: Resolved, demand: DemandProfile, opts: RunOptions): RunRe
   let lvdOn = true;
   const record = opts.record === true;
   // Sized up front (a run that records never stops early).
-  const socs = record ? zeros(hours) : [];
   const ahs = record ? zeros(hours) : [];
-  const nets = record ? zeros(hours) : [];
-  const minutes = record ? zeros(hours) : [];
-  const inverterOns: boolean[] = record ? new Array<boolean>(hours).fill(false) : [];
+  const inverterOns = record ? zeros(hours) : [];
   const trackWeek = opts.trackWeek ?? false;
   const perLoad = trackWeek && (opts.perLoad ?? true);
   const untilCutoff = opts.untilCutoff === true;
@@ -209,7 +211,7 @@ export function run(r: Resolved, demand: DemandProfile, opts: RunOptions): RunRe
   // of the week), and AC loads (only while the inverter was on); each load's amp-hours follow after.
   const ranHours = perLoad ? zeros(4 * HOURS_PER_WEEK) : null;
 
-  const { dcDriving, dcParked, acDriving, acParked, acActiveDriving, acActiveParked, acFloorDriving, acFloorParked, acWattsDriving, acWattsParked } = demand;
+  const byHour = demand.byHour;
   const drivingByHour = r.driving;
   const solar = r.solarByHourOfDay;
   const shore = r.shoreByHourOfWeek;
@@ -229,12 +231,14 @@ export function run(r: Resolved, demand: DemandProfile, opts: RunOptions): RunRe
   const taperStiffness = (efficiency * taperSlope) / 0.5;
   const startHow = r.startHourOfWeek;
 
-  for (let t = 0; t < hours; t++) {
-    const how = (startHow + t) % HOURS_PER_WEEK;
-    const hod = how % 24;
+  let minAh = Infinity;
+  for (let t = 0, how = startHow % HOURS_PER_WEEK, hod = how % 24; t < hours; t++) {
+    if (t > 0) {
+      how = how === HOURS_PER_WEEK - 1 ? 0 : how + 1;
+      hod = hod === 23 ? 0 : hod + 1;
+    }
     const f = withDriving ? drivingByHour[how] : 0;
     const inWeek = trackWeek && t < HOURS_PER_WEEK;
-    const ahAtHourStart = ah;
     let inverterOnAny = false;
     const sources = solar[hod] + shore[how];
 
@@ -243,11 +247,12 @@ export function run(r: Resolved, demand: DemandProfile, opts: RunOptions): RunRe
       const driving = part === 0;
       const partHours = driving ? f : 1 - f;
       if (partHours <= 1e-12) continue;
-      const dc = driving ? dcDriving[how] : dcParked[how];
-      const acDemand = driving ? acDriving[how] : acParked[how];
-      const acActive = driving ? acActiveDriving[how] : acActiveParked[how];
-      const acFloor = driving ? acFloorDriving[how] : acFloorParked[how];
-      const acWatts = driving ? acWattsDriving[how] : acWattsParked[how];
+      const at = how * HOUR_STRIDE + (driving ? DRIVING : PARKED);
+      const dc = byHour[at + DC_A];
+      const acDemand = byHour[at + AC_A];
+      const acActive = byHour[at + AC_ACTIVE];
+      const acFloor = byHour[at + AC_FLOOR_A];
+      const acWatts = byHour[at + AC_WATTS];
       const keyOff = driving ? 0 : keyOffA;
       const chargeA = sources + (driving ? alternatorA : 0);
       // A low-voltage disconnect opens the moment the charge reaches its threshold, inside the hour:
@@ -334,60 +339,22 @@ export function run(r: Resolved, demand: DemandProfile, opts: RunOptions): RunRe
         if (lvdOpens) lvdOn = false;
       }
     }
-    const soc = (ah / full) * 100;
-    if (soc < minSoc) minSoc = soc;
+    if (ah < minAh) minAh = ah;
     if (record) {
-      socs[t] = soc;
       ahs[t] = ah;
-      nets[t] = ah - ahAtHourStart;
-      minutes[t] = f * 60;
-      inverterOns[t] = inverterOnAny;
+      inverterOns[t] = inverterOnAny ? 1 : 0;
     }
     if (untilCutoff && hoursToCutoff !== null) break;
     // Without a series or weekly totals to fill, stop once both answers are known.
     if (!record && (!trackWeek || t >= HOURS_PER_WEEK) && hoursToCutoff !== null && hoursToFlat !== null) break;
   }
 
+  // The lowest state of charge, from the lowest charge ((x / full) × 100 rises with x, so this is exact).
+  const lowest = (minAh / full) * 100;
+  if (lowest < minSoc) minSoc = lowest;
   let week: RunTotals | null = null;
   if (trackWeek) {
-    const perLoadAh = zeros(demand.loads.length);
-    if (ranHours) {
-      // Per day, the hours each kind of load ran (for the loads spread over the day).
-      const byDay = zeros(4 * 7);
-      for (let k = 0; k < 4; k++) {
-        for (let h = 0; h < HOURS_PER_WEEK; h++) byDay[k * 7 + ((h / 24) | 0)] += ranHours[k * HOURS_PER_WEEK + h];
-      }
-      for (let i = 0; i < demand.loads.length; i++) {
-        const lp = demand.loads[i];
-        if (lp.hoursPerDay <= 0) continue;
-        // ranHours: DC driving, DC parked, AC driving, AC parked.
-        const d = lp.ac ? 2 : 0;
-        const useD = lp.onDriving ? 1 : 0;
-        const useP = lp.onParked ? 1 : 0;
-        let sum = 0;
-        if (lp.startHour < 0) {
-          for (let day = 0; day < 7; day++) {
-            if ((lp.days & (1 << day)) === 0) continue;
-            sum += useD * byDay[d * 7 + day] + useP * byDay[(d + 1) * 7 + day];
-          }
-          sum *= lp.hoursPerDay / 24;
-        } else {
-          for (let day = 0; day < 7; day++) {
-            if ((lp.days & (1 << day)) === 0) continue;
-            let t = day * 24 + lp.startHour;
-            let left = lp.hoursPerDay;
-            while (left > 1e-12) {
-              const x = left < 1 ? left : 1;
-              const h = t % HOURS_PER_WEEK;
-              sum += x * (useD * ranHours[d * HOURS_PER_WEEK + h] + useP * ranHours[(d + 1) * HOURS_PER_WEEK + h]);
-              left -= x;
-              t++;
-            }
-          }
-        }
-        perLoadAh[i] = lp.amps * sum;
-      }
-    }
+    const perLoadAh = ranHours ? perLoadAmpHours(demand, ranHours) : zeros(demand.loads.length);
     week = {
       loadAh: wLoadAh,
       inverterIdleAh: wIdleAh,
@@ -399,8 +366,55 @@ export function run(r: Resolved, demand: DemandProfile, opts: RunOptions): RunRe
       hours: Math.min(hours, HOURS_PER_WEEK),
     };
   }
-  const trace: Trace | null = record ? { soc: socs, ah: ahs, netA: nets, drivingMinutes: minutes, inverterOn: inverterOns } : null;
+  const trace: Trace | null = record ? { ah: ahs, inverterOn: inverterOns } : null;
   return { hoursToCutoff, hoursToFlat, minSoc, maxAcWatts, trace, week };
+}
+
+/**
+ * Each load's amp-hours over the first week, from the hours its kind ran (ranHours: DC driving, DC
+ * parked, AC driving, AC parked, each per hour of the week) and its schedule.
+ */
+function perLoadAmpHours(demand: DemandProfile, ranHours: number[]): number[] {
+  const perLoadAh = zeros(demand.loads.length);
+  // Per day, the hours each kind ran (for the loads spread over the day).
+  const byDay = zeros(4 * 7);
+  for (let k = 0; k < 4; k++) {
+    for (let day = 0; day < 7; day++) {
+      let sum = 0;
+      for (let h = k * HOURS_PER_WEEK + day * 24, end = h + 24; h < end; h++) sum += ranHours[h];
+      byDay[k * 7 + day] = sum;
+    }
+  }
+  for (let i = 0; i < demand.loads.length; i++) {
+    const lp = demand.loads[i];
+    if (lp.hoursPerDay <= 0) continue;
+    const d = lp.ac ? 2 : 0;
+    const useD = lp.onDriving ? 1 : 0;
+    const useP = lp.onParked ? 1 : 0;
+    let sum = 0;
+    if (lp.startHour < 0) {
+      for (let day = 0; day < 7; day++) {
+        if ((lp.days & (1 << day)) === 0) continue;
+        sum += useD * byDay[d * 7 + day] + useP * byDay[(d + 1) * 7 + day];
+      }
+      sum *= lp.hoursPerDay / 24;
+    } else {
+      for (let day = 0; day < 7; day++) {
+        if ((lp.days & (1 << day)) === 0) continue;
+        let t = day * 24 + lp.startHour;
+        let left = lp.hoursPerDay;
+        while (left > 1e-12) {
+          const x = left < 1 ? left : 1;
+          const h = t % HOURS_PER_WEEK;
+          sum += x * (useD * ranHours[d * HOURS_PER_WEEK + h] + useP * ranHours[(d + 1) * HOURS_PER_WEEK + h]);
+          left -= x;
+          t++;
+        }
+      }
+    }
+    perLoadAh[i] = lp.amps * sum;
+  }
+  return perLoadAh;
 }
 
 const SCALES = [1, 10, 100, 1000, 10_000, 100_000, 1_000_000];
