@@ -9,7 +9,7 @@ import { devCors } from './middleware/cors';
 import { errorHandler, notFoundApi } from './middleware/error-handler';
 import { rateLimitedOpen } from './middleware/rate-limit';
 import { sameOrigin } from './middleware/same-origin';
-import { requireSession } from './middleware/session';
+import { forgetCachedSessions, requireSession } from './middleware/session';
 import { adminRouter } from './routes/admin';
 import { cableRunsRouter } from './routes/cable-runs';
 import { clientsRouter } from './routes/clients';
@@ -52,6 +52,7 @@ export function createApp(ctx: AppContext): Express {
   // The auth handler comes before the JSON parser; it sees the client's address from the socket, never from a header the client sent.
   app.all('/api/auth/{*any}', (req, _res, next) => {
     req.headers[CLIENT_IP_HEADER] = req.socket.remoteAddress ?? 'unknown';
+    if (req.method !== 'GET' && req.method !== 'HEAD') forgetCachedSessions();
     next();
   }, toNodeHandler(auth));
 

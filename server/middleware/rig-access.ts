@@ -17,10 +17,10 @@ export type RigAccess = NonNullable<Awaited<ReturnType<typeof findRigWithRole>>>
 export function rigAccess(db: Db, permission: Permission) {
   return async (req: Request, res: Response, next: NextFunction) => {
     const params = rigIdParamsSchema.safeParse(req.params);
-    const notFound = new HttpError(404, 'not_found', 'No such rig.');
-    if (!params.success) return next(notFound);
+    const notFound = () => new HttpError(404, 'not_found', 'No such rig.');
+    if (!params.success) return next(notFound());
     const access = await findRigWithRole(db, params.data.rigId, session(res).user.id);
-    if (!access) return next(notFound);
+    if (!access) return next(notFound());
     if (!can(access.role, permission)) return next(new HttpError(403, 'forbidden', `As ${access.role} of this rig you cannot do this.`));
     res.locals.rig = access;
     next();

@@ -7,15 +7,42 @@ import { HttpError } from '../errors';
 export type SessionData = NonNullable<Awaited<ReturnType<Auth['api']['getSession']>>>;
 
 /**
+ * Reads within a few seconds with the same cookies share one session lookup: a read then costs a map
+ * look-up instead of better-auth's signed-cookie check. Only found sessions are kept, never past their
+ * expiry, and any write to /api/auth (sign-in, sign-out, password change or reset, role change) empties
+ * the map, so in this process such a change shows on the next read.
+ */
+const READ_CACHE_MS = 5_000;
+const READ_CACHE_SIZE = 10_000;
+const readCache = new Map<string, { data: SessionData; until: number }>();
+
+export function forgetCachedSessions() {
+  readCache.clear();
+}
+
+/**
  * Reads the better-auth session; 401 without one. Handlers read it with `session(res)`. Reads may use the
- * signed session cookie cache (up to a minute old); every write checks the session in the database, so a
- * revoked session (password reset or change) can change nothing from that moment.
+ * signed session cookie cache (up to a minute old) and the read cache above; every write checks the
+ * session in the database, so a revoked session (password reset or change) can change nothing from that
+ * moment.
  */
 export function requireSession(auth: Auth) {
   return async (req: Request, res: Response, next: NextFunction) => {
     const write = req.method !== 'GET' && req.method !== 'HEAD';
+    const key = req.headers.cookie;
+    if (!write && key) {
+      const hit = readCache.get(key);
+      if (hit && hit.until > Date.now()) {
+        res.locals.session = hit.data;
+        return next();
+      }
+    }
     const data = await auth.api.getSession({ headers: fromNodeHeaders(req.headers), query: { disableCookieCache: write } });
     if (!data) return next(new HttpError(401, 'unauthenticated', 'Sign in to continue.'));
+    if (!write && key) {
+      if (readCache.size >= READ_CACHE_SIZE) readCache.delete(readCache.keys().next().value!);
+      readCache.set(key, { data, until: Math.min(Date.now() + READ_CACHE_MS, new Date(data.session.expiresAt).getTime()) });
+    }
     res.locals.session = data;
     next();
   };

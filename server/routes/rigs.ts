@@ -58,8 +58,14 @@ export function rigsRouter({ db, auth, jobs, config }: AppContext) {
     res.status(204).end();
   });
 
-  router.get('/:rigId/outlook', rigAccess(db, { rig: ['read'] }), async (_req, res) => {
-    res.type('json').send(await rigs.rigOutlookJson(db, rigOf(res)));
+  router.get('/:rigId/outlook', rigAccess(db, { rig: ['read'] }), async (req, res) => {
+    const body = await rigs.rigOutlook(db, rigOf(res));
+    // Always revalidated (the tag moves with the rig's version); gzip when the client takes it.
+    res.set({ ETag: body.etag, 'Cache-Control': 'private, no-cache', Vary: 'Accept-Encoding' });
+    if (req.fresh) return res.status(304).end();
+    res.type('json');
+    if (req.acceptsEncodings('gzip', 'identity') === 'gzip') return res.set('Content-Encoding', 'gzip').send(body.gzip);
+    res.send(body.json);
   });
 
   router.post('/:rigId/try', rigAccess(db, { rig: ['read'] }), validate(tryLoadsSchema), async (_req, res) => {

@@ -41,6 +41,33 @@ describe('the saved rig through the model', () => {
   });
 });
 
+describe('the Outlook over HTTP', () => {
+  it('carries an entity tag: 304 for the same tag, a new tag once the rig changes', async () => {
+    const owner = fx.agents.owner;
+    const first = await owner.get(`/api/rigs/${fx.rigId}/outlook`).expect(200);
+    const tag = first.headers.etag as string;
+    expect(tag).toMatch(/^"outlook-/);
+    expect(first.headers['cache-control']).toBe('private, no-cache');
+    const again = await owner.get(`/api/rigs/${fx.rigId}/outlook`).set('If-None-Match', tag).expect(304);
+    expect(again.text ?? '').toBe('');
+    const rig = (await owner.get(`/api/rigs/${fx.rigId}`)).body;
+    await owner.patch(`/api/rigs/${fx.rigId}`).set('Origin', TEST_ORIGIN).send({ version: rig.version, vehicle: 'Tagged van' }).expect(200);
+    const changed = await owner.get(`/api/rigs/${fx.rigId}/outlook`).set('If-None-Match', tag).expect(200);
+    expect(changed.headers.etag).not.toBe(tag);
+    expect(changed.body.version).toBe(rig.version + 1);
+  });
+
+  it('is gzipped for a client that takes gzip and plain JSON for one that does not, with the same figures', async () => {
+    const gz = await fx.agents.owner.get(`/api/rigs/${fx.rigId}/outlook`).set('Accept-Encoding', 'gzip').expect(200);
+    expect(gz.headers['content-encoding']).toBe('gzip');
+    expect(gz.headers.vary).toMatch(/Accept-Encoding/);
+    const plain = await fx.agents.owner.get(`/api/rigs/${fx.rigId}/outlook`).set('Accept-Encoding', 'identity').expect(200);
+    expect(plain.headers['content-encoding']).toBeUndefined();
+    expect(gz.body).toEqual(plain.body);
+    expect(Number(gz.headers['content-length'])).toBeLessThan(Number(plain.headers['content-length']) / 4);
+  });
+});
+
 describe('editing a rig', () => {
   it('refuses a stale edit with 409 and keeps the other change', async () => {
     const rig = (await fx.agents.owner.get(`/api/rigs/${fx.rigId}`)).body;
