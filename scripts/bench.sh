@@ -24,6 +24,7 @@ node -e '
   console.log(`machine: ${r.machine.cpus} cores, ${r.machine.cpu}, ${r.machine.memoryGb} GB, Node ${r.machine.node}`);
   console.log(`model, 40 loads: plain ${(m.plain.medianMs * 1000).toFixed(0)} µs, with Fixes ${m.withFixes.medianMs} ms (medians)`);
   console.log(`API: health ${r.api.health.requestsPerSecond} req/s; outlook ${r.api.outlook.requestsPerSecond} req/s (${r.api.outlookToBarePercent} %), p99 ${r.api.outlook.p99Ms} ms`);
+  console.log(`API floor here (p99 at 50 connections): the middleware alone ${r.api.middlewareOnly.p99Ms} ms, Express alone ${r.api.expressFloor.p99Ms} ms, Node http alone ${r.api.nodeHttpFloor.p99Ms} ms`);
   if (r.web) console.log(`web: first screen ${r.web.firstScreenGzipKb} KB gz, Outlook ${r.web.outlookGzipKb} KB gz; chromium: first screen ${r.api.browser?.firstScreenMs} ms, chart ${r.api.browser?.outlookChartMs} ms`);
   console.log(`reports: ${r.reports.queued} rigs in ${r.reports.batchSeconds} s; ${r.reports.emailsPerSecond} e-mails a second to maildev`);
 '
