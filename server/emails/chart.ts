@@ -7,8 +7,12 @@ const require_ = createRequire(__filename);
 const FONT = require_.resolve('@expo-google-fonts/nunito/400Regular/Nunito_400Regular.ttf');
 const DAYS = ['Mon', 'Tue', 'Wed', 'Thu', 'Fri', 'Sat', 'Sun'];
 
-/** The week ahead's state of charge as an SVG: the line, the cut-off, a label per day. Our own drawing, no chart library. */
-export function weekChartSvg(socPercent: number[], cutoffSocPercent: number, startWeekday: number) {
+/**
+ * The week ahead's state of charge as an SVG: the line, the cut-off, a faint line at each midnight and
+ * each day's name at its noon. firstHourOfWeek is the hour of the week (Monday 00:00 = 0) of the first
+ * point; the points are an hour apart. Our own drawing, no chart library.
+ */
+export function weekChartSvg(socPercent: number[], cutoffSocPercent: number, firstHourOfWeek: number) {
   const w = 560;
   const h = 200;
   const left = 40;
@@ -24,12 +28,16 @@ export function weekChartSvg(socPercent: number[], cutoffSocPercent: number, sta
   const grid = [0, 50, 100]
     .map((v) => `<line x1="${left}" x2="${w - right}" y1="${y(v)}" y2="${y(v)}" stroke="${colors.line}" stroke-width="1"/><text x="${left - 6}" y="${y(v) + 4}" font-size="11" text-anchor="end" fill="${colors.inkSoft}">${v} %</text>`)
     .join('');
-  const days = Array.from({ length: Math.ceil(socPercent.length / 24) }, (_, d) => {
-    const xi = x(Math.min(d * 24 + 12, n));
-    return `<text x="${xi.toFixed(1)}" y="${h - 8}" font-size="11" text-anchor="middle" fill="${colors.inkSoft}">${DAYS[(startWeekday + d) % 7]}</text>`;
-  }).join('');
+  let midnights = '';
+  let days = '';
+  for (let i = 0; i < socPercent.length; i++) {
+    const at = (firstHourOfWeek + i) % 168;
+    const hourOfDay = at % 24;
+    if (hourOfDay === 0 && i > 0) midnights += `<line x1="${x(i).toFixed(1)}" x2="${x(i).toFixed(1)}" y1="${top}" y2="${h - bottom}" stroke="${colors.line}" stroke-width="1"/>`;
+    if (hourOfDay === 12) days += `<text x="${x(i).toFixed(1)}" y="${h - 8}" font-size="11" text-anchor="middle" fill="${colors.inkSoft}">${DAYS[Math.floor(at / 24)]}</text>`;
+  }
   return `<svg xmlns="http://www.w3.org/2000/svg" width="${w}" height="${h}" viewBox="0 0 ${w} ${h}" font-family="Nunito">
-<rect width="${w}" height="${h}" fill="#FFFFFF"/>${grid}
+<rect width="${w}" height="${h}" fill="#FFFFFF"/>${grid}${midnights}
 <line x1="${left}" x2="${w - right}" y1="${y(cutoffSocPercent)}" y2="${y(cutoffSocPercent)}" stroke="${colors.short}" stroke-width="1.5" stroke-dasharray="6 4"/>
 <text x="${w - right}" y="${y(cutoffSocPercent) - 4}" font-size="11" text-anchor="end" fill="${colors.short}">cut-off ${cutoffSocPercent} %</text>
 <path d="${line}" fill="none" stroke="${colors.night}" stroke-width="2.5" stroke-linejoin="round"/>${days}
@@ -37,7 +45,7 @@ export function weekChartSvg(socPercent: number[], cutoffSocPercent: number, sta
 }
 
 /** The chart as a PNG for the e-mail (mail programs do not show SVG), drawn with the app's own Nunito. */
-export function weekChartPng(socPercent: number[], cutoffSocPercent: number, startWeekday: number): Buffer {
-  const svg = weekChartSvg(socPercent, cutoffSocPercent, startWeekday);
+export function weekChartPng(socPercent: number[], cutoffSocPercent: number, firstHourOfWeek: number): Buffer {
+  const svg = weekChartSvg(socPercent, cutoffSocPercent, firstHourOfWeek);
   return new Resvg(svg, { font: { fontFiles: [FONT], loadSystemFonts: false, defaultFontFamily: 'Nunito' }, fitTo: { mode: 'width', value: 1120 } }).render().asPng();
 }

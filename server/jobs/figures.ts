@@ -22,7 +22,8 @@ export type RigFigures = {
   /** The first week's state of charge, hour by hour, for the small chart. */
   weekSocPercent: number[];
   cutoffSocPercent: number;
-  startWeekday: number;
+  /** Hour of the week (Monday 00:00 = 0) of the chart's first point. */
+  chartStartHourOfWeek: number;
 };
 
 type RigRow = { id: string; name: string; version: number; power: unknown };
@@ -47,7 +48,7 @@ export function figuresOf(rig: RigRow, loads: ReturnType<typeof loadFromRow>[]):
     fixes: p.fixes.slice(0, 3).map((f) => ({ kind: f.kind, summary: f.summary, daysGainedParked: f.daysGainedParked, daysGainedRoutine: f.daysGainedRoutine })),
     weekSocPercent: p.series.slice(0, 169).map((s) => round1(s.socPercent)),
     cutoffSocPercent: p.cutoffSocPercent,
-    startWeekday: power.start.weekday,
+    chartStartHourOfWeek: p.series.length ? p.series[0].weekday * 24 + p.series[0].hourOfDay : power.start.weekday * 24 + power.start.hour,
   };
 }
 

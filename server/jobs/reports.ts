@@ -121,7 +121,7 @@ export async function sendReport(deps: JobDeps, job: ReportJob) {
     const lastState = (previous?.meta as { figures?: RigFigures } | null)?.figures?.marginState;
     const f = job.figures;
     const notes = await openAdvisorNotes(deps, job.rigId);
-    const chartPng = weekChartPng(f.weekSocPercent, f.cutoffSocPercent, f.startWeekday);
+    const chartPng = weekChartPng(f.weekSocPercent, f.cutoffSocPercent, f.chartStartHourOfWeek);
     const change = !lastState ? 'your first weekly report for this rig' : lastState === f.marginState ? `unchanged since last week` : `${STATE_WORD[lastState]} last week`;
     const { html, text } = await renderLetter({
       preview: `${f.rigName}: ${daysText(f.daysParked, f.horizonDays)} parked, margin ${STATE_WORD[f.marginState]}`,
