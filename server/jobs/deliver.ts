@@ -1,6 +1,4 @@
-import { sql } from 'kysely';
-
-import type { EmailKind } from '@/db/schema';
+import { claimEmail, dropEmail, type EmailKey, emailStatus, ensureEmailRow, markEmailFailed, markEmailSent, recordEmailContent } from '../repositories/email';
 import type { JobDeps } from './types';
 
 export type Built = { to: string; subject: string; html: string; text: string; chartPng?: Buffer; meta?: unknown; headers?: Record<string, string> };
@@ -19,34 +17,17 @@ export class SendInFlight extends Error {}
  */
 export async function deliver(
   deps: JobDeps,
-  key: { idempotencyKey: string; kind: EmailKind; userId: string; rigId: string | null },
+  key: EmailKey,
   build: () => Promise<Built | null>,
 ): Promise<DeliverResult> {
   const { db, mailer, config } = deps;
-  await db
-    .insertInto('email_log')
-    .values({ idempotency_key: key.idempotencyKey, kind: key.kind, user_id: key.userId, rig_id: key.rigId, last_error: null, to_address: null, subject: null, html: null, text: null, chart_png: null, created_at: new Date() })
-    .onConflict((oc) => oc.column('idempotency_key').doNothing())
-    .execute();
-  const claimed = await db
-    .updateTable('email_log')
-    .set((eb) => ({ status: 'sending', attempts: eb('attempts', '+', 1), locked_at: new Date() }))
-    .where('idempotency_key', '=', key.idempotencyKey)
-    .where((eb) => eb.or([eb('status', 'in', ['queued', 'failed']), eb.and([eb('status', '=', 'sending'), eb('locked_at', '<', sql<Date>`now() - make_interval(secs => ${config.SEND_LEASE_SECONDS})`)])]))
-    .returning(['id', 'status'])
-    .executeTakeFirst();
+  await ensureEmailRow(db, key);
+  const claimed = await claimEmail(db, key.idempotencyKey, config.SEND_LEASE_SECONDS);
   if (!claimed) {
-    const row = await db.selectFrom('email_log').select('status').where('idempotency_key', '=', key.idempotencyKey).executeTakeFirstOrThrow();
-    if (row.status === 'sent') return 'already-sent';
+    if ((await emailStatus(db, key.idempotencyKey)) === 'sent') return 'already-sent';
     throw new SendInFlight(`e-mail ${key.idempotencyKey} is being sent by another worker`);
   }
-  const fail = async (stage: string, err: unknown) => {
-    await db
-      .updateTable('email_log')
-      .set({ status: 'failed', locked_at: null, last_error: `${stage}: ${err instanceof Error ? err.message : String(err)}`.slice(0, 2000) })
-      .where('id', '=', claimed.id)
-      .execute();
-  };
+  const fail = (stage: string, err: unknown) => markEmailFailed(db, claimed.id, `${stage}: ${err instanceof Error ? err.message : String(err)}`);
   let mail: Built | null;
   try {
     mail = await build();
@@ -55,14 +36,10 @@ export async function deliver(
     throw err;
   }
   if (!mail) {
-    await db.deleteFrom('email_log').where('id', '=', claimed.id).execute();
+    await dropEmail(db, claimed.id);
     return 'skipped';
   }
-  await db
-    .updateTable('email_log')
-    .set({ to_address: mail.to, subject: mail.subject, html: mail.html, text: mail.text, chart_png: mail.chartPng ?? null, meta: mail.meta === undefined ? null : JSON.stringify(mail.meta) })
-    .where('id', '=', claimed.id)
-    .execute();
+  await recordEmailContent(db, claimed.id, { to: mail.to, subject: mail.subject, html: mail.html, text: mail.text, chartPng: mail.chartPng ?? null, meta: mail.meta });
   try {
     await mailer.send({
       to: mail.to,
@@ -76,6 +53,6 @@ export async function deliver(
     await fail('send', err);
     throw err;
   }
-  await db.updateTable('email_log').set({ status: 'sent', sent_at: new Date(), locked_at: null, last_error: null }).where('id', '=', claimed.id).execute();
+  await markEmailSent(db, claimed.id);
   return 'sent';
 }

@@ -3,10 +3,9 @@ import { Router } from 'express';
 import { unsubscribeQuerySchema } from '@/shared/schemas/email-prefs';
 import type { AppContext } from '../context';
 import { esc } from '../emails/escape';
-import { LIST_NAME, readUnsubscribeToken } from '../emails/unsubscribe';
-import { HttpError } from '../errors';
+import { LIST_NAME } from '../emails/unsubscribe';
 import { parsed, validate } from '../middleware/validate';
-import { turnOff } from '../services/email-prefs';
+import { unsubscribe } from '../services/email-prefs';
 
 const title = (s: string) => s.charAt(0).toUpperCase() + s.slice(1);
 
@@ -17,14 +16,7 @@ const title = (s: string) => s.charAt(0).toUpperCase() + s.slice(1);
  */
 export function emailRouter({ db, config }: AppContext) {
   const router = Router();
-  const handle = async (token: string) => {
-    const who = readUnsubscribeToken(config.AUTH_SECRET, token);
-    if (!who) throw new HttpError(400, 'validation_failed', 'This unsubscribe link is not valid.', [{ path: 'token', message: 'The token was changed or is not ours.' }]);
-    const user = await db.selectFrom('user').select('id').where('id', '=', who.userId).executeTakeFirst();
-    if (!user) throw new HttpError(404, 'not_found', 'No such account.');
-    await turnOff(db, who.userId, who.list);
-    return who;
-  };
+  const handle = (token: string) => unsubscribe(db, config.AUTH_SECRET, token);
   router.get('/unsubscribe', validate(unsubscribeQuerySchema, 'query'), async (_req, res) => {
     const who = await handle(parsed(res, unsubscribeQuerySchema, 'query').token);
     res.type('html').send(`<!doctype html><html lang="en"><head><meta charset="utf-8"><meta name="viewport" content="width=device-width,initial-scale=1"><title>Keyoff: e-mails turned off</title></head>

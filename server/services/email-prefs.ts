@@ -1,9 +1,12 @@
 import type { Db } from '@/db/client';
 import { DEFAULT_EMAIL_PREFS, type EmailPrefs } from '@/shared/schemas/email-prefs';
-import type { MailList } from '../emails/unsubscribe';
+import { type MailList, readUnsubscribeToken } from '../emails/unsubscribe';
+import { HttpError } from '../errors';
+import { findEmailPrefs, upsertEmailPrefs } from '../repositories/email';
+import { findUser } from '../repositories/users';
 
 export async function prefsOf(db: Db, userId: string): Promise<EmailPrefs & { saved: boolean }> {
-  const row = await db.selectFrom('email_prefs').selectAll().where('user_id', '=', userId).executeTakeFirst();
+  const row = await findEmailPrefs(db, userId);
   if (!row) return { ...DEFAULT_EMAIL_PREFS, saved: false };
   return {
     reportsOn: row.reports_on,
@@ -30,9 +33,18 @@ export async function savePrefs(db: Db, userId: string, p: Partial<EmailPrefs>) 
     note_emails_on: next.noteEmailsOn,
     updated_at: new Date(),
   };
-  await db.insertInto('email_prefs').values({ user_id: userId, ...values }).onConflict((oc) => oc.column('user_id').doUpdateSet(values)).execute();
+  await upsertEmailPrefs(db, userId, values);
   return prefsOf(db, userId);
 }
 
 const LIST_FIELD: Record<MailList, keyof EmailPrefs> = { reports: 'reportsOn', warnings: 'warningsOn', notes: 'noteEmailsOn' };
 export const turnOff = (db: Db, userId: string, list: MailList) => savePrefs(db, userId, { [LIST_FIELD[list]]: false });
+
+/** One click on an unsubscribe link or header: the signed token says who and which e-mails. */
+export async function unsubscribe(db: Db, secret: string, token: string) {
+  const who = readUnsubscribeToken(secret, token);
+  if (!who) throw new HttpError(400, 'validation_failed', 'This unsubscribe link is not valid.', [{ path: 'token', message: 'The token was changed or is not ours.' }]);
+  if (!(await findUser(db, who.userId))) throw new HttpError(404, 'not_found', 'No such account.');
+  await turnOff(db, who.userId, who.list);
+  return who;
+}

@@ -4,6 +4,7 @@ import { viaAuth } from '../auth-errors';
 import { HttpError } from '../errors';
 import { countOwners, findInvitation, findMember, householdPeople } from '../repositories/rigs';
 import { type Actor, recordMembership } from './history';
+import { findUser } from '../repositories/users';
 
 type Headers = globalThis.Headers;
 const isOwner = (role: string) => role.split(',').includes('owner');
@@ -48,7 +49,7 @@ export async function changeRole(db: Db, auth: Auth, headers: Headers, household
   await recordMembership(db, householdId, actor, 'role-changed', `made ${await nameOf(db, member.userId)} ${role}`);
 }
 
-const nameOf = async (db: Db, userId: string) => (await db.selectFrom('user').select('name').where('id', '=', userId).executeTakeFirst())?.name ?? 'someone';
+const nameOf = async (db: Db, userId: string) => (await findUser(db, userId))?.name ?? 'someone';
 
 export async function removePerson(db: Db, auth: Auth, headers: Headers, householdId: string, memberId: string, actor: Actor) {
   const member = await findMember(db, householdId, memberId);
