@@ -1,7 +1,7 @@
-import { sql, type Kysely, type Transaction } from 'kysely';
+import { type Insertable, sql, type Kysely, type Transaction } from 'kysely';
 
 import type { Db } from '@/db/client';
-import type { Database } from '@/db/schema';
+import type { Database, UploadTable } from '@/db/schema';
 
 type Exec = Db | Transaction<Database> | Kysely<Database>;
 export type NewReadingRow = { at: Date; voltage_v: number; current_a: number | null; soc_percent: number | null; rested: boolean; place: 'terminals' | 'device' | 'ground'; note: string };
@@ -61,4 +61,28 @@ export async function findUpload(db: Exec, rigId: string, uploadId: string, kind
   let q = db.selectFrom('uploads').selectAll().where('rig_id', '=', rigId).where('id', '=', uploadId);
   if (kind) q = q.where('kind', '=', kind);
   return (await q.executeTakeFirst()) ?? null;
+}
+
+/** A log or photo's row (its object already stored); returns the row's figures. */
+export function insertUpload(db: Exec, row: Insertable<UploadTable>) {
+  return db.insertInto('uploads').values(row).returning(['id', 'file_name', 'row_count', 'error_count']).executeTakeFirstOrThrow();
+}
+
+export async function deleteUpload(db: Exec, uploadId: string) {
+  await db.deleteFrom('uploads').where('id', '=', uploadId).execute();
+}
+
+/** The column mapping of the rig's last log, offered for the next. */
+export async function saveLogMapping(db: Exec, rigId: string, mapping: unknown) {
+  await db.updateTable('rigs').set({ log_mapping: JSON.stringify(mapping) }).where('id', '=', rigId).execute();
+}
+
+/** The ids and names of a rig's uploads (for what a note can be written on). */
+export const uploadNamesOf = (db: Exec, rigId: string) => db.selectFrom('uploads').select(['id', 'kind', 'file_name']).where('rig_id', '=', rigId).execute();
+
+/** Whether a reading or an upload with this id belongs to the rig. */
+export async function readingOrUploadOf(db: Exec, rigId: string, id: string): Promise<'reading' | 'upload' | null> {
+  if (await db.selectFrom('readings').select('id').where('rig_id', '=', rigId).where('id', '=', id).executeTakeFirst()) return 'reading';
+  if (await db.selectFrom('uploads').select('id').where('rig_id', '=', rigId).where('id', '=', id).executeTakeFirst()) return 'upload';
+  return null;
 }

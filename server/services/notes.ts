@@ -6,6 +6,7 @@ import type { RigAccess } from '../middleware/rig-access';
 import { listCableRuns } from '../repositories/cable-runs';
 import { deleteNote, findNote, insertNote, listNotes, markRead, setNoteBody, setResolved, unreadCount } from '../repositories/notes';
 import { loadsOfRigs } from '../repositories/rigs';
+import { readingOrUploadOf, uploadNamesOf } from '../repositories/readings';
 
 type LoadSnapshot = { name: string; watts: number | null; amps: number | null; hours_per_day: number; duty_percent: number };
 
@@ -18,7 +19,7 @@ export async function notesOf(db: Db, rig: RigAccess, userId: string) {
     loadsOfRigs(db, [rig.id]),
     unreadCount(db, userId, rig.id),
     listCableRuns(db, rig.id),
-    db.selectFrom('uploads').select(['id', 'kind', 'file_name']).where('rig_id', '=', rig.id).execute(),
+    uploadNamesOf(db, rig.id),
   ]);
   const otherName = (kind: string, id: string | null) => {
     if (kind === 'cable-run') return runs.find((r) => r.id === id)?.label ?? null;
@@ -78,9 +79,7 @@ export async function addNote(db: Db, rig: RigAccess, userId: string, input: Not
     if (!(await listCableRuns(db, rig.id)).some((r) => r.id === targetId)) throw new HttpError(400, 'validation_failed', 'That cable run is not on this rig.', [{ path: 'targetId', message: 'No such cable run on this rig.' }]);
   } else if (targetKind === 'reading') {
     // A spot reading, or an uploaded log or photo of this rig.
-    const reading = await db.selectFrom('readings').select('id').where('rig_id', '=', rig.id).where('id', '=', targetId!).executeTakeFirst();
-    const upload = reading ? null : await db.selectFrom('uploads').select('id').where('rig_id', '=', rig.id).where('id', '=', targetId!).executeTakeFirst();
-    if (!reading && !upload) throw new HttpError(400, 'validation_failed', 'That reading is not on this rig.', [{ path: 'targetId', message: 'No such reading, log or photo on this rig.' }]);
+    if (!(await readingOrUploadOf(db, rig.id, targetId!))) throw new HttpError(400, 'validation_failed', 'That reading is not on this rig.', [{ path: 'targetId', message: 'No such reading, log or photo on this rig.' }]);
   }
   const row = await insertNote(db, { rig_id: rig.id, parent_id: input.parentId ?? null, target_kind: targetKind, target_id: targetId, author_id: userId, body: input.body, rig_version: rig.version, target_snapshot: snapshot });
   await markRead(db, userId, rig.id);

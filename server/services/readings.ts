@@ -10,7 +10,7 @@ import { rigPowerSchema } from '@/shared/schemas/projection';
 import { type ColumnMapping, LOG_LIMITS, type ReadingInputParsed } from '@/shared/schemas/reading';
 import { HttpError } from '../errors';
 import type { RigAccess } from '../middleware/rig-access';
-import { allReadings, deleteReading, findUpload, insertReadings, type NewReadingRow, sampledReadings, spotReadings, uploadsOf } from '../repositories/readings';
+import { allReadings, deleteReading, deleteUpload, findUpload, insertReadings, insertUpload, type NewReadingRow, sampledReadings, saveLogMapping, spotReadings, uploadsOf } from '../repositories/readings';
 import { loadsOfRigs } from '../repositories/rigs';
 import type { Storage } from '../storage';
 import { cableRunsOf } from './cable-runs';
@@ -126,13 +126,9 @@ export async function uploadLog(db: Db, storage: Storage, rig: RigAccess, userId
   await storage.put(key, file.buffer, 'text/csv');
   try {
     const upload = await db.transaction().execute(async (trx) => {
-      const row = await trx
-        .insertInto('uploads')
-        .values({ rig_id: rig.id, kind: 'log', file_name: cleanName(file.originalname), content_type: 'text/csv', size_bytes: file.buffer.length, object_key: key, thumb_key: null, row_count: good.length, error_count: errors.length, errors: JSON.stringify(errors.slice(0, 200)), mapping: JSON.stringify(opts.mapping), created_by: userId, created_at: new Date() })
-        .returning(['id', 'file_name', 'row_count', 'error_count'])
-        .executeTakeFirstOrThrow();
+      const row = await insertUpload(trx, { rig_id: rig.id, kind: 'log', file_name: cleanName(file.originalname), content_type: 'text/csv', size_bytes: file.buffer.length, object_key: key, thumb_key: null, row_count: good.length, error_count: errors.length, errors: JSON.stringify(errors.slice(0, 200)), mapping: JSON.stringify(opts.mapping), created_by: userId, created_at: new Date() });
       await insertReadings(trx, rig.id, row.id, userId, good);
-      await trx.updateTable('rigs').set({ log_mapping: JSON.stringify(opts.mapping) }).where('id', '=', rig.id).execute();
+      await saveLogMapping(trx, rig.id, opts.mapping);
       return row;
     });
     return { upload: { id: upload.id, fileName: upload.file_name, rowCount: upload.row_count, errorCount: upload.error_count }, errors: errors.slice(0, 100) };
@@ -169,11 +165,7 @@ export async function uploadPhoto(db: Db, storage: Storage, rig: RigAccess, user
   await storage.put(key, cleaned, detected.mime);
   try {
     await storage.put(thumbKey, thumb, 'image/jpeg');
-    const row = await db
-      .insertInto('uploads')
-      .values({ id, rig_id: rig.id, kind: 'photo', file_name: cleanName(file.originalname), content_type: detected.mime, size_bytes: cleaned.length, object_key: key, thumb_key: thumbKey, caption, created_by: userId, created_at: new Date() })
-      .returning(['id'])
-      .executeTakeFirstOrThrow();
+    const row = await insertUpload(db, { id, rig_id: rig.id, kind: 'photo', file_name: cleanName(file.originalname), content_type: detected.mime, size_bytes: cleaned.length, object_key: key, thumb_key: thumbKey, caption, created_by: userId, created_at: new Date() });
     return { id: row.id };
   } catch (err) {
     await storage.remove(key).catch(() => undefined);
@@ -193,7 +185,7 @@ export async function photoUrls(db: Db, storage: Storage, rig: RigAccess, photoI
 export async function removeUpload(db: Db, storage: Storage, rig: RigAccess, uploadId: string) {
   const upload = await findUpload(db, rig.id, uploadId);
   if (!upload) throw new HttpError(404, 'not_found', 'No such upload on this rig.');
-  await db.deleteFrom('uploads').where('id', '=', upload.id).execute();
+  await deleteUpload(db, upload.id);
   for (const key of [upload.object_key, upload.thumb_key]) if (key) await storage.remove(key).catch(() => undefined);
 }
 
