@@ -1,9 +1,10 @@
-import { sql } from 'kysely';
-
 import { FIX_WIRING_CAUTION, needsWiringCaution } from '@/shared/safety';
 import { footerFor, listHeaders } from '../emails/links';
 import { renderLetter } from '../emails/render';
+import { warningRecipients } from '../repositories/email';
 import { listHistory } from '../repositories/history';
+import { lockMargin, saveMargin } from '../repositories/margin';
+import { allRigIds, findRigForModel } from '../repositories/rigs';
 import { deliver, SendInFlight } from './deliver';
 import { daysText, figuresOfRigs, STATE_WORD } from './figures';
 import type { Jobs } from './queue';
@@ -19,29 +20,20 @@ export const warningKey = (userId: string, rigId: string, fall: number) => `warn
  */
 export async function checkMargin(deps: JobDeps, rigId: string) {
   const { db } = deps;
-  const rig = await db.selectFrom('rigs').select(['id', 'name', 'version', 'power']).where('id', '=', rigId).executeTakeFirst();
+  const rig = await findRigForModel(db, rigId);
   if (!rig) return { state: null, sent: 0 };
   const figures = (await figuresOfRigs(db, [rig])).get(rig.id)!;
   const now = deps.clock.now();
   const transition = await db.transaction().execute(async (trx) => {
-    await trx.insertInto('rig_margin').values({ rig_id: rigId, state: 'comfortable', falls: 0, days_parked: null, checked_at: new Date(0) }).onConflict((oc) => oc.column('rig_id').doNothing()).execute();
-    const prev = await trx.selectFrom('rig_margin').selectAll().where('rig_id', '=', rigId).forUpdate().executeTakeFirstOrThrow();
+    const prev = await lockMargin(trx, rigId);
     const fell = prev.state === 'comfortable' && figures.marginState !== 'comfortable';
     const falls = prev.falls + (fell ? 1 : 0);
-    await trx.updateTable('rig_margin').set({ state: figures.marginState, falls, days_parked: figures.daysParked, checked_at: now }).where('rig_id', '=', rigId).execute();
+    await saveMargin(trx, rigId, { state: figures.marginState, falls, daysParked: figures.daysParked, checkedAt: now });
     return { prev, falls };
   });
   if (figures.marginState === 'comfortable') return { state: figures.marginState, sent: 0 };
 
-  const people = await db
-    .selectFrom('member')
-    .innerJoin('rigs', 'rigs.household_id', 'member.organizationId')
-    .innerJoin('user', 'user.id', 'member.userId')
-    .leftJoin('email_prefs', 'email_prefs.user_id', 'member.userId')
-    .select(['user.id as id', 'user.name as name', 'user.email as email', sql<string>`coalesce(email_prefs.warn_at, 'tight')`.as('warnAt')])
-    .where('rigs.id', '=', rigId)
-    .where(sql<boolean>`coalesce(email_prefs.warnings_on, true)`)
-    .execute();
+  const people = await warningRecipients(db, rigId);
   const wanted = people.filter((p) => p.warnAt === 'tight' || figures.marginState === 'short');
   // What changed since the rig was last seen Comfortable (or since the last check).
   const changes = (await listHistory(db, rigId, { since: transition.prev.checked_at as unknown as Date, limit: 5 })).filter((h) => h.kind.startsWith('load') || ['battery', 'inverter', 'charging', 'routine', 'stay'].includes(h.kind));
@@ -93,7 +85,7 @@ async function deliverOnce(...args: Parameters<typeof deliver>) {
 
 /** The daily pass: one margin check per rig (the short queue drops a rig already waiting). */
 export async function queueDailyMarginChecks(deps: JobDeps, jobs: Pick<Jobs, 'boss'>) {
-  const rigs = await deps.db.selectFrom('rigs').select('id').execute();
+  const rigs = await allRigIds(deps.db);
   for (let i = 0; i < rigs.length; i += 1000) {
     await jobs.boss.insert(rigs.slice(i, i + 1000).map((r) => ({ name: QUEUES.marginCheck, data: { rigId: r.id }, singletonKey: r.id })));
   }

@@ -1,9 +1,10 @@
-import { sql } from 'kysely';
-
 import { FIX_WIRING_CAUTION, needsWiringCaution } from '@/shared/safety';
 import { weekChartPng } from '../emails/chart';
 import { renderLetter } from '../emails/render';
 import { footerFor, listHeaders } from '../emails/links';
+import { knownEmailKeys, lastSentMeta, markEmailsQueued, recipient, reportSubscribers } from '../repositories/email';
+import { openAdvisorThreads } from '../repositories/notes';
+import { rigOfMember } from '../repositories/rigs';
 import { deliver } from './deliver';
 import { daysText, figuresOfRigs, type RigFigures, STATE_WORD } from './figures';
 import type { Jobs } from './queue';
@@ -13,41 +14,17 @@ import { type JobDeps, QUEUES } from './types';
 export type ReportJob = { userId: string; rigId: string; weekKey: string; scheduledFor: string; figures: RigFigures };
 export const reportKey = (userId: string, rigId: string, weekKey: string) => `report:${userId}:${rigId}:${weekKey}`;
 
-/** Everyone on every rig whose report is on, with their chosen hour and zone (defaults: Sunday 18:00, UTC). */
-async function subscribers(deps: JobDeps) {
-  return deps.db
-    .selectFrom('rigs')
-    .innerJoin('member', 'member.organizationId', 'rigs.household_id')
-    .leftJoin('email_prefs', 'email_prefs.user_id', 'member.userId')
-    .select([
-      'rigs.id as rigId',
-      'rigs.name as rigName',
-      'rigs.version as version',
-      'rigs.power as power',
-      'member.userId as userId',
-      sql<number>`coalesce(email_prefs.report_weekday, 6)`.as('weekday'),
-      sql<number>`coalesce(email_prefs.report_hour, 18)`.as('hour'),
-      sql<string>`coalesce(email_prefs.time_zone, 'UTC')`.as('timeZone'),
-    ])
-    .where(sql<boolean>`coalesce(email_prefs.reports_on, true)`)
-    .execute();
-}
-
 /**
  * The schedule: every report whose hour has come (in its person's zone) and that has not been queued
  * yet. Figures are computed once per rig, then the send jobs go to pg-boss in batches. Returns how many.
  */
 export async function enqueueDueReports(deps: JobDeps, jobs: Pick<Jobs, 'boss'>, at: Date): Promise<number> {
-  const due = (await subscribers(deps)).flatMap((s) => {
+  const due = (await reportSubscribers(deps.db)).flatMap((s) => {
     const d = reportDue(at, { timeZone: s.timeZone, weekday: s.weekday, hour: s.hour });
     return d ? [{ ...s, weekKey: d.weekKey, scheduledFor: d.instant.toISOString(), key: reportKey(s.userId, s.rigId, d.weekKey) }] : [];
   });
   if (!due.length) return 0;
-  const known = new Set<string>();
-  for (let i = 0; i < due.length; i += 2000) {
-    const rows = await deps.db.selectFrom('email_log').select('idempotency_key').where('idempotency_key', 'in', due.slice(i, i + 2000).map((d) => d.key)).execute();
-    rows.forEach((r) => known.add(r.idempotency_key));
-  }
+  const known = await knownEmailKeys(deps.db, due.map((d) => d.key));
   const fresh = due.filter((d) => !known.has(d.key));
   if (!fresh.length) return 0;
   const rigs = [...new Map(fresh.map((d) => [d.rigId, { id: d.rigId, name: d.rigName, version: d.version, power: d.power }])).values()];
@@ -64,63 +41,22 @@ export async function enqueueDueReports(deps: JobDeps, jobs: Pick<Jobs, 'boss'>,
       })),
     );
     // Marks them queued so the next tick does not queue them again; a duplicate still sends once (deliver).
-    await deps.db
-      .insertInto('email_log')
-      .values(chunk.map((d) => ({ idempotency_key: d.key, kind: 'report' as const, user_id: d.userId, rig_id: d.rigId, last_error: null, to_address: null, subject: null, html: null, text: null, chart_png: null, created_at: new Date() })))
-      .onConflict((oc) => oc.column('idempotency_key').doNothing())
-      .execute();
+    await markEmailsQueued(deps.db, chunk.map((d) => ({ idempotencyKey: d.key, kind: 'report' as const, userId: d.userId, rigId: d.rigId })));
   }
   deps.logger.info({ at: at.toISOString(), queued: fresh.length }, 'weekly reports queued');
   return fresh.length;
 }
 
-/** Open threads an advisor started on the rig. */
-async function openAdvisorNotes(deps: JobDeps, rigId: string) {
-  return deps.db
-    .selectFrom('notes')
-    .innerJoin('rigs', 'rigs.id', 'notes.rig_id')
-    .innerJoin('member', (j) => j.onRef('member.organizationId', '=', 'rigs.household_id').onRef('member.userId', '=', 'notes.author_id'))
-    .leftJoin('user', 'user.id', 'notes.author_id')
-    .select(['notes.body as body', 'user.name as author'])
-    .where('notes.rig_id', '=', rigId)
-    .where('notes.parent_id', 'is', null)
-    .where('notes.resolved_at', 'is', null)
-    .where('member.role', '=', 'advisor')
-    .orderBy('notes.created_at', 'desc')
-    .limit(3)
-    .execute();
-}
-
 export async function sendReport(deps: JobDeps, job: ReportJob) {
   const { db, config } = deps;
   return deliver(deps, { idempotencyKey: reportKey(job.userId, job.rigId, job.weekKey), kind: 'report', userId: job.userId, rigId: job.rigId }, async () => {
-    const user = await db
-      .selectFrom('user')
-      .leftJoin('email_prefs', 'email_prefs.user_id', 'user.id')
-      .select(['user.id', 'user.name', 'user.email', sql<boolean>`coalesce(email_prefs.reports_on, true)`.as('on')])
-      .where('user.id', '=', job.userId)
-      .executeTakeFirst();
-    const stillMember = await db
-      .selectFrom('rigs')
-      .innerJoin('member', 'member.organizationId', 'rigs.household_id')
-      .select('rigs.id')
-      .where('rigs.id', '=', job.rigId)
-      .where('member.userId', '=', job.userId)
-      .executeTakeFirst();
+    const user = await recipient(db, job.userId, 'reports');
+    const stillMember = await rigOfMember(db, job.rigId, job.userId);
     if (!user || !user.on || !stillMember) return null;
-    const previous = await db
-      .selectFrom('email_log')
-      .select('meta')
-      .where('user_id', '=', job.userId)
-      .where('rig_id', '=', job.rigId)
-      .where('kind', '=', 'report')
-      .where('status', '=', 'sent')
-      .where('idempotency_key', '!=', reportKey(job.userId, job.rigId, job.weekKey))
-      .orderBy('sent_at', 'desc')
-      .executeTakeFirst();
-    const lastState = (previous?.meta as { figures?: RigFigures } | null)?.figures?.marginState;
+    const previousMeta = await lastSentMeta(db, job.userId, job.rigId, 'report', reportKey(job.userId, job.rigId, job.weekKey));
+    const lastState = (previousMeta as { figures?: RigFigures } | null)?.figures?.marginState;
     const f = job.figures;
-    const notes = await openAdvisorNotes(deps, job.rigId);
+    const notes = await openAdvisorThreads(db, job.rigId);
     const chartPng = weekChartPng(f.weekSocPercent, f.cutoffSocPercent, f.chartStartHourOfWeek);
     const change = !lastState ? 'your first weekly report for this rig' : lastState === f.marginState ? `unchanged since last week` : `${STATE_WORD[lastState]} last week`;
     const { html, text } = await renderLetter({

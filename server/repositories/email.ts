@@ -22,13 +22,7 @@ export async function upsertEmailPrefs(db: Exec, userId: string, values: Omit<In
 export type EmailKey = { idempotencyKey: string; kind: EmailKind; userId: string; rigId: string | null };
 
 /** The key's row, made queued if it is not there yet. */
-export async function ensureEmailRow(db: Exec, key: EmailKey) {
-  await db
-    .insertInto('email_log')
-    .values({ idempotency_key: key.idempotencyKey, kind: key.kind, user_id: key.userId, rig_id: key.rigId, last_error: null, to_address: null, subject: null, html: null, text: null, chart_png: null, created_at: new Date() })
-    .onConflict((oc) => oc.column('idempotency_key').doNothing())
-    .execute();
-}
+export const ensureEmailRow = (db: Exec, key: EmailKey) => markEmailsQueued(db, [key]);
 
 /** Claims the key's row for a send: queued or failed, or sending with its lease run out. Undefined when another holds it or it is sent. */
 export function claimEmail(db: Exec, idempotencyKey: string, leaseSeconds: number) {
@@ -99,4 +93,98 @@ export function failedEmails(db: Exec) {
     .orderBy('created_at', 'desc')
     .limit(200)
     .execute();
+}
+
+// Who gets what: a person's address with one preference (on unless they turned it off).
+
+/** An account with its name and address, and whether the given e-mails are on for it. */
+export function recipient(db: Exec, userId: string, list: 'reports' | 'notes') {
+  const column = list === 'reports' ? sql<boolean>`coalesce(email_prefs.reports_on, true)` : sql<boolean>`coalesce(email_prefs.note_emails_on, true)`;
+  return db
+    .selectFrom('user')
+    .leftJoin('email_prefs', 'email_prefs.user_id', 'user.id')
+    .select(['user.id', 'user.name', 'user.email', column.as('on')])
+    .where('user.id', '=', userId)
+    .executeTakeFirst();
+}
+
+/** Everyone on every rig whose report is on, with their chosen weekday, hour and zone (defaults: Sunday 18:00, UTC). */
+export function reportSubscribers(db: Exec) {
+  return db
+    .selectFrom('rigs')
+    .innerJoin('member', 'member.organizationId', 'rigs.household_id')
+    .leftJoin('email_prefs', 'email_prefs.user_id', 'member.userId')
+    .select([
+      'rigs.id as rigId',
+      'rigs.name as rigName',
+      'rigs.version as version',
+      'rigs.power as power',
+      'member.userId as userId',
+      sql<number>`coalesce(email_prefs.report_weekday, 6)`.as('weekday'),
+      sql<number>`coalesce(email_prefs.report_hour, 18)`.as('hour'),
+      sql<string>`coalesce(email_prefs.time_zone, 'UTC')`.as('timeZone'),
+    ])
+    .where(sql<boolean>`coalesce(email_prefs.reports_on, true)`)
+    .execute();
+}
+
+/** The rig's people with warnings on, with their threshold (tight unless they chose short). */
+export function warningRecipients(db: Exec, rigId: string) {
+  return db
+    .selectFrom('member')
+    .innerJoin('rigs', 'rigs.household_id', 'member.organizationId')
+    .innerJoin('user', 'user.id', 'member.userId')
+    .leftJoin('email_prefs', 'email_prefs.user_id', 'member.userId')
+    .select(['user.id as id', 'user.name as name', 'user.email as email', sql<string>`coalesce(email_prefs.warn_at, 'tight')`.as('warnAt')])
+    .where('rigs.id', '=', rigId)
+    .where(sql<boolean>`coalesce(email_prefs.warnings_on, true)`)
+    .execute();
+}
+
+/** Which of these keys the log already holds. */
+export async function knownEmailKeys(db: Exec, keys: string[]) {
+  const known = new Set<string>();
+  for (let i = 0; i < keys.length; i += 2000) {
+    const rows = await db.selectFrom('email_log').select('idempotency_key').where('idempotency_key', 'in', keys.slice(i, i + 2000)).execute();
+    rows.forEach((r) => known.add(r.idempotency_key));
+  }
+  return known;
+}
+
+/** Rows for e-mails queued as jobs, so the next pass does not queue them again. */
+export async function markEmailsQueued(db: Exec, keys: EmailKey[]) {
+  if (!keys.length) return;
+  await db
+    .insertInto('email_log')
+    .values(keys.map((k) => ({ idempotency_key: k.idempotencyKey, kind: k.kind, user_id: k.userId, rig_id: k.rigId, last_error: null, to_address: null, subject: null, html: null, text: null, chart_png: null, created_at: new Date() })))
+    .onConflict((oc) => oc.column('idempotency_key').doNothing())
+    .execute();
+}
+
+/** The meta of the last e-mail of a kind sent to a person about a rig, other than the given key. */
+export async function lastSentMeta(db: Exec, userId: string, rigId: string, kind: EmailKind, exceptKey: string) {
+  const row = await db
+    .selectFrom('email_log')
+    .select('meta')
+    .where('user_id', '=', userId)
+    .where('rig_id', '=', rigId)
+    .where('kind', '=', kind)
+    .where('status', '=', 'sent')
+    .where('idempotency_key', '!=', exceptKey)
+    .orderBy('sent_at', 'desc')
+    .executeTakeFirst();
+  return row?.meta ?? null;
+}
+
+/** The newest note a person was already told of about a rig (the `newestAt` of their note e-mails). */
+export async function newestNoteEmailed(db: Exec, userId: string, rigId: string) {
+  const row = await db
+    .selectFrom('email_log')
+    .select(sql<Date | null>`max((meta->>'newestAt')::timestamptz)`.as('newest'))
+    .where('user_id', '=', userId)
+    .where('rig_id', '=', rigId)
+    .where('kind', '=', 'notes')
+    .where('status', '=', 'sent')
+    .executeTakeFirst();
+  return row?.newest ?? null;
 }

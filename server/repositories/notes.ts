@@ -45,3 +45,33 @@ export async function unreadCount(db: Db, userId: string, rigId: string): Promis
   if (since) q = q.where('created_at', '>', since);
   return Number((await q.executeTakeFirst())?.n ?? 0);
 }
+
+/** Notes on a rig by others than the person, oldest first, after a moment when given (for the note e-mail). */
+export function notesForDigest(db: Db, rigId: string, userId: string, after: Date | null) {
+  let q = db
+    .selectFrom('notes')
+    .leftJoin('user', 'user.id', 'notes.author_id')
+    .select(['notes.id', 'notes.body', 'notes.parent_id', 'notes.created_at', 'user.name as author'])
+    .where('notes.rig_id', '=', rigId)
+    .where((eb) => eb.or([eb('notes.author_id', '!=', userId), eb('notes.author_id', 'is', null)]))
+    .orderBy('notes.created_at');
+  if (after) q = q.where('notes.created_at', '>', after);
+  return q.execute();
+}
+
+/** Open threads an advisor of the household started on the rig, newest first (at most 3). */
+export function openAdvisorThreads(db: Db, rigId: string) {
+  return db
+    .selectFrom('notes')
+    .innerJoin('rigs', 'rigs.id', 'notes.rig_id')
+    .innerJoin('member', (j) => j.onRef('member.organizationId', '=', 'rigs.household_id').onRef('member.userId', '=', 'notes.author_id'))
+    .leftJoin('user', 'user.id', 'notes.author_id')
+    .select(['notes.body as body', 'user.name as author'])
+    .where('notes.rig_id', '=', rigId)
+    .where('notes.parent_id', 'is', null)
+    .where('notes.resolved_at', 'is', null)
+    .where('member.role', '=', 'advisor')
+    .orderBy('notes.created_at', 'desc')
+    .limit(3)
+    .execute();
+}

@@ -179,3 +179,15 @@ export async function deleteLoad(db: Exec, rigId: string, loadId: string) {
 export async function rigsOfHousehold(db: Exec, householdId: string) {
   return db.selectFrom('rigs').selectAll().where('household_id', '=', householdId).execute();
 }
+
+/** What the model needs of a rig besides its loads. */
+export const findRigForModel = (db: Exec, rigId: string) => db.selectFrom('rigs').select(['id', 'name', 'version', 'power']).where('id', '=', rigId).executeTakeFirst();
+
+export const allRigIds = (db: Exec) => db.selectFrom('rigs').select('id').execute();
+
+/** The rig's id and name when the person is in its household. */
+export const rigOfMember = (db: Exec, rigId: string, userId: string) =>
+  db.selectFrom('rigs').innerJoin('member', 'member.organizationId', 'rigs.household_id').select(['rigs.id', 'rigs.name']).where('rigs.id', '=', rigId).where('member.userId', '=', userId).executeTakeFirst();
+
+/** The household's people and their roles. */
+export const membersOf = (db: Exec, householdId: string) => db.selectFrom('member').select(['userId', 'role']).where('organizationId', '=', householdId).execute();
