@@ -7,14 +7,14 @@ import { type Load, projectionInputSchema, type RigPower, rigPowerSchema } from 
 import { loadFromRow, loadToRow, modelInput, type SavedLoad, stripLoad } from './rigs-model';
 import { type Actor, daysParkedOf, describeLoad, describeLoadEdit, describePowerChange } from './history';
 import { insertHistory } from '../repositories/history';
-import type { RigCreateInput, RigUpdateInput } from '@/shared/schemas/rig';
+import type { RigCreateInput, RigHeader, RigPermissions, RigUpdateInput } from '@/shared/schemas/rig';
 import type { Auth } from '../auth';
 import { viaAuth } from '../auth-errors';
 import { HttpError } from '../errors';
 import { deleteLoad, deleteRig, householdRole, insertLoad, insertRig, listRigsForUser, loadsOfRigs, updateLoad, updateRigIfVersion } from '../repositories/rigs';
 
 /** What the role may do, for the client to hide controls (the server checks every request anyway). */
-export function permissionsOf(role: string) {
+export function permissionsOf(role: string): RigPermissions {
   return {
     edit: can(role, { rig: ['update'] }),
     delete: can(role, { rig: ['delete'] }),
@@ -26,7 +26,7 @@ export function permissionsOf(role: string) {
 
 type RigRowWithRole = Awaited<ReturnType<typeof listRigsForUser>>[number];
 
-export function rigDto(row: RigRowWithRole, loads: SavedLoad[]) {
+export function rigDto(row: RigRowWithRole, loads: SavedLoad[]): RigHeader & { power: RigPower; loads: SavedLoad[] } {
   const power = rigPowerSchema.parse(row.power);
   return {
     id: row.id,

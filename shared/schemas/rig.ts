@@ -1,6 +1,24 @@
 import { z } from 'zod';
 
+import type { HouseholdRole } from '../permissions';
 import { loadSchema, rigPowerSchema } from './projection';
+
+/** What the caller may do with a rig, worked out on the server from their household role. */
+export type RigPermissions = { edit: boolean; delete: boolean; manageLoads: boolean; managePeople: boolean; comment: boolean };
+
+/** What every answer about a rig carries (the rig, the Rigs list): which rig, whose, and what the caller may do. */
+export type RigHeader = {
+  id: string;
+  name: string;
+  vehicle: string;
+  householdId: string;
+  householdName: string;
+  role: HouseholdRole;
+  permissions: RigPermissions;
+  version: number;
+  /** ISO 8601. */
+  updatedAt: string;
+};
 
 export const rigIdParamsSchema = z.object({ rigId: z.uuid() });
 

@@ -2,18 +2,11 @@ import { queryOptions, useQuery } from '@tanstack/react-query';
 
 import { apiFetch } from '@/lib/api-client';
 import type { MarginState } from '@/shared/energy/project';
+import type { RigHeader } from '@/shared/schemas/rig';
 import { rigKeys } from './rig-keys';
 
-export type RigSummary = {
-  id: string;
-  name: string;
-  vehicle: string;
-  householdId: string;
-  householdName: string;
-  role: 'owner' | 'member' | 'advisor';
-  permissions: { edit: boolean; delete: boolean; manageLoads: boolean; managePeople: boolean; comment: boolean };
-  version: number;
-  updatedAt: string;
+/** A rig in the Rigs list: its header and the figures of its card. */
+export type RigSummary = RigHeader & {
   loadCount: number;
   daysParked: number | null;
   daysOnRoutine: number | null;

@@ -3,23 +3,11 @@ import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/r
 import { apiFetch } from '@/lib/api-client';
 import type { Comparison, Projection } from '@/shared/energy/project';
 import type { Load, LoadInput, RigPower } from '@/shared/schemas/projection';
-import type { RigUpdateForm } from '@/shared/schemas/rig';
+import type { RigHeader, RigUpdateForm } from '@/shared/schemas/rig';
 import { rigKeys } from './rig-keys';
 
 export type SavedLoad = Load & { id: string; addedBy: { id: string; name: string } | null };
-export type Rig = {
-  id: string;
-  name: string;
-  vehicle: string;
-  householdId: string;
-  householdName: string;
-  role: 'owner' | 'member' | 'advisor';
-  permissions: { edit: boolean; delete: boolean; manageLoads: boolean; managePeople: boolean; comment: boolean };
-  version: number;
-  updatedAt: string;
-  power: RigPower;
-  loads: SavedLoad[];
-};
+export type Rig = RigHeader & { power: RigPower; loads: SavedLoad[] };
 export type Outlook = Projection & { rigId: string; version: number };
 
 export const rigQueryOptions = (rigId: string) => queryOptions({ queryKey: rigKeys.detail(rigId), queryFn: () => apiFetch<Rig>(`/api/rigs/${rigId}`) });
