@@ -9,8 +9,8 @@ export type SessionData = NonNullable<Awaited<ReturnType<Auth['api']['getSession
 /**
  * Reads within a few seconds with the same cookies share one session lookup: a read then costs a map
  * look-up instead of better-auth's signed-cookie check. Only found sessions are kept, never past their
- * expiry, and any write to /api/auth (sign-in, sign-out, password change or reset, role change) empties
- * the map, so in this process such a change shows on the next read.
+ * expiry, and any write to /api/auth (sign-in, sign-out, password change or reset) or an admin's change of
+ * an account role empties the map, so in this process such a change shows on the next read.
  */
 const READ_CACHE_MS = 5_000;
 const READ_CACHE_SIZE = 10_000;

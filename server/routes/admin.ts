@@ -4,7 +4,7 @@ import { fromNodeHeaders } from 'better-auth/node';
 import { accountRoleBodySchema, userParamsSchema } from '@/shared/schemas/people';
 import { viaAuth } from '../auth-errors';
 import type { AppContext } from '../context';
-import { requireAdmin } from '../middleware/session';
+import { forgetCachedSessions, requireAdmin } from '../middleware/session';
 import { parsed, validate } from '../middleware/validate';
 import { failedEmails } from '../services/reports';
 
@@ -19,6 +19,8 @@ export function adminRouter({ auth, db }: AppContext) {
   router.put('/users/:userId/role', validate(userParamsSchema, 'params'), validate(accountRoleBodySchema), async (req, res) => {
     const { userId } = parsed(res, userParamsSchema, 'params');
     await viaAuth(() => auth.api.setRole({ headers: fromNodeHeaders(req.headers), body: { userId, role: parsed(res, accountRoleBodySchema).role } }), 'role');
+    // The account's sessions carry its role: the next read looks them up again.
+    forgetCachedSessions();
     res.status(204).end();
   });
   // E-mails that failed to render or send (pg-boss retries them; the last error stays here until one works).
