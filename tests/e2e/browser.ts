@@ -1,7 +1,7 @@
 import path from 'node:path';
 import { type Browser, chromium } from 'playwright-core';
 
-export const BASE = process.env.E2E_BASE ?? 'http://127.0.0.1:8091';
+export const BASE = process.env.E2E_BASE ?? `http://127.0.0.1:${process.env.E2E_PORT ?? 8091}`;
 export const SHOTS = path.resolve('test-results/screenshots');
 
 /** Debian's chromium, headless, with none of its background traffic; playwright gives each launch a fresh profile. */

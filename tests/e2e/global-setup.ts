@@ -1,7 +1,8 @@
 import { type ChildProcess, spawn } from 'node:child_process';
 
 // Starts the production server (API plus the exported web build) on its own port for the browser tests.
-export const E2E_PORT = 8091;
+// E2E_PORT lets two checkouts run their browser tests side by side.
+export const E2E_PORT = Number(process.env.E2E_PORT ?? 8091);
 let server: ChildProcess | undefined;
 
 export async function setup() {
