@@ -62,7 +62,7 @@ export async function chartBuckets(db: Exec, rigId: string, w: Window & { points
     select avg(extract(epoch from at)) * 1000 as t, count(*)::int as n, avg(voltage_v) as v, avg(current_a) as c, avg(soc_percent) as s,
       avg(voltage_v) filter (where rested and (current_a is null or abs(current_a) <= ${w.trickleA})) as vr
     from readings where rig_id = ${rigId} and at >= ${w.from} and at <= ${w.to}
-    group by floor(extract(epoch from at - ${w.from}::timestamptz) / ${width}) order by 1`.execute(db);
+    group by least(floor(extract(epoch from at - ${w.from}::timestamptz) / ${width}), ${w.points - 1}) order by 1`.execute(db);
   return rows.map((r) => ({ ...r, t: Number(r.t) }));
 }
 

@@ -89,8 +89,8 @@ async function eachRow(text: string, onRows: (rows: Row[], delimiter: string) =>
         try {
           onRows(results.data.map((cells: string[]) => ({ line: ++line, cells })), results.meta.delimiter);
         } catch (err) {
+          reject(err); // before abort(), which calls complete
           parser.abort();
-          reject(err);
           return;
         }
         parser.pause();
