@@ -3,7 +3,8 @@
 // hours, aligned to the local hours its schedule describes.
 import type { Db } from '@/db/client';
 import { project } from '@/shared/energy/project';
-import { analyzeSummary, compareWithModel, READING_RULES, socFromRestingVoltage, trickleA, usableCapacityAh } from '@/shared/energy/readings';
+import { analyzeSummary, READING_RULES, socFromRestingVoltage, trickleA, usableCapacityAh } from '@/shared/energy/readings';
+import { compareWithModel } from '@/shared/energy/readings-compare';
 import { rigPowerSchema } from '@/shared/schemas/projection';
 import { CHART_POINTS } from '@/shared/schemas/reading';
 import { localParts } from '../jobs/schedule';
@@ -68,7 +69,7 @@ export async function readingsOf(db: Db, storage: Storage, rig: RigAccess, viewe
   return {
     timeZone,
     total: stats.total,
-    window: view ? { from: view.from.toISOString(), to: view.to.toISOString(), days: VIEW_DAYS } : null,
+    window: view ? { from: view.from.toISOString(), to: view.to.toISOString(), days: VIEW_DAYS, clipped: view.from.getTime() > stats.first!.getTime() } : null,
     chart: { points: view?.points ?? [], model },
     spot: spot.map((r) => ({ id: r.id, at: iso(r.at), voltageV: r.voltage_v, currentA: r.current_a, socPercent: r.soc_percent ?? (r.rested && (r.current_a === null || Math.abs(r.current_a) <= trickle) ? socFromRestingVoltage(battery.chemistry, r.voltage_v, power.systemVoltage).socPercent : null), rested: r.rested, place: r.place, note: r.note, by: r.by, canDelete: mayDelete(r.created_by) })),
     uploads: uploads.filter((u) => u.kind === 'log').map((u) => ({ id: u.id, fileName: u.file_name, rowCount: u.row_count, errorCount: u.error_count, errors: (u.errors as RowError[] | null)?.slice(0, 20) ?? [], by: u.by, createdAt: iso(u.created_at), canDelete: mayDelete(u.created_by) })),

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 
-import { analyzeReadings, compareWithModel, socFromRestingVoltage, summarizeReadings, twoFigures, voltageDropTest } from '@/shared/energy/readings';
+import { analyzeReadings, socFromRestingVoltage, summarizeReadings, twoFigures, voltageDropTest } from '@/shared/energy/readings';
+import { compareWithModel } from '@/shared/energy/readings-compare';
 import { restingLog } from './fixtures';
 
 describe('state of charge from a resting voltage (BCI table, REFERENCES.md)', () => {
