@@ -7,7 +7,7 @@ import { CartesianChart, Line, Scatter } from 'victory-native';
 
 import { colors } from '@/shared/theme';
 import type { ReadingsChartProps, SocChartProps } from './chart-types';
-import { dateLabel } from './date-axis';
+import { dateLabel, midnightTicks } from './date-axis';
 
 const font = require('@expo-google-fonts/nunito/400Regular/Nunito_400Regular.ttf');
 
@@ -47,7 +47,8 @@ function SocChartImpl({ series, cutoffSocPercent }: SocChartProps) {
 function ReadingsChartImpl({ points, showSoc, showVoltage }: ReadingsChartProps) {
   const axisFont = useFont(font, 12);
   const span = points.length ? points[points.length - 1].t - points[0].t : 0;
-  const xAxis = { font: axisFont, tickCount: 4, formatXLabel: dateLabel(span), labelColor: colors.inkSoft, lineColor: colors.line };
+  const tickValues = points.length ? midnightTicks(points[0].t, points[points.length - 1].t) : undefined;
+  const xAxis = { font: axisFont, tickCount: 4, ...(tickValues ? { tickValues } : {}), formatXLabel: dateLabel(span), labelColor: colors.inkSoft, lineColor: colors.line };
   const volts = points.flatMap((p) => (p.voltage === null ? [] : [p.voltage]));
   const vDomain: [number, number] = volts.length ? [Math.floor(Math.min(...volts) * 10) / 10 - 0.1, Math.ceil(Math.max(...volts) * 10) / 10 + 0.1] : [11, 14];
   const data = points.map((p) => ({ t: p.t, soc: p.soc ?? undefined, model: p.model ?? undefined, voltage: p.voltage ?? undefined }));

@@ -9,3 +9,13 @@ export function dateLabel(spanMs: number) {
 
 /** A moment in full, for the words under a chart: "20 Nov 2026, 18:00". */
 export const dateTimeLabel = (t: number | string) => new Intl.DateTimeFormat(undefined, { day: 'numeric', month: 'short', year: 'numeric', hour: '2-digit', minute: '2-digit' }).format(new Date(t));
+
+/** Ticks at local midnights for a view longer than two days (at most six, evenly thinned); none for a shorter one (the chart spaces them). */
+export function midnightTicks(fromMs: number, toMs: number): number[] | undefined {
+  if (toMs - fromMs <= 2 * 86_400_000) return undefined;
+  const d = new Date(fromMs);
+  const ticks: number[] = [];
+  for (let t = new Date(d.getFullYear(), d.getMonth(), d.getDate() + 1).getTime(), i = 1; t <= toMs; t = new Date(d.getFullYear(), d.getMonth(), d.getDate() + ++i).getTime()) ticks.push(t);
+  const step = Math.ceil(ticks.length / 6);
+  return ticks.filter((_, i) => i % step === 0);
+}

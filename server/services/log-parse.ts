@@ -7,15 +7,26 @@ import Papa from 'papaparse';
 import { type ColumnMapping, LOG_LIMITS } from '@/shared/schemas/reading';
 import { HttpError } from '../errors';
 
-/** The bytes must be text: no other file type detected, no NUL bytes, valid UTF-8. */
+const yieldToLoop = () => new Promise<void>((r) => setImmediate(r));
+
+/** The bytes must be text: no other file type detected, no NUL bytes, valid UTF-8 (decoded in 256 KB slices, giving the event loop back between them). */
 export async function requireText(buf: Buffer) {
   const detected = await fileTypeFromBuffer(buf);
   if (detected) throw new HttpError(415, 'unsupported_media_type', `This file is a ${detected.ext.toUpperCase()} (${detected.mime}), not a CSV log. Export the log as CSV text.`, [{ path: 'file', message: 'Not a CSV file.' }]);
   if (buf.includes(0)) throw new HttpError(415, 'unsupported_media_type', 'This file is not text; a CSV log is plain text with one reading a line.', [{ path: 'file', message: 'Not a CSV file.' }]);
-  const text = new TextDecoder('utf-8', { fatal: false }).decode(buf);
-  if (text.includes('\uFFFD')) throw new HttpError(415, 'unsupported_media_type', 'This file is not UTF-8 text; save the log as CSV (UTF-8).', [{ path: 'file', message: 'Not UTF-8 text.' }]);
-  if (!text.trim()) throw new HttpError(400, 'validation_failed', 'The file is empty.', [{ path: 'file', message: 'The file is empty.' }]);
-  return text.replace(/^\uFEFF/, '');
+  const decoder = new TextDecoder('utf-8', { fatal: false });
+  let text = '';
+  let blank = true;
+  for (let i = 0; i < buf.length; i += 256 * 1024) {
+    let piece = decoder.decode(buf.subarray(i, i + 256 * 1024), { stream: i + 256 * 1024 < buf.length });
+    if (piece.includes('\uFFFD')) throw new HttpError(415, 'unsupported_media_type', 'This file is not UTF-8 text; save the log as CSV (UTF-8).', [{ path: 'file', message: 'Not UTF-8 text.' }]);
+    if (i === 0) piece = piece.replace(/^\uFEFF/, '');
+    blank &&= !/\S/.test(piece);
+    text += piece;
+    if (i + 256 * 1024 < buf.length) await yieldToLoop();
+  }
+  if (blank) throw new HttpError(400, 'validation_failed', 'The file is empty.', [{ path: 'file', message: 'The file is empty.' }]);
+  return text;
 }
 
 const H = 3_600_000;
@@ -76,7 +87,7 @@ export type RowError = { line: number; reason: string };
 
 type Row = { line: number; cells: string[] };
 
-/** Every row of the text, in slices of about 128 KB with the event loop given back after each. */
+/** Every row of the text, in slices of about 64 KB with the event loop given back after each. */
 async function eachRow(text: string, onRows: (rows: Row[], delimiter: string) => void) {
   let line = 0;
   await new Promise<void>((resolve, reject) => {
@@ -84,7 +95,7 @@ async function eachRow(text: string, onRows: (rows: Row[], delimiter: string) =>
       header: false,
       delimiter: '',
       skipEmptyLines: false,
-      chunkSize: 128 * 1024,
+      chunkSize: 64 * 1024,
       chunk(results: Papa.ParseResult<string[]>, parser: Papa.Parser) {
         try {
           onRows(results.data.map((cells: string[]) => ({ line: ++line, cells })), results.meta.delimiter);
@@ -94,7 +105,7 @@ async function eachRow(text: string, onRows: (rows: Row[], delimiter: string) =>
           return;
         }
         parser.pause();
-        setImmediate(() => parser.resume());
+        void yieldToLoop().then(() => parser.resume());
       },
       complete: () => resolve(),
       error: (err: Error) => reject(err),
