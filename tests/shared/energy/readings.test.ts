@@ -61,6 +61,12 @@ describe('the drain, measured current first', () => {
     expect(s.hourly.map((b) => b.currentAh)).toEqual([0.45, 0.45]);
   });
 
+  it("takes a monitor's falling state of charge where no current was logged: 90 % to 85 % of 100 Ah in 10 h is 0.5 A", () => {
+    // 5 points × 100 Ah usable / 10 h = 0.5 A; the rise while charging (hour 10 to 11) is left out.
+    const readings = [...Array.from({ length: 11 }, (_, h) => ({ at: at(h), voltageV: 12.6, socPercent: 90 - h / 2, rested: false })), { at: at(11), voltageV: 13.9, socPercent: 95, rested: false }];
+    expect(analyzeReadings({ chemistry: 'lifepo4', capacityAh: 100, readings })).toMatchObject({ method: 'monitor', drainA: 0.5, hours: 10 });
+  });
+
   it('flags a reading marked rested with more than a trickle flowing (C/1000: 0.1 A on 100 Ah) and counts it as not rested', () => {
     const readings = [
       { at: at(0), voltageV: 12.65, rested: true },
