@@ -47,7 +47,9 @@ function SocChartImpl({ series, cutoffSocPercent }: SocChartProps) {
 function ReadingsChartImpl({ points, showSoc, showVoltage }: ReadingsChartProps) {
   const axisFont = useFont(font, 12);
   const span = points.length ? points[points.length - 1].t - points[0].t : 0;
-  const tickValues = points.length ? midnightTicks(points[0].t, points[points.length - 1].t) : undefined;
+  const x: [number, number] = points.length ? [points[0].t, points[points.length - 1].t] : [0, 1];
+  // With tick values victory-native would take the x domain from them: the record's own span is given.
+  const tickValues = points.length ? midnightTicks(x[0], x[1]) : undefined;
   const xAxis = { font: axisFont, tickCount: 4, ...(tickValues ? { tickValues } : {}), formatXLabel: dateLabel(span), labelColor: colors.inkSoft, lineColor: colors.line };
   const volts = points.flatMap((p) => (p.voltage === null ? [] : [p.voltage]));
   const vDomain: [number, number] = volts.length ? [Math.floor(Math.min(...volts) * 10) / 10 - 0.1, Math.ceil(Math.max(...volts) * 10) / 10 + 0.1] : [11, 14];
@@ -57,7 +59,7 @@ function ReadingsChartImpl({ points, showSoc, showVoltage }: ReadingsChartProps)
     <View style={{ flex: 1, gap: 8 }}>
       {showSoc ? (
         <View style={{ flex: 1 }} testID="readings-chart-soc">
-          <CartesianChart data={data} xKey="t" yKeys={['soc', 'model']} domain={{ y: [0, 100] }} padding={{ left: 4, right: 8, top: 8, bottom: 4 }} xAxis={xAxis} yAxis={[{ font: axisFont, tickValues: [0, 25, 50, 75, 100], formatYLabel: (v) => `${Math.round(Number(v))} %`, labelColor: colors.inkSoft, lineColor: colors.line }]}>
+          <CartesianChart data={data} xKey="t" yKeys={['soc', 'model']} domain={{ x, y: [0, 100] }} padding={{ left: 4, right: 8, top: 8, bottom: 4 }} xAxis={xAxis} yAxis={[{ font: axisFont, tickValues: [0, 25, 50, 75, 100], formatYLabel: (v) => `${Math.round(Number(v))} %`, labelColor: colors.inkSoft, lineColor: colors.line }]}>
             {({ points: p }) => (
               <>
                 <Line points={p.model} color={colors.inkSoft} strokeWidth={1.5} connectMissingData />
@@ -70,7 +72,7 @@ function ReadingsChartImpl({ points, showSoc, showVoltage }: ReadingsChartProps)
       ) : null}
       {showVoltage ? (
         <View style={{ flex: 1 }} testID="readings-chart-voltage">
-          <CartesianChart data={data} xKey="t" yKeys={['voltage']} domain={{ y: vDomain }} padding={{ left: 4, right: 8, top: 8, bottom: 4 }} xAxis={xAxis} yAxis={[{ font: axisFont, tickCount: 4, formatYLabel: (v) => `${Number(v).toFixed(2)} V`, labelColor: colors.inkSoft, lineColor: colors.line }]}>
+          <CartesianChart data={data} xKey="t" yKeys={['voltage']} domain={{ x, y: vDomain }} padding={{ left: 4, right: 8, top: 8, bottom: 4 }} xAxis={xAxis} yAxis={[{ font: axisFont, tickCount: 4, formatYLabel: (v) => `${Number(v).toFixed(2)} V`, labelColor: colors.inkSoft, lineColor: colors.line }]}>
             {({ points: p }) => (
               <>
                 <Line points={p.voltage} color={colors.focus} strokeWidth={1.5} connectMissingData />

@@ -173,6 +173,7 @@ export async function parseLog(text: string, mapping: ColumnMapping, timeZone: s
       const s = idx.s >= 0 ? numberCell(cells[idx.s], dc) : undefined;
       if (s !== undefined && (Number.isNaN(s) || s < 0 || s > 100)) reasons.push(`state of charge "${(cells[idx.s] ?? '').slice(0, 20)}" is not a number from 0 to 100`);
       if (reasons.length) {
+        if (!dc && [idx.v, idx.c, idx.s].some((i) => i >= 0 && /^[-+]?\d+,\d+$/.test((cells[i] ?? '').trim()))) reasons.push('numbers with a decimal comma? say so at mapping');
         errors.push({ line, reason: reasons.join('; ') });
         continue;
       }

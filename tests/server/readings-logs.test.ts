@@ -59,6 +59,8 @@ describe('CSV logs as people have them', () => {
     const preview = (await fx.agents.owner.post(`/api/rigs/${rigId}/uploads/preview`).set('Origin', TEST_ORIGIN).attach('file', Buffer.from(text), 'log.csv').expect(200)).body;
     expect(preview).toMatchObject({ delimiter: ';', decimalComma: true, rows: 3, columns: ['Zeit', 'Spannung (V)', 'Strom (A)'] });
     expect(preview.mapping).toMatchObject({ time: 'Zeit', voltage: 'Spannung (V)', current: 'Strom (A)', decimalComma: true });
+    const wrong = await upload(fx.agents.owner, rigId, text, { ...preview.mapping, decimalComma: false }).expect(422);
+    expect(wrong.body.fields[0]).toEqual({ path: 'line 2', message: 'voltage "12,65" is not a number from 0 to 80; current "0,45" is not a number from -1000 to 1000; numbers with a decimal comma? say so at mapping' });
     await upload(fx.agents.owner, rigId, text, preview.mapping, { timeZone: 'Europe/Berlin' }).expect(201);
     const rows = await rowsOf(rigId);
     // 19:00 in Berlin in November (CET, UTC+1) is 18:00 UTC.
