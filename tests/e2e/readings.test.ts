@@ -18,7 +18,7 @@ afterAll(async () => {
 const CSV = ['time,battery volts,temp', ...restingLog(50).map((r) => `${r.at.replace('T', ' ').replace(':00.000Z', '')},${r.voltageV},8`), 'broken row,,8'].join('\n');
 
 describe('the Readings screen', () => {
-  it('Tobi uploads a CSV log through the page, maps its columns, sees it plotted with its dates and the rough drain, and deletes it', async () => {
+  it('Tobi uploads a CSV log through the page, maps its columns, sees it plotted with its dates and the rough drain, deletes it, then types a reading with current flowing', async () => {
     // Tobi's browser is in Berlin: the log's times (no zone) are read there, and the chart's dates shown there.
     const page = await browser.newPage({ viewport: WIDE, locale: 'en-GB', timezoneId: 'Europe/Berlin' });
     await signInAs(page, 'tobi@example.org');
@@ -65,5 +65,24 @@ describe('the Readings screen', () => {
     await page.getByTestId('delete-log-wren-resting.csv').click();
     await page.getByTestId('upload-wren-resting.csv').waitFor({ state: 'detached' });
     await page.getByText('Add two readings or upload a log').waitFor();
+
+    // The traveller's case: 12.71 V rested, then 12.55 V two hours later with 0.8 A flowing. Rested starts off
+    // again after the first save, and the drain is the measured 0.8 A, not 6.2 A from the fall in voltage.
+    const form = page.getByTestId('spot-form');
+    const rested = form.getByTestId('field-rested').locator('input');
+    await form.getByTestId('field-at').fill('2026-11-21T08:00');
+    await form.getByTestId('field-voltageV').fill('12.71');
+    await rested.check();
+    await page.getByTestId('save-reading').click();
+    await page.getByText('12.71 V · 100 % · rested').waitFor();
+    expect(await rested.isChecked()).toBe(false);
+    await form.getByTestId('field-at').fill('2026-11-21T10:00');
+    await form.getByTestId('field-voltageV').fill('12.55');
+    await form.getByTestId('field-currentA').fill('0.8');
+    await page.getByTestId('save-reading').click();
+    await page.getByText('12.55 V · 0.8 A').waitFor();
+    expect(await page.getByTestId('measured-drain').innerText()).toBe('0.8 A');
+    expect(await page.getByTestId('drain-method').innerText()).toMatch(/over 2 quiet hours, counted from the measured current/);
+    expect(await page.getByTestId('model-message').innerText()).toMatch(/22 more needed/);
   }, 90_000);
 });
