@@ -70,19 +70,19 @@ export async function chartBuckets(db: Exec, rigId: string, w: Window & { points
 }
 
 /**
- * The record summed by the hour (in the viewer's zone) by the rules of `summarizeReadings` (shared/energy/readings.ts):
+ * The record summed by the hour (UTC, as `summarizeReadings` does) by the rules of `summarizeReadings` (shared/energy/readings.ts):
  * within a series (one log, or the typed readings) each pair of consecutive readings up to `maxGapHours`
  * apart is a segment, counted in the hour it starts; its current is the mean of the currents measured at its
  * ends, and it is quiet unless an end is charging; a monitor's state of charge counts where it falls.
  */
-export async function hourlySummary(db: Exec, rigId: string, w: Window & { timeZone: string; maxGapHours: number }) {
+export async function hourlySummary(db: Exec, rigId: string, w: Window & { maxGapHours: number }) {
   const { rows } = await sql<{ hour: Date; current_hours: number; current_ah: number; soc_hours: number; soc_fall: number }>`
     with seg as (
       select at, current_a as c, soc_percent as s, lead(at) over w as at1, lead(current_a) over w as c1, lead(soc_percent) over w as s1
       from readings where rig_id = ${rigId} and at >= ${w.from} and at <= ${w.to}
       window w as (partition by upload_id order by at)
     ), q as (
-      select date_trunc('hour', at, ${w.timeZone}) as hour, extract(epoch from at1 - at) / 3600 as dt,
+      select date_trunc('hour', at) as hour, extract(epoch from at1 - at) / 3600 as dt,
         case when (c is not null or c1 is not null) and coalesce(c, 0) >= -${w.trickleA}::float8 and coalesce(c1, 0) >= -${w.trickleA}::float8 then coalesce((c + c1) / 2, c, c1) end as amps,
         case when s1 <= s then s - s1 end as fall
       from seg where at1 is not null
