@@ -12,6 +12,7 @@ build_web
 ensure_chromium
 npx tsx scripts/bench-model.ts
 DATABASE_URL=postgres://keyoff@127.0.0.1:54329/keyoff_test npx tsx scripts/bench-api.ts
+DATABASE_URL=postgres://keyoff@127.0.0.1:54329/keyoff_test npx tsx scripts/bench-upload.ts
 start_maildev
 "$(ls -d /usr/lib/postgresql/*/bin | sort -V | tail -1)/psql" -qX -h 127.0.0.1 -p 54329 -U keyoff -d keyoff_bench \
   -c "drop schema if exists public cascade; create schema public;" \
@@ -26,5 +27,6 @@ node -e '
   console.log(`API: health ${r.api.health.requestsPerSecond} req/s; outlook ${r.api.outlook.requestsPerSecond} req/s (${r.api.outlookToBarePercent} %), p99 ${r.api.outlook.p99Ms} ms`);
   console.log(`API floor here (p99 at 50 connections): the middleware alone ${r.api.middlewareOnly.p99Ms} ms, Express alone ${r.api.expressFloor.p99Ms} ms, Node http alone ${r.api.nodeHttpFloor.p99Ms} ms`);
   if (r.web) console.log(`web: first screen ${r.web.firstScreenGzipKb} KB gz, Outlook ${r.web.outlookGzipKb} KB gz; chromium: first screen ${r.api.browser?.firstScreenMs} ms, chart ${r.api.browser?.outlookChartMs} ms`);
+  if (r.upload) console.log(`upload of 200,000 rows: ${r.upload.uploadMs} ms; health meanwhile p99 ${r.upload.healthDuringUpload.p99Ms} ms, max ${r.upload.healthDuringUpload.maxMs} ms; four Readings reads ${r.upload.fourReadingsReadsMs} ms`);
   console.log(`reports: ${r.reports.queued} rigs in ${r.reports.batchSeconds} s; ${r.reports.emailsPerSecond} e-mails a second to maildev`);
 '

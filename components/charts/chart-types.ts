@@ -1,6 +1,7 @@
 import type { Projection } from '@/shared/energy/project';
 
 export type SocChartProps = { series: Projection['series']; cutoffSocPercent: number };
-/** Hours since the first reading; `measured` from the readings, `model` the projection over the same hours. */
-export type ReadingsChartPoint = { h: number; measured: number; model: number | null };
-export type ReadingsChartProps = { points: ReadingsChartPoint[]; unit: '%' | 'V' };
+/** A moment of the record (ms since 1970): the readings' state of charge where known, the model's, and the voltage. */
+export type ReadingsChartPoint = { t: number; soc: number | null; model: number | null; voltage: number | null };
+/** Two charts over the same dates: state of charge (measured and modelled) above, voltage below. */
+export type ReadingsChartProps = { points: ReadingsChartPoint[]; showSoc: boolean; showVoltage: boolean };

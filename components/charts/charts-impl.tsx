@@ -2,10 +2,12 @@
 // imported before Skia is ready. One module, so the web build has one lazy chunk with Skia's code and the
 // first screen carries none of it.
 import { Line as SkiaLine, Rect, useFont, vec } from '@shopify/react-native-skia';
+import { View } from 'react-native';
 import { CartesianChart, Line, Scatter } from 'victory-native';
 
 import { colors } from '@/shared/theme';
 import type { ReadingsChartProps, SocChartProps } from './chart-types';
+import { dateLabel, midnightTicks } from './date-axis';
 
 const font = require('@expo-google-fonts/nunito/400Regular/Nunito_400Regular.ttf');
 
@@ -42,30 +44,45 @@ function SocChartImpl({ series, cutoffSocPercent }: SocChartProps) {
   );
 }
 
-function ReadingsChartImpl({ points, unit }: ReadingsChartProps) {
+function ReadingsChartImpl({ points, showSoc, showVoltage }: ReadingsChartProps) {
   const axisFont = useFont(font, 12);
-  const data = points.map((p) => ({ h: p.h, measured: p.measured, model: p.model ?? undefined }));
-  const values = points.map((p) => p.measured);
-  const domain = unit === '%' ? ([0, 100] as [number, number]) : ([Math.floor(Math.min(...values) * 10) / 10 - 0.1, Math.ceil(Math.max(...values) * 10) / 10 + 0.1] as [number, number]);
-  const span = points.length ? points[points.length - 1].h : 0;
+  const span = points.length ? points[points.length - 1].t - points[0].t : 0;
+  const x: [number, number] = points.length ? [points[0].t, points[points.length - 1].t] : [0, 1];
+  // With tick values victory-native would take the x domain from them: the record's own span is given.
+  const tickValues = points.length ? midnightTicks(x[0], x[1]) : undefined;
+  const xAxis = { font: axisFont, tickCount: 4, ...(tickValues ? { tickValues } : {}), formatXLabel: dateLabel(span), labelColor: colors.inkSoft, lineColor: colors.line };
+  const volts = points.flatMap((p) => (p.voltage === null ? [] : [p.voltage]));
+  const vDomain: [number, number] = volts.length ? [Math.floor(Math.min(...volts) * 10) / 10 - 0.1, Math.ceil(Math.max(...volts) * 10) / 10 + 0.1] : [11, 14];
+  const data = points.map((p) => ({ t: p.t, soc: p.soc ?? undefined, model: p.model ?? undefined, voltage: p.voltage ?? undefined }));
+  const few = points.length <= 60;
   return (
-    <CartesianChart
-      data={data}
-      xKey="h"
-      yKeys={['measured', 'model']}
-      domain={{ y: domain }}
-      padding={{ left: 4, right: 8, top: 8, bottom: 4 }}
-      xAxis={{ font: axisFont, tickCount: 6, formatXLabel: (h) => (span > 72 ? `${Math.round(Number(h) / 24)} d` : `${Math.round(Number(h))} h`), labelColor: colors.inkSoft, lineColor: colors.line }}
-      yAxis={[{ font: axisFont, tickCount: 5, formatYLabel: (v) => (unit === '%' ? `${Math.round(Number(v))} %` : `${Number(v).toFixed(2)} V`), labelColor: colors.inkSoft, lineColor: colors.line }]}
-    >
-      {({ points: p }) => (
-        <>
-          {unit === '%' ? <Line points={p.model} color={colors.inkSoft} strokeWidth={1.5} connectMissingData /> : null}
-          <Line points={p.measured} color={colors.night} strokeWidth={2} />
-          {points.length <= 60 ? <Scatter points={p.measured} radius={3} color={colors.lampDeep} /> : null}
-        </>
-      )}
-    </CartesianChart>
+    <View style={{ flex: 1, gap: 8 }}>
+      {showSoc ? (
+        <View style={{ flex: 1 }} testID="readings-chart-soc">
+          <CartesianChart data={data} xKey="t" yKeys={['soc', 'model']} domain={{ x, y: [0, 100] }} padding={{ left: 4, right: 8, top: 8, bottom: 4 }} xAxis={xAxis} yAxis={[{ font: axisFont, tickValues: [0, 25, 50, 75, 100], formatYLabel: (v) => `${Math.round(Number(v))} %`, labelColor: colors.inkSoft, lineColor: colors.line }]}>
+            {({ points: p }) => (
+              <>
+                <Line points={p.model} color={colors.inkSoft} strokeWidth={1.5} connectMissingData />
+                <Line points={p.soc} color={colors.night} strokeWidth={2} connectMissingData />
+                {few ? <Scatter points={p.soc} radius={3} color={colors.lampDeep} /> : null}
+              </>
+            )}
+          </CartesianChart>
+        </View>
+      ) : null}
+      {showVoltage ? (
+        <View style={{ flex: 1 }} testID="readings-chart-voltage">
+          <CartesianChart data={data} xKey="t" yKeys={['voltage']} domain={{ x, y: vDomain }} padding={{ left: 4, right: 8, top: 8, bottom: 4 }} xAxis={xAxis} yAxis={[{ font: axisFont, tickCount: 4, formatYLabel: (v) => `${Number(v).toFixed(2)} V`, labelColor: colors.inkSoft, lineColor: colors.line }]}>
+            {({ points: p }) => (
+              <>
+                <Line points={p.voltage} color={colors.focus} strokeWidth={1.5} connectMissingData />
+                {few ? <Scatter points={p.voltage} radius={3} color={colors.focus} /> : null}
+              </>
+            )}
+          </CartesianChart>
+        </View>
+      ) : null}
+    </View>
   );
 }
 

@@ -1,7 +1,7 @@
 import { z } from 'zod';
 
 /** A time zone name the runtime knows (IANA, e.g. Europe/Lisbon). */
-const timeZoneSchema = z
+export const timeZoneSchema = z
   .string()
   .trim()
   .min(1, 'Choose a time zone.')

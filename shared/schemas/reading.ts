@@ -1,5 +1,6 @@
 import { z } from 'zod';
 
+import { timeZoneSchema } from './email-prefs';
 import { chemistrySchema } from './projection';
 
 const num = (min: number, max: number) => z.number({ error: 'Enter a number.' }).finite('Enter a number.').min(min, `At least ${min}.`).max(max, `At most ${max}.`);
@@ -24,6 +25,9 @@ export type ReadingInputParsed = z.infer<typeof readingSchema>;
 export const analyzeSchema = z.strictObject({
   chemistry: chemistrySchema,
   capacityAh: num(1, 20_000),
+  /** The battery you have: health and temperature make the usable capacity a fall in charge is worked on. */
+  healthPercent: num(1, 100).default(100),
+  temperatureC: num(-40, 60).default(25),
   systemVoltage: num(6, 60).default(12),
   readings: z
     .array(z.strictObject({ at: isoTime, voltageV: num(0, 80), currentA: num(-1000, 1000).nullish(), socPercent: num(0, 100).nullish(), rested: z.boolean() }))
@@ -37,8 +41,13 @@ export const columnMappingSchema = z.strictObject({
   voltage: z.string().min(1, 'Choose the voltage column.'),
   current: z.string().min(1).optional(),
   soc: z.string().min(1).optional(),
+  /** Some monitors count discharge as negative: the stored current is always positive when drawn. */
+  currentSign: z.enum(['drawn-positive', 'drawn-negative']).default('drawn-positive'),
+  /** Numbers written with a decimal comma (12,65), as in semicolon- and tab-separated logs. */
+  decimalComma: z.boolean().default(false),
 });
 export type ColumnMapping = z.infer<typeof columnMappingSchema>;
+export type ColumnMappingInput = z.input<typeof columnMappingSchema>;
 
 /** The form fields beside the file in a log upload (multipart: all strings). */
 export const logUploadFieldsSchema = z.object({
@@ -57,7 +66,12 @@ export const logUploadFieldsSchema = z.object({
   allOrNothing: z.enum(['true', 'false']).default('false').transform((v) => v === 'true'),
   /** "true": every row of this log is a rested battery (a parked period with nothing on). */
   rested: z.enum(['true', 'false']).default('false').transform((v) => v === 'true'),
+  /** The uploader's time zone: times in the log without an offset are read in it (UTC when not given). */
+  timeZone: timeZoneSchema.default('UTC'),
 });
+
+/** GET /api/rigs/:rigId/readings: the viewer's time zone, the model's schedule hours are local to it. */
+export const readingsQuerySchema = z.object({ timeZone: timeZoneSchema.default('UTC') });
 
 export const photoFieldsSchema = z.object({ caption: z.string().trim().max(200, 'At most 200 characters.').default('') });
 
@@ -73,5 +87,8 @@ export const readingParamsSchema = z.object({ rigId: z.uuid(), readingId: z.uuid
 export const uploadParamsSchema = z.object({ rigId: z.uuid(), uploadId: z.uuid() });
 export const photoParamsSchema = z.object({ rigId: z.uuid(), photoId: z.uuid() });
 
-export const LOG_LIMITS = { bytes: 10 * 1024 * 1024, rows: 200_000 } as const;
+/** One upload: 10 MB and 200,000 rows; a rig keeps at most 250,000 readings in all (delete a log to make room). */
+export const LOG_LIMITS = { bytes: 10 * 1024 * 1024, rows: 200_000, rigRows: 250_000 } as const;
+/** The chart of a view: at most this many points, averaged in the database. */
+export const CHART_POINTS = 1000;
 export const PHOTO_LIMIT_BYTES = 10 * 1024 * 1024;

@@ -104,15 +104,17 @@ async function sentEmailId() {
 }
 const CSV = Buffer.from('time,volts\n2026-11-20T18:00:00Z,12.6\n2026-11-20T19:00:00Z,12.58\n');
 const PNG = await sharp({ create: { width: 8, height: 8, channels: 3, background: '#17324A' } }).png().toBuffer();
-async function throwawayReading() {
-  await fx.agents.owner.post(`/api/rigs/${fx.rigId}/readings`).set('Origin', TEST_ORIGIN).send({ at: '2026-11-20T08:00:00Z', voltageV: 12.5 });
+/** Who added a reading, log or photo (or the owner) may delete it: each editor deletes one of their own. */
+const authorOf = (agent: unknown) => (agent === fx.agents.member ? fx.agents.member : fx.agents.owner);
+async function throwawayReading(agent?: unknown) {
+  await authorOf(agent).post(`/api/rigs/${fx.rigId}/readings`).set('Origin', TEST_ORIGIN).send({ at: '2026-11-20T08:00:00Z', voltageV: 12.5 });
   return (await ctx.db.selectFrom('readings').select('id').where('rig_id', '=', fx.rigId).where('upload_id', 'is', null).orderBy('created_at', 'desc').executeTakeFirstOrThrow()).id;
 }
-async function throwawayUpload() {
-  return (await fx.agents.owner.post(`/api/rigs/${fx.rigId}/uploads`).set('Origin', TEST_ORIGIN).field('mapping', JSON.stringify({ time: 'time', voltage: 'volts' })).attach('file', CSV, 'log.csv')).body.upload.id as string;
+async function throwawayUpload(agent?: unknown) {
+  return (await authorOf(agent).post(`/api/rigs/${fx.rigId}/uploads`).set('Origin', TEST_ORIGIN).field('mapping', JSON.stringify({ time: 'time', voltage: 'volts' })).attach('file', CSV, 'log.csv')).body.upload.id as string;
 }
-async function throwawayPhoto() {
-  return (await fx.agents.owner.post(`/api/rigs/${fx.rigId}/photos`).set('Origin', TEST_ORIGIN).attach('file', PNG, 'dot.png')).body.id as string;
+async function throwawayPhoto(agent?: unknown) {
+  return (await authorOf(agent).post(`/api/rigs/${fx.rigId}/photos`).set('Origin', TEST_ORIGIN).attach('file', PNG, 'dot.png')).body.id as string;
 }
 let photo: string | null = null;
 
@@ -237,17 +239,17 @@ const MATRIX: Record<string, Entry> = {
   'POST /api/readings/analyze': { send: (a) => a.post('/api/readings/analyze').send({ chemistry: 'agm', capacityAh: 100, readings: [{ at: '2026-11-20T18:00:00Z', voltageV: 12.6, rested: true }] }), expect: all(200) },
   'GET /api/rigs/:rigId/readings': { send: (a, c) => a.get(`/api/rigs/${c.rigId}/readings`), expect: readRig },
   'POST /api/rigs/:rigId/readings': { send: (a, c) => a.post(`/api/rigs/${c.rigId}/readings`).set('Origin', TEST_ORIGIN).send({ at: '2026-11-20T08:00:00Z', voltageV: 12.5 }), expect: editRole(201) },
-  'DELETE /api/rigs/:rigId/readings/:readingId': { send: async (a, c) => a.delete(`/api/rigs/${c.rigId}/readings/${await throwawayReading()}`).set('Origin', TEST_ORIGIN), expect: editRole(204) },
+  'DELETE /api/rigs/:rigId/readings/:readingId': { send: async (a, c) => a.delete(`/api/rigs/${c.rigId}/readings/${await throwawayReading(a)}`).set('Origin', TEST_ORIGIN), expect: editRole(204) },
   'POST /api/rigs/:rigId/voltage-drop': { send: (a, c) => a.post(`/api/rigs/${c.rigId}/voltage-drop`).set('Origin', TEST_ORIGIN).send({ batteryV: 12.6, pointV: 12.4, currentA: 5 }), expect: readRig },
   'POST /api/rigs/:rigId/uploads/preview': { send: (a, c) => a.post(`/api/rigs/${c.rigId}/uploads/preview`).set('Origin', TEST_ORIGIN).attach('file', CSV, 'log.csv'), expect: editRole(200) },
   'POST /api/rigs/:rigId/uploads': {
     send: (a, c) => a.post(`/api/rigs/${c.rigId}/uploads`).set('Origin', TEST_ORIGIN).field('mapping', JSON.stringify({ time: 'time', voltage: 'volts' })).attach('file', CSV, 'log.csv'),
     expect: editRole(201),
   },
-  'DELETE /api/rigs/:rigId/uploads/:uploadId': { send: async (a, c) => a.delete(`/api/rigs/${c.rigId}/uploads/${await throwawayUpload()}`).set('Origin', TEST_ORIGIN), expect: editRole(204) },
+  'DELETE /api/rigs/:rigId/uploads/:uploadId': { send: async (a, c) => a.delete(`/api/rigs/${c.rigId}/uploads/${await throwawayUpload(a)}`).set('Origin', TEST_ORIGIN), expect: editRole(204) },
   'POST /api/rigs/:rigId/photos': { send: (a, c) => a.post(`/api/rigs/${c.rigId}/photos`).set('Origin', TEST_ORIGIN).attach('file', PNG, 'dot.png'), expect: editRole(201) },
   'GET /api/rigs/:rigId/photos/:photoId': { send: async (a, c) => a.get(`/api/rigs/${c.rigId}/photos/${(photo ??= await throwawayPhoto())}`), expect: readRig },
-  'DELETE /api/rigs/:rigId/photos/:photoId': { send: async (a, c) => a.delete(`/api/rigs/${c.rigId}/photos/${await throwawayPhoto()}`).set('Origin', TEST_ORIGIN), expect: editRole(204) },
+  'DELETE /api/rigs/:rigId/photos/:photoId': { send: async (a, c) => a.delete(`/api/rigs/${c.rigId}/photos/${await throwawayPhoto(a)}`).set('Origin', TEST_ORIGIN), expect: editRole(204) },
   'GET /api/admin/users': { send: (a) => a.get('/api/admin/users'), expect: { ...all(403), anonymous: 401, admin: 200 } },
   'PUT /api/admin/users/:userId/role': {
     send: (a) => a.put(`/api/admin/users/${fx.users.outsider.id}/role`).set('Origin', TEST_ORIGIN).send({ role: 'traveller' }),

@@ -91,15 +91,16 @@ describe('CSV log uploads', () => {
     expect(res.body.fields[0].path).toBe('file');
   });
 
-  it('estimates the standby from a generated resting log and compares it with the model', async () => {
+  it('estimates the drain roughly from a generated resting log and charts it with the model', async () => {
     await upload(fx.agents.owner, csvOf(restingLog(50)), 'resting.csv', { mapping: MAPPING, rested: 'true' }).expect(201);
-    const { analysis, series, projected } = (await fx.agents.owner.get(`/api/rigs/${fx.rigId}/readings`).expect(200)).body;
-    // 12.65 V to 12.45 V on 100 Ah (BCI): 25 Ah in 50 h = 0.5 A; within 10 %.
-    expect(analysis.method).toBe('soc');
+    const { analysis, chart } = (await fx.agents.owner.get(`/api/rigs/${fx.rigId}/readings`).expect(200)).body;
+    // 12.65 V to 12.45 V on 100 Ah (BCI): 25 Ah in 50 h = 0.5 A, a rough estimate with its range.
+    expect(analysis.method).toBe('voltage');
     expect(Math.abs(analysis.drainA - 0.5) / 0.5).toBeLessThan(0.1);
-    expect(analysis.standby.message).toMatch(/A (unexplained|measured)|Matches/);
-    expect(series.length).toBeGreaterThan(50);
-    expect(projected.length).toBeGreaterThan(10);
+    expect(analysis.rangeA[0]).toBeLessThan(0.5);
+    expect(analysis.comparison.message).toMatch(/rough estimate/);
+    expect(chart.points.length).toBeGreaterThan(50);
+    expect(chart.model.length).toBeGreaterThan(10);
   });
 });
 
@@ -157,7 +158,11 @@ describe('POST /api/readings/analyze (open, stores nothing)', () => {
     const res = await request(ctx.app).post('/api/readings/analyze').send({ chemistry: 'flooded', capacityAh: 100, readings: restingLog(50) }).expect(200);
     expect(res.body.readings[0]).toEqual({ at: '2026-11-20T18:00:00.000Z', socPercent: 100, source: 'voltage' });
     expect(res.body.hours).toBe(50);
+    expect(res.body.spans).toBeUndefined();
     expect(Math.abs(res.body.drainA - 0.5) / 0.5).toBeLessThan(0.1);
+    // The battery you have: 80 % health at 0 °C (75 %, US Army TM 10-6140-200-14) leaves 60 Ah usable: 25 points of it in 50 h = 0.3 A.
+    const worn = await request(ctx.app).post('/api/readings/analyze').send({ chemistry: 'flooded', capacityAh: 100, healthPercent: 80, temperatureC: 0, readings: restingLog(50) }).expect(200);
+    expect(worn.body).toMatchObject({ usableAh: 60, drainA: 0.3, method: 'voltage' });
     const lfp = await request(ctx.app).post('/api/readings/analyze').send({ chemistry: 'lifepo4', capacityAh: 100, readings: restingLog(5) }).expect(200);
     expect(lfp.body.drainA).toBeNull();
     expect(lfp.body.reason).toMatch(/battery monitor/);

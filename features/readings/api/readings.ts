@@ -4,31 +4,49 @@ import { apiFetch } from '@/lib/api-client';
 import type { ColumnMapping, ReadingForm, VoltageDropForm } from '@/shared/schemas/reading';
 
 export type Readings = {
-  spot: { id: string; at: string; voltageV: number; currentA: number | null; socPercent: number | null; rested: boolean; place: string; note: string; by: string | null }[];
-  series: { at: string; voltageV: number; socPercent: number | null; currentA: number | null; rested: boolean }[];
+  timeZone: string;
   total: number;
-  projected: { at: string; socPercent: number }[];
-  uploads: { id: string; fileName: string; rowCount: number; errorCount: number; errors: { line: number; reason: string }[]; by: string | null; createdAt: string }[];
-  photos: { id: string; caption: string; fileName: string; by: string | null; createdAt: string; thumbUrl: string }[];
+  window: { from: string; to: string; days: number; clipped: boolean } | null;
+  chart: {
+    points: { at: string; n: number; voltageV: number; currentA: number | null; socPercent: number | null }[];
+    model: { at: string; socPercent: number }[];
+  };
+  spot: { id: string; at: string; voltageV: number; currentA: number | null; socPercent: number | null; rested: boolean; place: string; note: string; by: string | null; canDelete: boolean }[];
+  uploads: { id: string; fileName: string; rowCount: number; errorCount: number; errors: { line: number; reason: string }[]; by: string | null; createdAt: string; canDelete: boolean }[];
+  photos: { id: string; caption: string; fileName: string; by: string | null; createdAt: string; thumbUrl: string; canDelete: boolean }[];
   analysis: {
     drainA: number | null;
+    rangeA: [number, number] | null;
+    method: 'current' | 'monitor' | 'voltage' | null;
     hours: number;
-    method: 'soc' | 'current' | null;
-    span: { from: string; to: string } | null;
+    usableAh: number;
+    flaggedRested: number;
+    label: string;
     reason: string | null;
     notes: string[];
     keyOffDrawA: number;
     chemistry: string;
-    standby: { measuredA: number; modelA: number; matches: boolean; message: string; causes: string[]; suggestedKeyOffDrawA: number } | null;
+    quietHoursNeeded: number;
+    comparison: { enough: boolean; quietHours: number; neededHours: number; measuredA: number; modelA: number | null; matches: boolean | null; message: string; causes: string[]; suggestedKeyOffDrawA: number | null } | null;
   };
 };
-export type LogPreview = { columns: string[]; sample: string[][]; rows: number; mapping: Partial<ColumnMapping>; remembered: boolean };
-export type UploadResult = { upload: { id: string; fileName: string; rowCount: number; errorCount: number }; errors: { line: number; reason: string }[] };
+export type LogPreview = { columns: string[]; sample: string[][]; rows: number; delimiter: string; decimalComma: boolean; mapping: Partial<ColumnMapping>; remembered: boolean };
+export type UploadResult = { upload: { id: string; fileName: string; rowCount: number; errorCount: number }; errors: { line: number; reason: string }[]; notes: string[] };
 export type DropResult = { dropV: number; dropPercent: number; resistanceOhm: number; expectedDropV: number | null; flagged: boolean; message: string; cableRun: string | null };
 
-export const readingKeys = { all: ['readings'] as const, rig: (rigId: string) => [...readingKeys.all, rigId] as const };
+export const readingKeys = {
+  all: ['readings'] as const,
+  rig: (rigId: string) => [...readingKeys.all, rigId] as const,
+  view: (rigId: string, timeZone: string) => [...readingKeys.rig(rigId), timeZone] as const,
+};
 
-export const useReadingsQuery = (rigId: string) => useQuery({ queryKey: readingKeys.rig(rigId), queryFn: () => apiFetch<Readings>(`/api/rigs/${rigId}/readings`) });
+/** The viewer's own time zone: the model's schedule hours and a log's times without an offset are read in it. */
+export const localTimeZone = () => Intl.DateTimeFormat().resolvedOptions().timeZone || 'UTC';
+
+export const useReadingsQuery = (rigId: string) => {
+  const timeZone = localTimeZone();
+  return useQuery({ queryKey: readingKeys.view(rigId, timeZone), queryFn: () => apiFetch<Readings>(`/api/rigs/${rigId}/readings?timeZone=${encodeURIComponent(timeZone)}`) });
+};
 
 function useReadingsMutation<V, R>(rigId: string, fn: (v: V) => Promise<R>) {
   const client = useQueryClient();
@@ -47,7 +65,7 @@ export const useSpotReadingDeleteMutation = (rigId: string) => useReadingsMutati
 export const useLogPreviewMutation = (rigId: string) => useMutation({ mutationFn: (file: File) => apiFetch<LogPreview>(`/api/rigs/${rigId}/uploads/preview`, { method: 'POST', body: form(file) }) });
 export const useLogUploadMutation = (rigId: string) =>
   useReadingsMutation(rigId, (v: { file: File; mapping: ColumnMapping; allOrNothing: boolean; rested: boolean }) =>
-    apiFetch<UploadResult>(`/api/rigs/${rigId}/uploads`, { method: 'POST', body: form(v.file, { mapping: JSON.stringify(v.mapping), allOrNothing: String(v.allOrNothing), rested: String(v.rested) }) }),
+    apiFetch<UploadResult>(`/api/rigs/${rigId}/uploads`, { method: 'POST', body: form(v.file, { mapping: JSON.stringify(v.mapping), allOrNothing: String(v.allOrNothing), rested: String(v.rested), timeZone: localTimeZone() }) }),
   );
 export const useUploadDeleteMutation = (rigId: string) => useReadingsMutation(rigId, (id: string) => apiFetch(`/api/rigs/${rigId}/uploads/${id}`, { method: 'DELETE' }));
 export const usePhotoUploadMutation = (rigId: string) =>

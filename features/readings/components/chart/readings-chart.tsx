@@ -6,8 +6,9 @@ import { colors } from '@/shared/theme';
 
 export function ReadingsChart(props: ReadingsChartProps) {
   const charts = useCharts();
+  const both = props.showSoc && props.showVoltage;
   return (
-    <View style={{ height: 240 }} testID="readings-chart">
+    <View style={{ height: both ? 400 : 220 }} testID="readings-chart">
       {charts ? <charts.ReadingsChart {...props} /> : <ActivityIndicator color={colors.night} />}
     </View>
   );
