@@ -21,10 +21,10 @@ export function forgetCachedSessions() {
 }
 
 /**
- * Reads the better-auth session; 401 without one. Handlers read it with `session(res)`. Reads may use the
- * signed session cookie cache (up to a minute old) and the read cache above; every write checks the
- * session in the database, so a revoked session (password reset or change) can change nothing from that
- * moment.
+ * Reads the better-auth session; 401 without one. Handlers read it with `session(res)`. Every look-up
+ * checks the session in the database (never the signed cookie cache, which a copied cookie could replay
+ * after sign-out), so a signed-out or revoked session reads nothing once the read cache above lets it go:
+ * at once in this process, within READ_CACHE_MS in another.
  */
 export function requireSession(auth: Auth) {
   return async (req: Request, res: Response, next: NextFunction) => {
@@ -37,7 +37,7 @@ export function requireSession(auth: Auth) {
         return next();
       }
     }
-    const data = await auth.api.getSession({ headers: fromNodeHeaders(req.headers), query: { disableCookieCache: write } });
+    const data = await auth.api.getSession({ headers: fromNodeHeaders(req.headers), query: { disableCookieCache: true } });
     if (!data) return next(new HttpError(401, 'unauthenticated', 'Sign in to continue.'));
     if (!write && key) {
       if (readCache.size >= READ_CACHE_SIZE) readCache.delete(readCache.keys().next().value!);
