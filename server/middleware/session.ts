@@ -14,10 +14,12 @@ export type SessionData = NonNullable<Awaited<ReturnType<Auth['api']['getSession
  */
 const READ_CACHE_MS = 5_000;
 const READ_CACHE_SIZE = 10_000;
-const readCache = new Map<string, { data: SessionData; until: number }>();
+type ReadCache = Map<string, { data: SessionData; until: number }>;
+// One map per auth instance (per secret): a cookie one app accepted never opens another in the same process.
+const readCaches = new Map<Auth, ReadCache>();
 
 export function forgetCachedSessions() {
-  readCache.clear();
+  for (const cache of readCaches.values()) cache.clear();
 }
 
 /**
@@ -27,6 +29,8 @@ export function forgetCachedSessions() {
  * at once in this process, within READ_CACHE_MS in another.
  */
 export function requireSession(auth: Auth) {
+  if (!readCaches.has(auth)) readCaches.set(auth, new Map());
+  const readCache = readCaches.get(auth)!;
   return async (req: Request, res: Response, next: NextFunction) => {
     const write = req.method !== 'GET' && req.method !== 'HEAD';
     const key = req.headers.cookie;

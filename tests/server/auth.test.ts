@@ -6,9 +6,11 @@ import { makeTestApp, TEST_ORIGIN } from './test-app';
 
 let ctx: Awaited<ReturnType<typeof makeTestApp>>;
 beforeAll(async () => {
-  ctx = await makeTestApp();
+  // Workers on: the password reset e-mail goes out from the job queue.
+  ctx = await makeTestApp({ RUN_WORKERS: 'true' });
 });
 afterAll(async () => {
+  await ctx.jobs.stop();
   await ctx.db.destroy();
 });
 
