@@ -50,7 +50,7 @@ const OPEN: Record<string, { method: string; query: z.ZodType }> = {
   '/organization/get-active-member-role': { method: 'GET', query: z.strictObject({ userId: id.optional(), organizationId: id.optional(), organizationSlug: z.string().max(100).optional() }) },
   '/organization/list-invitations': { method: 'GET', query: z.strictObject({ organizationId: id.optional() }) },
   '/organization/get-invitation': { method: 'GET', query: z.strictObject({ id }) },
-  '/organization/list-user-invitations': { method: 'GET', query: z.strictObject({ email: z.string().max(254).optional() }) },
+  '/organization/list-user-invitations': { method: 'GET', query: noQuery },
 };
 
 /** In front of better-auth's handler: refuses what this app does not offer and checks list queries (400 naming the parameter). */
