@@ -77,6 +77,16 @@ describe('a rig’s stored objects go with it (issue 15, item 6)', () => {
     await fx.agents.owner.delete(`/api/rigs/${rigId}`).set('Origin', TEST_ORIGIN).expect(204);
     for (const key of keys) expect([key, await exists(key)]).toEqual([key, false]);
   });
+
+  it('finds the local store as open as docs/security.md says (production needs a private bucket)', async () => {
+    const anonymousList = await fetch(`${ctx.config.S3_ENDPOINT}/${ctx.config.S3_BUCKET}?max-keys=1`);
+    expect(anonymousList.status).toBe(200);
+    const photo = (await fx.agents.owner.post(`/api/rigs/${fx.rigId}/photos`).set('Origin', TEST_ORIGIN).attach('file', await sharp({ create: { width: 8, height: 8, channels: 3, background: '#F6F3EC' } }).png().toBuffer(), 'dot.png').expect(201)).body.id;
+    const signed = new URL((await fx.agents.owner.get(`/api/rigs/${fx.rigId}/photos/${photo}`).expect(200)).body.url);
+    expect((await fetch(signed)).status).toBe(200);
+    signed.searchParams.set('X-Amz-Signature', '0'.repeat(64));
+    expect((await fetch(signed)).status).toBe(200);
+  });
 });
 
 describe('reads after sign-out (issue 15, item 7)', () => {
