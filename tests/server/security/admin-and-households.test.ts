@@ -1,3 +1,4 @@
+import { sql } from 'kysely';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 
@@ -14,7 +15,7 @@ afterAll(async () => {
   await ctx.db.destroy();
 });
 
-const sessionsOf = async (userId: string) => (await ctx.db.selectFrom('session').select('id').where('userId', '=', userId).execute()).length;
+const sessionsOf = async (userId: string) => (await sql<{ n: number }>`select count(*)::int as n from session where "userId" = ${userId}`.execute(ctx.db)).rows[0].n;
 
 describe('an admin is limited to accounts (issue 15, item 2)', () => {
   it('lists accounts and sets roles, and is refused every other admin endpoint of better-auth', async () => {

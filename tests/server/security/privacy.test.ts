@@ -125,6 +125,6 @@ describe('private answers are never stored (issue 15, item 8)', () => {
       await request(ctx.app).get('/api/me'),
     ];
     expect(answers.map((r) => r.status)).toEqual([200, 200, 200, 200, 200, 200, 200, 200, 200, 200, 200, 200, 200, 200, 404, 401]);
-    for (const r of answers) expect([r.req.path, r.headers['cache-control']]).toEqual([r.req.path, 'no-store']);
+    expect(answers.map((r) => r.headers['cache-control'])).toEqual(answers.map(() => 'no-store'));
   });
 });
