@@ -57,11 +57,20 @@ export function createApp(ctx: AppContext): Express {
   });
 
   // The auth handler comes before the JSON parser; it sees the client's address from the socket, never from a header the client sent.
+  const authHandler = toNodeHandler(auth);
+  // A reset request answers after the same time whether or not the address has an account (its e-mail
+  // goes out from the job queue; the floor hides the database work that is left).
+  const resetHandler = toNodeHandler(async (request: Request) => {
+    const started = Date.now();
+    const response = await auth.handler(request);
+    await new Promise((r) => setTimeout(r, Math.max(0, started + config.RESET_ANSWER_MS - Date.now())));
+    return response;
+  });
   app.all('/api/auth/{*any}', (req, _res, next) => {
     req.headers[CLIENT_IP_HEADER] = req.socket.remoteAddress ?? 'unknown';
     if (req.method !== 'GET' && req.method !== 'HEAD') forgetCachedSessions();
     next();
-  }, authGate, toNodeHandler(auth));
+  }, authGate, (req, res) => (req.path === '/api/auth/request-password-reset' ? resetHandler(req, res) : authHandler(req, res)));
 
   app.use('/api', sameOrigin([config.KEYOFF_URL, ...config.TRUSTED_ORIGINS]));
   app.use('/api', express.json({ limit: '1mb' }));

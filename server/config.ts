@@ -30,6 +30,8 @@ const configSchema = z.object({
     .default('')
     .transform((v) => v.split(',').map((s) => s.trim()).filter(Boolean)),
   SIGN_IN_LIMIT_PER_MINUTE: z.coerce.number().int().min(1).default(10),
+  /** A password-reset request answers no sooner than this, known address or not. */
+  RESET_ANSWER_MS: z.coerce.number().int().min(0).max(5000).default(300),
   /** The app's public address (not BASE_URL: vitest sets that one to "/"). */
   KEYOFF_URL: z.string().url().default('http://127.0.0.1:8080'),
   /** Folder of the exported web build the server serves in production. */
