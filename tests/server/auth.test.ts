@@ -51,7 +51,7 @@ describe('sign-up, verification, sign-in and sign-out over HTTP, with mail throu
     await agent.get(linkIn(await latestMailTo(email)).pathname + linkIn(await latestMailTo(email)).search);
 
     await post(agentFor(ctx.app), '/api/auth/request-password-reset', { email, redirectTo: `${TEST_ORIGIN}/reset-password` }).expect(200);
-    const mail = await latestMailTo(email, /Reset/);
+    const mail = await latestMailTo(email, /Reset/, 30_000);
     expect(mail.subject).toBe('Reset your Keyoff password');
     const link = linkIn(mail);
     const redirect = await request(ctx.app).get(link.pathname + link.search).expect(302);
