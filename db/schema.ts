@@ -223,6 +223,15 @@ export interface Database {
   email_log: EmailLogTable;
   uploads: UploadTable;
   readings: ReadingTable;
+  invitation_sends: InvitationSendTable;
+}
+
+/** One invitation e-mail sent, for the limits per inviter and per household. */
+export interface InvitationSendTable {
+  id: Generated<string>;
+  household_id: string;
+  inviter_id: string;
+  created_at: ColumnType<Date, Date | undefined, never>;
 }
 
 export type RigRow = Selectable<RigTable>;

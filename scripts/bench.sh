@@ -7,6 +7,8 @@ trap cleanup EXIT
 ensure_deps
 start_db
 cd "$ROOT"
+# The benches build their apps in production mode, which refuses the default secret.
+ensure_auth_secret
 rm -f bench-results/latest.json
 build_web
 ensure_chromium

@@ -79,6 +79,13 @@ build_web() {
   say "web export took $((SECONDS - t0)) s"
 }
 
+# AUTH_SECRET from the environment, or made at random on first run and kept in .data/auth-secret (mode 0600).
+ensure_auth_secret() {
+  if [ -n "${AUTH_SECRET:-}" ]; then return; fi
+  AUTH_SECRET=$(cd "$ROOT" && node_modules/.bin/tsx scripts/auth-secret.ts "$ROOT/.data/auth-secret")
+  export AUTH_SECRET
+}
+
 ensure_chromium() {
   if [ -x /usr/bin/chromium ]; then return; fi
   say "installing Debian's chromium for the browser tests"

@@ -13,6 +13,7 @@ start_maildev
 start_s3
 build_web
 
+ensure_auth_secret
 export NODE_ENV=production PORT=${PORT:-8080}
 if port_open "$PORT"; then say "port $PORT is taken by another program; stop it or set PORT"; exit 1; fi
 (cd "$ROOT" && exec node_modules/.bin/tsx server/index.ts) &

@@ -4,6 +4,7 @@ import { pinoHttp } from 'pino-http';
 import { toNodeHandler } from 'better-auth/node';
 
 import { CLIENT_IP_HEADER } from './auth';
+import { authGate } from './middleware/auth-gate';
 import type { AppContext } from './context';
 import { devCors } from './middleware/cors';
 import { errorHandler, notFoundApi } from './middleware/error-handler';
@@ -49,21 +50,38 @@ export function createApp(ctx: AppContext): Express {
   if (config.TRUSTED_ORIGINS.length) app.use('/api', devCors(config.TRUSTED_ORIGINS));
   app.use(pinoHttp({ logger, autoLogging: { ignore: (req) => req.url === '/api/health' } }));
 
+  // Answers of the API carry private data: no browser, proxy or shared computer keeps a copy.
+  app.use('/api', (_req, res, next) => {
+    res.set('Cache-Control', 'no-store');
+    next();
+  });
+
   // The auth handler comes before the JSON parser; it sees the client's address from the socket, never from a header the client sent.
+  const authHandler = toNodeHandler(auth);
+  // A reset request answers after the same time whether or not the address has an account (its e-mail
+  // goes out from the job queue; the floor hides the database work that is left).
+  const resetHandler = toNodeHandler(async (request: Request) => {
+    const started = Date.now();
+    const response = await auth.handler(request);
+    await new Promise((r) => setTimeout(r, Math.max(0, started + config.RESET_ANSWER_MS - Date.now())));
+    return response;
+  });
   app.all('/api/auth/{*any}', (req, _res, next) => {
     req.headers[CLIENT_IP_HEADER] = req.socket.remoteAddress ?? 'unknown';
     if (req.method !== 'GET' && req.method !== 'HEAD') forgetCachedSessions();
     next();
-  }, toNodeHandler(auth));
+  }, authGate, (req, res) => (req.path === '/api/auth/request-password-reset' ? resetHandler(req, res) : authHandler(req, res)));
 
   app.use('/api', sameOrigin([config.KEYOFF_URL, ...config.TRUSTED_ORIGINS]));
   app.use('/api', express.json({ limit: '1mb' }));
   app.use('/api/health', healthRouter(db, APP_VERSION));
-  app.use('/api/projections', rateLimitedOpen(config.RATE_LIMIT_PER_MINUTE), projectionsRouter());
-  app.use('/api/cable-runs', rateLimitedOpen(config.RATE_LIMIT_PER_MINUTE), cableRunsRouter());
-  app.use('/api/email', rateLimitedOpen(config.RATE_LIMIT_PER_MINUTE), express.urlencoded({ extended: false, limit: '10kb' }), emailRouter(ctx));
+  // One budget per client across every open route (not one each).
+  const openLimit = rateLimitedOpen(config.RATE_LIMIT_PER_MINUTE);
+  app.use('/api/projections', openLimit, projectionsRouter());
+  app.use('/api/cable-runs', openLimit, cableRunsRouter());
+  app.use('/api/email', openLimit, express.urlencoded({ extended: false, limit: '10kb' }), emailRouter(ctx));
   app.use('/api/me', requireSession(auth), meRouter(ctx));
-  app.use('/api/readings', rateLimitedOpen(config.RATE_LIMIT_PER_MINUTE), readingsAnalyzeRouter());
+  app.use('/api/readings', openLimit, readingsAnalyzeRouter());
   app.use('/api/rigs', requireSession(auth), rigsRouter(ctx), rigReadingsRouter(ctx));
   app.use('/api/invitations', requireSession(auth), invitationsRouter(ctx));
   app.use('/api/clients', requireSession(auth), clientsRouter(ctx));

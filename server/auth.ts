@@ -1,9 +1,11 @@
 import { betterAuth } from 'better-auth';
+import { APIError, createAuthMiddleware } from 'better-auth/api';
 import { admin, organization } from 'better-auth/plugins';
 import type { Logger } from 'pino';
 
 import type { Db } from '@/db/client';
 import { accountAc, accountRoles, householdAc, householdRoles } from '@/shared/permissions';
+import { NAME_MAX } from '@/shared/schemas/auth';
 import type { Config } from './config';
 import { type Mail, type Mailer, templates } from './mail';
 
@@ -17,7 +19,17 @@ export const INVITATION_DAYS = 7;
  * account roles (admin plugin: traveller, advisor, admin) and households (organization plugin: owner,
  * member, advisor).
  */
-export function createAuth({ config, db, mailer, logger, retryMail }: { config: Config; db: Db; mailer: Mailer; logger: Logger; retryMail?: (mail: Mail) => Promise<void> }) {
+/** Names of people and households: the forms' limit, kept on every better-auth route too (a name travels in the session cookie and in e-mail subjects). */
+const capNames = createAuthMiddleware(async (ctx) => {
+  const body = ctx.body as { name?: unknown; data?: { name?: unknown } } | undefined;
+  for (const [field, value] of [['name', body?.name], ['data.name', body?.data?.name]] as const) {
+    if (typeof value === 'string' && value.length > NAME_MAX) {
+      throw new APIError('BAD_REQUEST', { message: `${field}: use at most ${NAME_MAX} characters.`, code: 'NAME_TOO_LONG' });
+    }
+  }
+});
+
+export function createAuth({ config, db, mailer, logger, retryMail, queueMail }: { config: Config; db: Db; mailer: Mailer; logger: Logger; retryMail?: (mail: Mail) => Promise<void>; queueMail?: (mail: Mail) => Promise<void> }) {
   // Account e-mails go out at once (someone is waiting for the link); when the SMTP server fails, the
   // mail goes to the job queue, which retries it with backoff. The request itself succeeds either way.
   const send = async (mail: Mail) => {
@@ -26,6 +38,18 @@ export function createAuth({ config, db, mailer, logger, retryMail }: { config: 
     } catch (err) {
       logger.error({ err, to: mail.to }, 'mail could not be sent; queued for retry');
       await retryMail?.(mail).catch((queueErr) => logger.error({ err: queueErr, to: mail.to }, 'mail could not be queued either'));
+    }
+  };
+
+  // The reset e-mail goes out from the job queue: answering for a known address then costs what answering
+  // for an unknown one costs (a row or two), so the time taken tells nothing about which accounts exist.
+  const sendLater = async (mail: Mail) => {
+    try {
+      if (!queueMail) throw new Error('no job queue');
+      await queueMail(mail);
+    } catch (err) {
+      logger.error({ err, to: mail.to }, 'mail could not be queued; sending at once');
+      await send(mail);
     }
   };
 
@@ -43,7 +67,7 @@ export function createAuth({ config, db, mailer, logger, retryMail }: { config: 
       maxPasswordLength: 128,
       resetPasswordTokenExpiresIn: 3600,
       revokeSessionsOnPasswordReset: true,
-      sendResetPassword: async ({ user, url }) => send(templates.resetPassword(user.email, user.name, url)),
+      sendResetPassword: async ({ user, url }) => sendLater(templates.resetPassword(user.email, user.name, url)),
     },
     emailVerification: {
       sendOnSignUp: true,
@@ -51,7 +75,9 @@ export function createAuth({ config, db, mailer, logger, retryMail }: { config: 
       expiresIn: 24 * 3600,
       sendVerificationEmail: async ({ user, url }) => send(templates.verifyEmail(user.email, user.name, url)),
     },
-    session: { cookieCache: { enabled: true, maxAge: 60 } },
+    // Our routes check the session in the database (requireSession); the signed cache serves get-session only, briefly.
+    session: { cookieCache: { enabled: true, maxAge: 5 } },
+    hooks: { before: capNames },
     rateLimit: {
       enabled: true,
       window: 60,

@@ -1,5 +1,7 @@
 import { z } from 'zod';
 
+import { DEFAULT_AUTH_SECRET, MIN_SECRET_LENGTH } from './security/secrets';
+
 // Read once at start-up, checked, with safe local defaults.
 const configSchema = z.object({
   NODE_ENV: z.enum(['development', 'production', 'test']).default('development'),
@@ -15,8 +17,8 @@ const configSchema = z.object({
   SMTP_USER: z.string().optional(),
   SMTP_PASSWORD: z.string().optional(),
   MAIL_FROM: z.string().default('Keyoff <no-reply@keyoff.example.org>'),
-  /** Secret that signs sessions; the default is for local use only. */
-  AUTH_SECRET: z.string().min(32).default('keyoff-local-development-secret-change-me-0123456789'),
+  /** Signs sessions; every other key is derived from it. The default is for development and tests only. */
+  AUTH_SECRET: z.string().min(MIN_SECRET_LENGTH).default(DEFAULT_AUTH_SECRET),
   /** E-mail addresses that become admins when they sign up (comma-separated). */
   ADMIN_EMAILS: z
     .string()
@@ -28,6 +30,8 @@ const configSchema = z.object({
     .default('')
     .transform((v) => v.split(',').map((s) => s.trim()).filter(Boolean)),
   SIGN_IN_LIMIT_PER_MINUTE: z.coerce.number().int().min(1).default(10),
+  /** A password-reset request answers no sooner than this, known address or not. */
+  RESET_ANSWER_MS: z.coerce.number().int().min(0).max(5000).default(300),
   /** The app's public address (not BASE_URL: vitest sets that one to "/"). */
   KEYOFF_URL: z.string().url().default('http://127.0.0.1:8080'),
   /** Folder of the exported web build the server serves in production. */
@@ -38,6 +42,10 @@ const configSchema = z.object({
     .transform((v) => (v === undefined ? undefined : v === 'true')),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
   RATE_LIMIT_PER_MINUTE: z.coerce.number().int().min(1).default(120),
+  /** Invitation e-mails (new or resent) one person may send in an hour, across their households. */
+  INVITES_PER_INVITER_PER_HOUR: z.coerce.number().int().min(1).default(10),
+  /** Invitation e-mails one household may send in a day, whoever sends them. */
+  INVITES_PER_HOUSEHOLD_PER_DAY: z.coerce.number().int().min(1).default(20),
   /** pg-boss keeps its jobs in this schema of the same database. */
   JOBS_SCHEMA: z.string().regex(/^[a-z_][a-z0-9_]*$/).default('pgboss'),
   /** Whether this process runs the job workers and the schedules (every server process may). */
@@ -65,8 +73,15 @@ const configSchema = z.object({
 
 export type Config = z.infer<typeof configSchema>;
 
+// Production never runs on the repository's default secret (anyone could forge sessions and links with it).
+const checkedSchema = configSchema.superRefine((c, ctx) => {
+  if (c.NODE_ENV === 'production' && c.AUTH_SECRET === DEFAULT_AUTH_SECRET) {
+    ctx.addIssue({ code: 'custom', path: ['AUTH_SECRET'], message: 'production refuses the repository default: set AUTH_SECRET (npm start makes one in .data/auth-secret)' });
+  }
+});
+
 export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
-  const parsed = configSchema.safeParse(env);
+  const parsed = checkedSchema.safeParse(env);
   if (!parsed.success) {
     const problems = parsed.error.issues.map((i) => `${i.path.join('.')}: ${i.message}`).join('; ');
     throw new Error(`Bad configuration: ${problems}`);

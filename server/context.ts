@@ -18,7 +18,7 @@ export function createContext(env: NodeJS.ProcessEnv = process.env, overrides: P
   const mailer = overrides.mailer ?? createMailer(config, logger);
   const clock = overrides.clock ?? { now: () => new Date() };
   const jobs = overrides.jobs ?? createJobs({ config, logger, db, mailer, clock });
-  const auth = overrides.auth ?? createAuth({ config, db, mailer, logger, retryMail: jobs.retryMail });
+  const auth = overrides.auth ?? createAuth({ config, db, mailer, logger, retryMail: jobs.retryMail, queueMail: jobs.queueMail });
   const storage = overrides.storage ?? createStorage(config);
   return { config, logger, db, mailer, auth, clock, jobs, storage };
 }

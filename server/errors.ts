@@ -24,6 +24,8 @@ export class HttpError extends Error {
     readonly code: ErrorCode,
     message: string,
     readonly fields: FieldError[] = [],
+    /** Sent as Retry-After (seconds) with a 429 or 503. */
+    readonly retryAfterSeconds?: number,
   ) {
     super(message);
     this.name = 'HttpError';

@@ -9,9 +9,6 @@ async function main() {
   if (applied.length) logger.info({ applied }, 'migrations applied');
   await jobs.start();
   logger.info({ workers: config.RUN_WORKERS }, 'job queue started');
-  if (config.NODE_ENV === 'production' && config.AUTH_SECRET.startsWith('keyoff-local-development')) {
-    logger.warn('AUTH_SECRET is the local default: set your own before serving anyone but yourself');
-  }
 
   const app = createApp(ctx);
   const server = app.listen(config.PORT, config.HOST, () => {

@@ -1,5 +1,5 @@
 import { createAccessControl } from 'better-auth/plugins/access';
-import { defaultStatements as accountStatements, adminAc, userAc } from 'better-auth/plugins/admin/access';
+import { defaultStatements as accountStatements, userAc } from 'better-auth/plugins/admin/access';
 import { defaultStatements as householdBaseStatements, memberAc, ownerAc } from 'better-auth/plugins/organization/access';
 
 /**
@@ -58,7 +58,9 @@ export const accountAc = createAccessControl(accountStatements);
 export const accountRoles = {
   traveller: accountAc.newRole({ ...userAc.statements }),
   advisor: accountAc.newRole({ ...userAc.statements }),
-  admin: accountAc.newRole({ ...adminAc.statements }),
+  // Runs the service: lists accounts and sets their roles. No impersonation, sessions, passwords or edits
+  // of other accounts (PRODUCT.md: an admin sees no private budgets unless invited).
+  admin: accountAc.newRole({ user: ['list', 'set-role'] }),
 };
 export type AccountRole = keyof typeof accountRoles;
 export const ACCOUNT_ROLES = Object.keys(accountRoles) as AccountRole[];

@@ -1,4 +1,5 @@
 import { claimEmail, dropEmail, type EmailKey, emailStatus, ensureEmailRow, markEmailFailed, markEmailSent, recordEmailContent } from '../repositories/email';
+import { withoutPersonalLinks } from '../emails/unsubscribe';
 import type { JobDeps } from './types';
 
 export type Built = { to: string; subject: string; html: string; text: string; chartPng?: Buffer; meta?: unknown; headers?: Record<string, string> };
@@ -39,7 +40,8 @@ export async function deliver(
     await dropEmail(db, claimed.id);
     return 'skipped';
   }
-  await recordEmailContent(db, claimed.id, { to: mail.to, subject: mail.subject, html: mail.html, text: mail.text, chartPng: mail.chartPng ?? null, meta: mail.meta });
+  // The household sees the kept copy on the Reports screen: it keeps no personal link.
+  await recordEmailContent(db, claimed.id, { to: mail.to, subject: mail.subject, html: withoutPersonalLinks(mail.html), text: withoutPersonalLinks(mail.text), chartPng: mail.chartPng ?? null, meta: mail.meta });
   try {
     await mailer.send({
       to: mail.to,

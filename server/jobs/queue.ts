@@ -18,6 +18,8 @@ export type Jobs = {
   noteWritten: (rigId: string, recipients: string[]) => Promise<void>;
   /** An account e-mail that failed at once: retried with backoff until the SMTP server takes it. */
   retryMail: (mail: Mail) => Promise<void>;
+  /** An account e-mail sent by a worker as soon as one is free (the password reset). */
+  queueMail: (mail: Mail) => Promise<void>;
 };
 
 /** pg-boss on the project's own PostgreSQL: jobs survive restarts and several server processes share them. */
@@ -95,6 +97,9 @@ export function createJobs(deps: JobDeps): Jobs {
     async retryMail(mail) {
       // A link in an account e-mail is single-use and short-lived: no attachments, small JSON.
       await boss.send(QUEUES.mailRetry, { mail }, { startAfter: config.JOB_RETRY_DELAY_SECONDS });
+    },
+    async queueMail(mail) {
+      await boss.send(QUEUES.mailRetry, { mail });
     },
     async noteWritten(rigId, recipients) {
       for (const userId of recipients) {

@@ -16,6 +16,6 @@ export const QUEUES = {
   /** Once a day: every rig's margin, since a routine or a season moves it without an edit. */
   marginDaily: 'margin-daily',
   noteDigest: 'note-digest',
-  /** An account e-mail (verification, reset, invitation) whose first send failed. */
+  /** An account e-mail: the password reset, and any (verification, invitation) whose first send failed. */
   mailRetry: 'mail-retry',
 } as const;

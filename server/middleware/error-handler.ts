@@ -35,8 +35,9 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
     req.log?.error({ err }, 'unhandled error');
     problem = new HttpError(500, 'internal', 'Something went wrong on our side.');
   }
+  if (problem.retryAfterSeconds !== undefined) res.set('Retry-After', String(Math.max(1, Math.ceil(problem.retryAfterSeconds))));
   res
     .status(problem.status)
     .type('application/problem+json')
-    .json({ status: problem.status, code: problem.code, message: problem.message, fields: problem.fields });
+    .json({ status: problem.status, code: problem.code, message: problem.message, fields: problem.fields, ...(problem.retryAfterSeconds !== undefined ? { retryAfterSeconds: Math.max(1, Math.ceil(problem.retryAfterSeconds)) } : {}) });
 };

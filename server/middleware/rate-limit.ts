@@ -2,7 +2,7 @@ import { rateLimit } from 'express-rate-limit';
 
 import { HttpError } from '../errors';
 
-/** A per-address limit for the open routes (the model and the cable sizing), answered as problem JSON. */
+/** A per-address limit for the open routes (the model, cable sizing, log analysis, unsubscribe links), answered as problem JSON. Make one and share it: each instance counts on its own. */
 export function rateLimitedOpen(perMinute: number) {
   return rateLimit({
     windowMs: 60_000,

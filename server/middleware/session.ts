@@ -14,19 +14,23 @@ export type SessionData = NonNullable<Awaited<ReturnType<Auth['api']['getSession
  */
 const READ_CACHE_MS = 5_000;
 const READ_CACHE_SIZE = 10_000;
-const readCache = new Map<string, { data: SessionData; until: number }>();
+type ReadCache = Map<string, { data: SessionData; until: number }>;
+// One map per auth instance (per secret): a cookie one app accepted never opens another in the same process.
+const readCaches = new Map<Auth, ReadCache>();
 
 export function forgetCachedSessions() {
-  readCache.clear();
+  for (const cache of readCaches.values()) cache.clear();
 }
 
 /**
- * Reads the better-auth session; 401 without one. Handlers read it with `session(res)`. Reads may use the
- * signed session cookie cache (up to a minute old) and the read cache above; every write checks the
- * session in the database, so a revoked session (password reset or change) can change nothing from that
- * moment.
+ * Reads the better-auth session; 401 without one. Handlers read it with `session(res)`. Every look-up
+ * checks the session in the database (never the signed cookie cache, which a copied cookie could replay
+ * after sign-out), so a signed-out or revoked session reads nothing once the read cache above lets it go:
+ * at once in this process, within READ_CACHE_MS in another.
  */
 export function requireSession(auth: Auth) {
+  if (!readCaches.has(auth)) readCaches.set(auth, new Map());
+  const readCache = readCaches.get(auth)!;
   return async (req: Request, res: Response, next: NextFunction) => {
     const write = req.method !== 'GET' && req.method !== 'HEAD';
     const key = req.headers.cookie;
@@ -37,7 +41,7 @@ export function requireSession(auth: Auth) {
         return next();
       }
     }
-    const data = await auth.api.getSession({ headers: fromNodeHeaders(req.headers), query: { disableCookieCache: write } });
+    const data = await auth.api.getSession({ headers: fromNodeHeaders(req.headers), query: { disableCookieCache: true } });
     if (!data) return next(new HttpError(401, 'unauthenticated', 'Sign in to continue.'));
     if (!write && key) {
       if (readCache.size >= READ_CACHE_SIZE) readCache.delete(readCache.keys().next().value!);

@@ -4,7 +4,7 @@ import type { z } from 'zod';
 import { HttpError } from '../errors';
 
 export function issuesToFields(error: z.ZodError) {
-  return error.issues.map((i) => ({ path: i.path.join('.') || '(body)', message: i.message }));
+  return error.issues.map((i) => ({ path: [...i.path, ...(i.code === 'unrecognized_keys' ? [i.keys.join(', ')] : [])].join('.') || '(body)', message: i.message }));
 }
 
 type Part = 'body' | 'query' | 'params';

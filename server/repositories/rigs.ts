@@ -149,8 +149,13 @@ export async function touchRig(db: Exec, rigId: string) {
     .execute();
 }
 
-export async function deleteRig(db: Exec, rigId: string) {
-  await db.deleteFrom('rigs').where('id', '=', rigId).execute();
+/** Deletes the rig (its rows go with it) and returns the keys of its stored objects: logs, photos and thumbnails. */
+export async function deleteRig(db: Exec, rigId: string): Promise<string[]> {
+  return db.transaction().execute(async (trx) => {
+    const uploads = await trx.selectFrom('uploads').select(['object_key', 'thumb_key']).where('rig_id', '=', rigId).forUpdate().execute();
+    await trx.deleteFrom('rigs').where('id', '=', rigId).execute();
+    return uploads.flatMap((u) => [u.object_key, u.thumb_key].filter((k): k is string => !!k));
+  });
 }
 
 export async function insertLoad(db: Exec, rigId: string, load: Omit<NewLoad, 'rig_id' | 'position'>) {

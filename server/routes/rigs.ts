@@ -21,7 +21,7 @@ import { HttpError } from '../errors';
 import { emailParamsSchema } from '@/shared/schemas/email-prefs';
 
 /** /api/rigs: every route below runs after requireSession (app.ts) and one rigAccess check. */
-export function rigsRouter({ db, auth, jobs, config }: AppContext) {
+export function rigsRouter({ db, auth, jobs, config, storage }: AppContext) {
   const router = Router();
   const actor = (res: Response) => ({ id: session(res).user.id, name: session(res).user.name });
 
@@ -34,6 +34,7 @@ export function rigsRouter({ db, auth, jobs, config }: AppContext) {
     }
     next();
   });
+  const inviteLimits = { perInviterPerHour: config.INVITES_PER_INVITER_PER_HOUR, perHouseholdPerDay: config.INVITES_PER_HOUSEHOLD_PER_DAY };
   const headers = (req: { headers: Record<string, string | string[] | undefined> }) => fromNodeHeaders(req.headers);
 
   router.get('/', async (_req, res) => {
@@ -53,15 +54,16 @@ export function rigsRouter({ db, auth, jobs, config }: AppContext) {
     res.json(await rigs.changeRig(db, rigOf(res), actor(res), parsed(res, rigUpdateSchema)));
   });
 
-  router.delete('/:rigId', rigAccess(db, { rig: ['delete'] }), async (_req, res) => {
-    await rigs.removeRig(db, rigOf(res).id);
+  router.delete('/:rigId', rigAccess(db, { rig: ['delete'] }), async (req, res) => {
+    const left = await rigs.removeRig(db, storage, rigOf(res).id);
+    if (left.length) req.log.error({ keys: left }, 'objects of a deleted rig are still in the store');
     res.status(204).end();
   });
 
   router.get('/:rigId/outlook', rigAccess(db, { rig: ['read'] }), async (req, res) => {
     const body = await rigs.rigOutlook(db, rigOf(res));
-    // Always revalidated (the tag moves with the rig's version); gzip when the client takes it.
-    res.set({ ETag: body.etag, 'Cache-Control': 'private, no-cache', Vary: 'Accept-Encoding' });
+    // Never stored (private data); a client that kept the answer itself may still ask with its tag (304). Gzip when the client takes it.
+    res.set({ ETag: body.etag, 'Cache-Control': 'no-store', Vary: 'Accept-Encoding' });
     if (req.fresh) return res.status(304).end();
     res.type('json');
     if (req.acceptsEncodings('gzip', 'identity') === 'gzip') return res.set('Content-Encoding', 'gzip').send(body.gzip);
@@ -169,11 +171,11 @@ export function rigsRouter({ db, auth, jobs, config }: AppContext) {
 
   router.post('/:rigId/invitations', rigAccess(db, { people: ['manage'] }), validate(invitationCreateSchema), async (req, res) => {
     const body = parsed(res, invitationCreateSchema);
-    res.status(201).json(await people.invite(auth, headers(req), rigOf(res).household_id, body.email, body.role));
+    res.status(201).json(await people.invite(db, auth, headers(req), session(res).user.id, inviteLimits, rigOf(res).household_id, body.email, body.role));
   });
 
   router.post('/:rigId/invitations/:invitationId/resend', rigAccess(db, { people: ['manage'] }), validate(invitationParamsSchema, 'params'), async (req, res) => {
-    res.json(await people.resendInvitation(db, auth, headers(req), rigOf(res).household_id, parsed(res, invitationParamsSchema, 'params').invitationId));
+    res.json(await people.resendInvitation(db, auth, headers(req), session(res).user.id, inviteLimits, rigOf(res).household_id, parsed(res, invitationParamsSchema, 'params').invitationId));
   });
 
   router.delete('/:rigId/invitations/:invitationId', rigAccess(db, { people: ['manage'] }), validate(invitationParamsSchema, 'params'), async (req, res) => {

@@ -44,6 +44,7 @@ export const turnOff = (db: Db, userId: string, list: MailList) => savePrefs(db,
 export async function unsubscribe(db: Db, secret: string, token: string) {
   const who = readUnsubscribeToken(secret, token);
   if (!who) throw new HttpError(400, 'validation_failed', 'This unsubscribe link is not valid.', [{ path: 'token', message: 'The token was changed or is not ours.' }]);
+  if (who.expired) throw new HttpError(410, 'expired', 'This unsubscribe link has expired: choose your e-mails in Settings.', [{ path: 'token', message: 'The link has expired.' }]);
   if (!(await findUser(db, who.userId))) throw new HttpError(404, 'not_found', 'No such account.');
   await turnOff(db, who.userId, who.list);
   return who;

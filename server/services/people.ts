@@ -5,6 +5,7 @@ import { HttpError } from '../errors';
 import { countOwners, findInvitation, findMember, householdPeople } from '../repositories/rigs';
 import { type Actor, recordMembership } from './history';
 import { findUser } from '../repositories/users';
+import { insertInvitationSend, invitationSendsSince, lockInvitationSends } from '../repositories/invitations';
 
 type Headers = globalThis.Headers;
 const isOwner = (role: string) => role.split(',').includes('owner');
@@ -22,15 +23,41 @@ export async function listPeople(db: Db, householdId: string) {
   };
 }
 
-export async function invite(auth: Auth, headers: Headers, householdId: string, email: string, role: string, resend = false) {
+export type InviteLimits = { perInviterPerHour: number; perHouseholdPerDay: number };
+
+/**
+ * Counts one invitation e-mail against its inviter (an hour) and its household (a day); 429 with the
+ * seconds until one is free again when either is used up. Several processes count the same rows.
+ */
+async function reserveInvitationSend(db: Db, householdId: string, inviterId: string, limits: InviteLimits) {
+  await db.transaction().execute(async (trx) => {
+    await lockInvitationSends(trx, householdId, inviterId);
+    const now = new Date();
+    const windows = [
+      { by: 'inviter_id' as const, id: inviterId, ms: 3_600_000, max: limits.perInviterPerHour, what: 'You have sent as many invitations as an hour allows' },
+      { by: 'household_id' as const, id: householdId, ms: 86_400_000, max: limits.perHouseholdPerDay, what: 'This household has sent as many invitations as a day allows' },
+    ];
+    for (const w of windows) {
+      const { count, oldest } = await invitationSendsSince(trx, w.by, w.id, new Date(now.getTime() - w.ms));
+      if (count >= w.max) {
+        const retryAfter = oldest ? (oldest.getTime() + w.ms - now.getTime()) / 1000 : w.ms / 1000;
+        throw new HttpError(429, 'rate_limited', `${w.what} (${w.max}); try again in ${Math.ceil(retryAfter / 60)} minutes.`, [], retryAfter);
+      }
+    }
+    await insertInvitationSend(trx, householdId, inviterId, now);
+  });
+}
+
+export async function invite(db: Db, auth: Auth, headers: Headers, inviterId: string, limits: InviteLimits, householdId: string, email: string, role: string, resend = false) {
+  await reserveInvitationSend(db, householdId, inviterId, limits);
   const invitation = await viaAuth(() => auth.api.createInvitation({ headers, body: { email, role: role as 'member', organizationId: householdId, resend } }), 'email');
   return { id: invitation.id, email: invitation.email, role: invitation.role, status: invitation.status, expiresAt: new Date(invitation.expiresAt).toISOString() };
 }
 
-export async function resendInvitation(db: Db, auth: Auth, headers: Headers, householdId: string, invitationId: string) {
+export async function resendInvitation(db: Db, auth: Auth, headers: Headers, inviterId: string, limits: InviteLimits, householdId: string, invitationId: string) {
   const inv = await findInvitation(db, invitationId);
   if (!inv || inv.householdId !== householdId || inv.status !== 'pending') throw new HttpError(404, 'not_found', 'No such pending invitation.');
-  return invite(auth, headers, householdId, inv.email, inv.role ?? 'member', true);
+  return invite(db, auth, headers, inviterId, limits, householdId, inv.email, inv.role ?? 'member', true);
 }
 
 export async function revokeInvitation(db: Db, auth: Auth, headers: Headers, householdId: string, invitationId: string) {

@@ -1,5 +1,6 @@
 import type { Db } from '@/db/client';
 import { HttpError } from '../errors';
+import { withoutPersonalLinks } from '../emails/unsubscribe';
 import * as email from '../repositories/email';
 
 const iso = (d: unknown) => new Date(d as Date).toISOString();
@@ -13,7 +14,8 @@ export async function sentEmailsOf(db: Db, rigId: string) {
 export async function sentEmail(db: Db, rigId: string, emailId: string) {
   const row = await email.findSentEmail(db, rigId, emailId);
   if (!row) throw new HttpError(404, 'not_found', 'No such e-mail on this rig.');
-  return row;
+  // Copies kept before links were taken out at send time lose them here.
+  return { ...row, html: row.html === null ? null : withoutPersonalLinks(row.html), text: row.text === null ? null : withoutPersonalLinks(row.text) };
 }
 
 /** For an admin: e-mails whose last attempt failed, with the error; no budget figures. */

@@ -9,6 +9,7 @@ import { type Actor, daysParkedOf, describeLoad, describeLoadEdit, describePower
 import { insertHistory } from '../repositories/history';
 import type { RigCreateInput, RigHeader, RigPermissions, RigUpdateInput } from '@/shared/schemas/rig';
 import type { Auth } from '../auth';
+import type { Storage } from '../storage';
 import { viaAuth } from '../auth-errors';
 import { HttpError } from '../errors';
 import { deleteLoad, deleteRig, householdRole, insertLoad, insertRig, listRigsForUser, loadsOfRigs, updateLoad, updateRigIfVersion } from '../repositories/rigs';
@@ -229,6 +230,10 @@ export async function removeLoad(db: Db, rig: RigRowWithRole, actor: Actor, load
   });
 }
 
-export async function removeRig(db: Db, rigId: string) {
-  await deleteRig(db, rigId);
+/** Deletes the rig, then its logs and photos from object storage; returns the keys the store would not delete (left for the log). */
+export async function removeRig(db: Db, storage: Storage, rigId: string): Promise<string[]> {
+  const keys = await deleteRig(db, rigId);
+  const left: string[] = [];
+  for (const key of keys) await storage.remove(key).catch(() => left.push(key));
+  return left;
 }

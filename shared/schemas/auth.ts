@@ -4,7 +4,10 @@ import { z } from 'zod';
 export const emailSchema = z.email('Enter an e-mail address.').max(254);
 export const passwordSchema = z.string().min(10, 'Use at least 10 characters.').max(128, 'Use at most 128 characters.');
 
-export const signUpSchema = z.object({ name: z.string().trim().min(1, 'Tell us your name.').max(80), email: emailSchema, password: passwordSchema });
+/** A person's or a household's name, in the forms and on every server route. */
+export const NAME_MAX = 80;
+
+export const signUpSchema = z.object({ name: z.string().trim().min(1, 'Tell us your name.').max(NAME_MAX), email: emailSchema, password: passwordSchema });
 export type SignUpForm = z.infer<typeof signUpSchema>;
 
 export const signInSchema = z.object({ email: emailSchema, password: z.string().min(1, 'Enter your password.') });

@@ -5,6 +5,7 @@ import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 
 import { unsubscribeToken } from '@/server/emails/unsubscribe';
+import { authMatrix } from './auth-matrix';
 import { householdFixture, uniqueEmail, WREN_POWER } from './helpers';
 import { makeTestApp, TEST_ORIGIN } from './test-app';
 
@@ -256,6 +257,34 @@ const MATRIX: Record<string, Entry> = {
     expect: { ...all(403), anonymous: 401, admin: 204 },
   },
 };
+
+/** better-auth's admin and organization endpoints, as its server API lists them: "METHOD /path". */
+const authEndpoints = () =>
+  Object.values(ctx.auth.api as Record<string, { path?: string; options?: { method?: string | string[] } }>)
+    .filter((e) => e?.path && /^\/(admin|organization)\//.test(e.path))
+    .map((e) => `${[e.options?.method].flat().join('|')} ${e.path}`);
+
+describe('the access matrix of better-auth’s admin and organization endpoints', () => {
+  const auth = () => authMatrix({ householdId: fx.householdId, users: fx.users, pendingInvitation });
+
+  it('has an entry for every admin and organization endpoint better-auth serves', () => {
+    expect(authEndpoints().sort()).toEqual(Object.keys(auth()).sort());
+  });
+
+  it('answers each actor as the table says, and no entry changed anything', async () => {
+    const failures: string[] = [];
+    for (const [endpoint, entry] of Object.entries(auth())) {
+      for (const role of ROLES) {
+        const res = await entry.send(role === 'anonymous' ? request(ctx.app) : fx.agents[role]);
+        if (res.status !== entry.expect[role]) failures.push(`${endpoint} ${role}: ${res.status}, expected ${entry.expect[role]}`);
+      }
+    }
+    expect(failures).toEqual([]);
+    // The household is as it was: same people in the same roles.
+    const people = await ctx.db.selectFrom('member').select(['userId', 'role']).where('organizationId', '=', fx.householdId).orderBy('role').execute();
+    expect(people.map((p) => p.role)).toEqual(['advisor', 'member', 'owner']);
+  });
+});
 
 describe('the access matrix', () => {
   it('has an entry for every API route there is', () => {

@@ -47,7 +47,7 @@ describe('the Outlook over HTTP', () => {
     const first = await owner.get(`/api/rigs/${fx.rigId}/outlook`).expect(200);
     const tag = first.headers.etag as string;
     expect(tag).toMatch(/^"outlook-/);
-    expect(first.headers['cache-control']).toBe('private, no-cache');
+    expect(first.headers['cache-control']).toBe('no-store');
     const again = await owner.get(`/api/rigs/${fx.rigId}/outlook`).set('If-None-Match', tag).expect(304);
     expect(again.text ?? '').toBe('');
     const rig = (await owner.get(`/api/rigs/${fx.rigId}`)).body;

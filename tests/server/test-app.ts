@@ -21,6 +21,8 @@ export async function makeTestApp(env: Record<string, string> = {}, overrides: P
     SERVE_WEB: 'false',
     KEYOFF_URL: TEST_ORIGIN,
     SIGN_IN_LIMIT_PER_MINUTE: '10000',
+    INVITES_PER_INVITER_PER_HOUR: '10000',
+    INVITES_PER_HOUSEHOLD_PER_DAY: '10000',
     JOBS_SCHEMA: `pgboss_t${Math.random().toString(36).slice(2, 10)}`,
     RUN_WORKERS: 'false',
     JOB_POLL_SECONDS: '0.5',

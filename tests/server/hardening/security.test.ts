@@ -8,7 +8,8 @@ import { makeTestApp, TEST_ORIGIN } from '../test-app';
 
 let ctx: Awaited<ReturnType<typeof makeTestApp>>;
 beforeAll(async () => {
-  ctx = await makeTestApp();
+  // Workers on: the password reset e-mail goes out from the job queue.
+  ctx = await makeTestApp({ RUN_WORKERS: 'true' });
 });
 afterAll(async () => {
   await ctx.jobs.stop();
@@ -45,7 +46,7 @@ describe('security', () => {
 
     const tablet = await signIn(ctx.app, user.email, 'a-changed-password-1');
     await request(ctx.app).post('/api/auth/request-password-reset').set('Origin', TEST_ORIGIN).send({ email: user.email, redirectTo: `${TEST_ORIGIN}/reset-password` }).expect(200);
-    const link = linkIn(await latestMailTo(user.email, /Reset/));
+    const link = linkIn(await latestMailTo(user.email, /Reset/, 30_000));
     const token = new URL((await request(ctx.app).get(link.pathname + link.search).expect(302)).headers.location).searchParams.get('token');
     await request(ctx.app).post('/api/auth/reset-password').set('Origin', TEST_ORIGIN).send({ newPassword: 'a-reset-password-22', token }).expect(200);
     await tablet.post('/api/rigs').set('Origin', TEST_ORIGIN).send(newRig).expect(401);
