@@ -68,14 +68,13 @@ type Base = { parked: number | null; routine: number | null; balance: Balance };
 type Runs = { horizonHours: number; coverHours: number };
 
 export function findFixes(input: ProjectionInput, r: Resolved, demand: DemandProfile, base: Base, runs: Runs): Fix[] {
-  const { horizonHours, coverHours } = runs;
-  const horizonDays = horizonHours / 24;
+  const { coverHours } = runs;
   const coverDays = coverHours / 24;
   const fixes: Fix[] = [];
   const daysOf = (rc: Resolved) => {
-    const p = run(rc, demand, { withDriving: false, untilCutoff: true, hours: horizonHours });
+    const p = run(rc, demand, { withDriving: false, untilCutoff: true, hours: coverHours });
     const q = run(rc, demand, { withDriving: true, untilCutoff: true, hours: coverHours });
-    return { parked: toDays(p.hoursToCutoff, horizonHours), routine: toDays(q.hoursToCutoff, coverHours), lvdOpenHours: q.hoursToLvdOpen };
+    return { parked: toDays(p.hoursToCutoff, coverHours), routine: toDays(q.hoursToCutoff, coverHours), lvdOpenHours: q.hoursToLvdOpen };
   };
   const perWeek = (b: Balance) => (b.week.loadAh + b.week.inverterIdleAh + b.week.keyOffAh + b.week.selfDischargeAh) / 7;
   const baseUsed = perWeek(base.balance);
@@ -87,7 +86,7 @@ export function findFixes(input: ProjectionInput, r: Resolved, demand: DemandPro
     const rc = resolve(changed);
     const after = daysOf(rc);
     const balance = repeatingWeek(rc, demand, false);
-    const daysGainedParked = round((after.parked ?? horizonDays) - (base.parked ?? horizonDays), 2);
+    const daysGainedParked = round((after.parked ?? coverDays) - (base.parked ?? coverDays), 2);
     const daysGainedRoutine = round((after.routine ?? coverDays) - (base.routine ?? coverDays), 2);
     if (daysGainedParked <= 0.01 && daysGainedRoutine <= 0.01) return;
     const stops = draft.stops ? draft.stops(balance, after.lvdOpenHours) : null;

@@ -19,8 +19,8 @@ export type DaysFigure = { daysToCutoff: number | null; daysToFlat: number | nul
 export type BreakdownItem = { name: string; kind: 'load' | 'standby'; supply: 'dc' | 'ac' | null; ahPerDay: number; share: number };
 
 export type Projection = {
+  /** Days are counted over the run that covers the planned stay (the horizon, or longer: margin.coveredDays). */
   parked: DaysFigure;
-  /** The routine's days are counted over the run that covers the planned stay (see margin.coveredDays). */
   routine: DaysFigure & { holds: boolean };
   /** Per day of the routine's repeating week. */
   daily: { consumptionAh: number; chargeAh: number; netAh: number; offeredAh: number; notStoredAh: number };
@@ -78,13 +78,13 @@ export function project(input: ProjectionInput, options: { fixes?: boolean; subs
   const cover = coverHoursOf(input);
   const substeps = options.substeps;
 
-  const parkedRun = run(r, demand, { withDriving: false, record: true, substeps });
+  const parkedRun = run(r, demand, { withDriving: false, record: true, hours: cover, substeps });
   const routineRun = run(r, demand, { withDriving: true, record: true, hours: cover, substeps });
   const balance = repeatingWeek(r, demand, true, substeps);
   const week = balance.week;
   const perDay = 24 / week.hours;
 
-  const parked = { daysToCutoff: toDays(parkedRun.hoursToCutoff, horizon), daysToFlat: toDays(parkedRun.hoursToFlat, horizon) };
+  const parked = { daysToCutoff: toDays(parkedRun.hoursToCutoff, cover), daysToFlat: toDays(parkedRun.hoursToFlat, cover) };
   const usedAh = week.loadAh + week.inverterIdleAh + week.keyOffAh + week.selfDischargeAh;
   const consumptionAh = usedAh * perDay;
   const chargeAh = week.chargeAh * perDay;
