@@ -406,6 +406,21 @@ export function run(r: Resolved, demand: DemandProfile, opts: RunOptions): RunRe
               lvdOpens = true;
             }
           }
+        } else if (isLvd && !lvdOn && net < 0 && (!frozen || (heats && warmH >= warmupH))) {
+          // An open disconnect closes the moment the charge reaches its reconnect level: split there
+          // (found by bisection on the closed-form charge, which rises with time).
+          const reconnectAh = (lvdReconnectSoc / 100) * full;
+          const at = (x: number) => chargeFor(ah, -net, x, efficiency, bulkA, floorA, tsAh, full) - selfA * x;
+          if (ah < reconnectAh && at(dt) >= reconnectAh) {
+            let lo = 0;
+            let hi = dt;
+            for (let i = 0; i < 40; i++) {
+              const mid = (lo + hi) / 2;
+              if (at(mid) >= reconnectAh) hi = mid;
+              else lo = mid;
+            }
+            dt = hi;
+          }
         } else if (heats && warmH < warmupH) {
           // A self-heating battery warms itself from the surplus first, and takes no charge meanwhile.
           if (dt > warmupH - warmH) dt = warmupH - warmH;
