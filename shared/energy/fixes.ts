@@ -2,7 +2,7 @@ import type { ProjectionInput } from '../schemas/projection';
 import { MODEL_DEFAULTS } from './defaults';
 import type { DemandProfile } from './profile';
 import type { Balance, Resolved } from './simulate';
-import { repeatingWeek, resolve, round, run } from './simulate';
+import { repeatingWeek, resolve, round, routineHolds, run } from './simulate';
 
 export type FixKind = 'cutoff-switch' | 'ignition-relay' | 'low-voltage-disconnect' | 'more-driving' | 'more-battery' | 'house-battery' | 'solar';
 
@@ -162,7 +162,7 @@ export function findFixes(input: ProjectionInput, r: Resolved, demand: DemandPro
     );
   }
 
-  const holdsWith = (changed: ProjectionInput) => repeatingWeek(resolve(changed), demand, false).holds;
+  const holdsWith = (changed: ProjectionInput) => routineHolds(resolve(changed), demand);
   if (!base.balance.holds && r.alternatorA > 0) {
     const withMinutes = (m: number): ProjectionInput => ({
       ...input,

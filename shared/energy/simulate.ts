@@ -526,6 +526,15 @@ export type Balance = {
  * the same amount), or the longest run is used up. The week returned is the last one run.
  */
 export function repeatingWeek(r: Resolved, demand: DemandProfile, perLoad: boolean, substeps?: number): Balance {
+  return weeksFromFull(r, demand, { perLoad, substeps, track: true }) as Balance;
+}
+
+/** Whether the routine's repeating week holds (as repeatingWeek, without the week's totals: for the Fixes' searches). */
+export function routineHolds(r: Resolved, demand: DemandProfile): boolean {
+  return weeksFromFull(r, demand, { perLoad: false, track: false }).holds;
+}
+
+function weeksFromFull(r: Resolved, demand: DemandProfile, o: { perLoad: boolean; substeps?: number; track: boolean }): { holds: boolean; week: RunTotals | null; weeks: number } {
   const full = r.usableAh;
   const tol = MODEL_DEFAULTS.holdsTolerance * full;
   const maxWeeks = Math.ceil((MODEL_DEFAULTS.maxRunDays * 24) / HOURS_PER_WEEK);
@@ -534,8 +543,18 @@ export function repeatingWeek(r: Resolved, demand: DemandProfile, perLoad: boole
   let x = full;
   let lvdOn = true;
   for (let w = 1; ; w++) {
-    const res = run(r, demand, { withDriving: true, trackWeek: true, perLoad, hours: HOURS_PER_WEEK, startAh: x, startHow: 0, lvdOn, substeps });
-    const week = res.week!;
+    const res = run(r, demand, {
+      withDriving: true,
+      trackWeek: o.track,
+      perLoad: o.perLoad,
+      untilCutoff: !o.track,
+      hours: HOURS_PER_WEEK,
+      startAh: x,
+      startHow: 0,
+      lvdOn,
+      substeps: o.substeps,
+    });
+    const week = res.week;
     if (res.hoursToCutoff !== null) return { holds: false, week, weeks: w };
     if (res.endAh >= x - tol) return { holds: true, week, weeks: w };
     // Below the taper the week's charge does not depend on the level: it falls as much every week.
