@@ -193,6 +193,23 @@ export function chargeFor(ah: number, S: number, dt: number, e: number, bulkA: n
 }
 
 /**
+ * How long (at most dt) charging from ah at a surplus S takes to reach target, self-discharge included:
+ * bisection on the closed-form charge, which rises with time. A module-level function so that the hot
+ * loop's variables stay off the heap (a closure there would capture them).
+ */
+function timeToReach(target: number, ah: number, S: number, dt: number, e: number, bulkA: number, floorA: number, tsAh: number, full: number, selfA: number): number {
+  if (chargeFor(ah, S, dt, e, bulkA, floorA, tsAh, full) - selfA * dt < target) return dt;
+  let lo = 0;
+  let hi = dt;
+  for (let i = 0; i < 40; i++) {
+    const mid = (lo + hi) / 2;
+    if (chargeFor(ah, S, mid, e, bulkA, floorA, tsAh, full) - selfA * mid >= target) hi = mid;
+    else lo = mid;
+  }
+  return hi;
+}
+
+/**
  * Per hour: the charge at its end (Ah), and 1 where the inverter was on (else 0). The state of charge,
  * the net change and the minutes driven follow from these and the input (see seriesOf in project.ts).
  */
@@ -410,17 +427,7 @@ export function run(r: Resolved, demand: DemandProfile, opts: RunOptions): RunRe
           // An open disconnect closes the moment the charge reaches its reconnect level: split there
           // (found by bisection on the closed-form charge, which rises with time).
           const reconnectAh = (lvdReconnectSoc / 100) * full;
-          const at = (x: number) => chargeFor(ah, -net, x, efficiency, bulkA, floorA, tsAh, full) - selfA * x;
-          if (ah < reconnectAh && at(dt) >= reconnectAh) {
-            let lo = 0;
-            let hi = dt;
-            for (let i = 0; i < 40; i++) {
-              const mid = (lo + hi) / 2;
-              if (at(mid) >= reconnectAh) hi = mid;
-              else lo = mid;
-            }
-            dt = hi;
-          }
+          if (ah < reconnectAh) dt = timeToReach(reconnectAh, ah, -net, dt, efficiency, bulkA, floorA, tsAh, full, selfA);
         } else if (heats && warmH < warmupH) {
           // A self-heating battery warms itself from the surplus first, and takes no charge meanwhile.
           if (dt > warmupH - warmH) dt = warmupH - warmH;
