@@ -1,8 +1,9 @@
 import type { ProjectionInput } from '../schemas/projection';
 import { MODEL_DEFAULTS } from './defaults';
 import type { DemandProfile } from './profile';
-import type { Balance, Resolved } from './simulate';
-import { repeatingWeek, resolve, round, routineHolds, run } from './simulate';
+import { type Balance, repeatingWeek, routineHolds } from './repeating-week';
+import { resolve, type Resolved } from './resolve';
+import { round, run } from './simulate';
 
 export type FixKind = 'cutoff-switch' | 'ignition-relay' | 'low-voltage-disconnect' | 'more-driving' | 'more-battery' | 'house-battery' | 'solar';
 

@@ -2,7 +2,9 @@ import type { CompareInput, Load, ProjectionInput } from '../schemas/projection'
 import { MODEL_DEFAULTS } from './defaults';
 import { type Fix, findFixes, toDays } from './fixes';
 import { buildDemandProfile, type DemandProfile, HOURS_PER_WEEK as WEEK } from './profile';
-import { type Balance, repeatingWeek, resolve, type Resolved, round as roundTo, run, type Trace } from './simulate';
+import { type Balance, repeatingWeek } from './repeating-week';
+import { resolve, type Resolved } from './resolve';
+import { round as roundTo, run, type Trace } from './simulate';
 import { collectWarnings, type Warning } from './warnings';
 
 export type { Fix, FixKind, FixStops } from './fixes';

@@ -2,7 +2,8 @@ import type { ProjectionInput } from '../schemas/projection';
 import { LEAD_ACID_FREEZING_CURVE, MODEL_DEFAULTS, temperatureFactor } from './defaults';
 import { listNames } from './fixes';
 import type { DemandProfile } from './profile';
-import { type Resolved, round } from './simulate';
+import type { Resolved } from './resolve';
+import { round } from './simulate';
 
 /** A warning: its code, its message, and the figures in the message (for texts that follow the unit setting). */
 export type Warning = { code: string; message: string; figures?: Record<string, number | string | null> };
