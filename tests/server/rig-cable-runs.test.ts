@@ -77,7 +77,8 @@ describe('saved cable runs on a rig', () => {
   });
 
   it("does not size an AC load's own circuit: it is mains wiring", async () => {
-    const ac = (await fx.agents.owner.post(`/api/rigs/${fx.rigId}/loads`).set('Origin', TEST_ORIGIN).send({ name: 'Laptop', supply: 'ac', watts: 60, hoursPerDay: 2 }).expect(201)).body;
+    const ac = (await fx.agents.owner.post(`/api/rigs/${fx.rigId}/loads`).set('Origin', TEST_ORIGIN).send({ name: 'Laptop', supply: 'ac', watts: 60, hoursPerDay: 2, essential: true }).expect(201)).body;
+    expect(ac.essential).toBe(true); // stored with the load (loads.essential)
     const res = await fx.agents.owner.post(base()).set('Origin', TEST_ORIGIN).send({ label: 'Laptop socket', lengthM: 2, loadId: ac.id, maxDropPercent: 3, insulationC: 105 }).expect(201);
     expect(res.body.sizing).toBeNull();
     expect(res.body.warnings[0]).toMatch(/mains wiring/);
