@@ -71,6 +71,7 @@ export interface LoadTable {
   when: 'always' | 'parked' | 'driving';
   status: 'installed' | 'candidate';
   quantity: number;
+  essential: Generated<boolean>;
   position: number;
   created_at: Timestamp;
   updated_at: Timestamp;
@@ -94,6 +95,8 @@ export interface CableRunTable {
   purpose: 'general' | 'inverter';
   existing_awg: string | null;
   existing_mm2: number | null;
+  /** The run feeds the rig's inverter: sized from its rating. */
+  inverter_link: Generated<boolean>;
   created_at: Timestamp;
   updated_at: Timestamp;
 }

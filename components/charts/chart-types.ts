@@ -1,6 +1,7 @@
 import type { Projection } from '@/shared/energy/project';
 
-export type SocChartProps = { series: Projection['series']; cutoffSocPercent: number };
+/** startSocPercent: the first point, the charge the projection starts from. */
+export type SocChartProps = { series: Projection['series']; cutoffSocPercent: number; startSocPercent?: number };
 /** A moment of the record (ms since 1970): the readings' state of charge where known, the model's, and the voltage. */
 export type ReadingsChartPoint = { t: number; soc: number | null; model: number | null; voltage: number | null };
 /** Two charts over the same dates: state of charge (measured and modelled) above, voltage below. */

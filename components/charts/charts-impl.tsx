@@ -11,9 +11,10 @@ import { dateLabel, midnightTicks } from './date-axis';
 
 const font = require('@expo-google-fonts/nunito/400Regular/Nunito_400Regular.ttf');
 
-function SocChartImpl({ series, cutoffSocPercent }: SocChartProps) {
+function SocChartImpl({ series, cutoffSocPercent, startSocPercent }: SocChartProps) {
   const axisFont = useFont(font, 12);
-  const data = [{ hour: 0, soc: series[0]?.socPercent ?? 100, parked: series[0]?.parkedSocPercent ?? 100, driving: 0 }, ...series.map((s) => ({ hour: s.hour, soc: s.socPercent, parked: s.parkedSocPercent, driving: s.drivingMinutes }))];
+  const first = startSocPercent ?? series[0]?.socPercent ?? 100;
+  const data = [{ hour: 0, soc: first, parked: startSocPercent ?? series[0]?.parkedSocPercent ?? 100, driving: 0 }, ...series.map((s) => ({ hour: s.hour, soc: s.socPercent, parked: s.parkedSocPercent, driving: s.drivingMinutes }))];
   return (
     <CartesianChart
       data={data}

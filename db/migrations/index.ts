@@ -6,6 +6,7 @@ import * as m003 from './2026-12-01-003-notes';
 import * as m004 from './2026-12-01-004-history-mail';
 import * as m005 from './2026-12-01-005-readings';
 import * as m015 from './2026-12-02-015-invitation-sends';
+import * as m016 from './2026-12-02-016-essential-inverter-link';
 
 // A static provider: file discovery fails under vitest, an explicit list works everywhere.
 export const migrations: Record<string, Migration> = {
@@ -15,4 +16,5 @@ export const migrations: Record<string, Migration> = {
   '2026-12-01-004-history-mail': m004,
   '2026-12-01-005-readings': m005,
   '2026-12-02-015-invitation-sends': m015,
+  '2026-12-02-016-essential-inverter-link': m016,
 };

@@ -1,5 +1,5 @@
 import type { Db } from '@/db/client';
-import { type FixKind, project } from '@/shared/energy/project';
+import { type Fix, type FixKind, fixGainText, project } from '@/shared/energy/project';
 import { rigPowerSchema } from '@/shared/schemas/projection';
 import { loadsOfRigs } from '../repositories/rigs';
 import { loadFromRow, modelInput } from '../services/rigs-model';
@@ -18,8 +18,8 @@ export type RigFigures = {
   horizonDays: number;
   standbySharePercent: number;
   drains: { name: string; kind: 'load' | 'standby'; ahPerDay: number; sharePercent: number }[];
-  fixes: { kind: FixKind; summary: string; daysGainedParked: number; daysGainedRoutine: number }[];
-  /** The first week's state of charge, hour by hour, for the small chart. */
+  fixes: ({ kind: FixKind; summary: string; gain: string } & Pick<Fix, 'daysGainedParked' | 'daysGainedRoutine' | 'outlastsHorizon' | 'holds' | 'cutsEssential'>)[];
+  /** The first week's state of charge, hour by hour from the starting charge, for the small chart. */
   weekSocPercent: number[];
   cutoffSocPercent: number;
   /** Hour of the week (Monday 00:00 = 0) of the chart's first point. */
@@ -45,10 +45,20 @@ export function figuresOf(rig: RigRow, loads: ReturnType<typeof loadFromRow>[]):
     horizonDays: p.horizonDays,
     standbySharePercent: Math.round(p.breakdown.filter((b) => b.kind === 'standby').reduce((s, b) => s + b.share, 0) * 100),
     drains: p.breakdown.slice(0, 4).map((b) => ({ name: b.name, kind: b.kind, ahPerDay: b.ahPerDay, sharePercent: Math.round(b.share * 100) })),
-    fixes: p.fixes.slice(0, 3).map((f) => ({ kind: f.kind, summary: f.summary, daysGainedParked: f.daysGainedParked, daysGainedRoutine: f.daysGainedRoutine })),
-    weekSocPercent: p.series.slice(0, 169).map((s) => round1(s.socPercent)),
+    fixes: p.fixes.slice(0, 3).map((f) => ({
+      kind: f.kind,
+      summary: f.summary,
+      gain: fixGainText(f),
+      daysGainedParked: f.daysGainedParked,
+      daysGainedRoutine: f.daysGainedRoutine,
+      outlastsHorizon: f.outlastsHorizon,
+      holds: f.holds,
+      cutsEssential: f.cutsEssential,
+    })),
+    // The first point is the starting charge, then one an hour.
+    weekSocPercent: [round1(p.start.socPercent), ...p.series.slice(0, 168).map((s) => round1(s.socPercent))],
     cutoffSocPercent: p.cutoffSocPercent,
-    chartStartHourOfWeek: p.series.length ? p.series[0].weekday * 24 + p.series[0].hourOfDay : power.start.weekday * 24 + power.start.hour,
+    chartStartHourOfWeek: p.start.weekday * 24 + p.start.hourOfDay,
   };
 }
 

@@ -55,7 +55,7 @@ export async function checkMargin(deps: JobDeps, rigId: string) {
         ],
         sections: [
           { heading: 'What changed', lines: what },
-          ...(top ? [{ heading: 'The top Fix', lines: [`${top.summary} (+${top.daysGainedRoutine.toFixed(1)} days on your routine, +${top.daysGainedParked.toFixed(1)} parked)`], caution: needsWiringCaution([top]) ? FIX_WIRING_CAUTION : undefined }] : []),
+          ...(top ? [{ heading: 'The top Fix', lines: [`${top.summary} (${top.gain})`], caution: needsWiringCaution([top]) ? FIX_WIRING_CAUTION : undefined }] : []),
         ],
         action: { label: 'See the Fixes', url: `${deps.config.KEYOFF_URL}/rigs/${rigId}` },
         footer: footerFor(deps.config, person.id, 'warnings'),

@@ -79,7 +79,7 @@ export async function sendReport(deps: JobDeps, job: ReportJob) {
           lines: [`Standby (inverter idle, key-off draw, self-discharge) is ${f.standbySharePercent} % of what the rig uses.`],
         },
         ...(f.fixes.length
-          ? [{ heading: 'Top Fixes', lines: f.fixes.map((x) => `${x.summary} (+${x.daysGainedRoutine.toFixed(1)} days on your routine, +${x.daysGainedParked.toFixed(1)} parked)`), caution: needsWiringCaution(f.fixes) ? FIX_WIRING_CAUTION : undefined }]
+          ? [{ heading: 'Top Fixes', lines: f.fixes.map((x) => `${x.summary} (${x.gain})`), caution: needsWiringCaution(f.fixes) ? FIX_WIRING_CAUTION : undefined }]
           : []),
         ...(notes.length ? [{ heading: 'Open notes from your advisor', lines: notes.map((n) => `${n.author ?? 'Advisor'}: ${n.body.length > 160 ? `${n.body.slice(0, 157)}…` : n.body}`) }] : []),
       ],

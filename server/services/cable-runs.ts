@@ -2,7 +2,7 @@ import type { Db } from '@/db/client';
 import type { CableRunTable } from '@/db/schema';
 import type { Selectable } from 'kysely';
 import { loadRunningCurrentA } from '@/shared/energy/profile';
-import { AWG_SIZES, type Awg, MM2_SIZES, NoConductorError, sizeCableRun } from '@/shared/energy/wiring';
+import { AWG_SIZES, type Awg, inverterFeedCurrentA, MM2_SIZES, NoConductorError, sizeCableRun } from '@/shared/energy/wiring';
 import type { CableRunInput } from '@/shared/schemas/cable-run';
 import { cableRunSizeSchema } from '@/shared/schemas/cable-run';
 import { HttpError } from '../errors';
@@ -20,6 +20,7 @@ function toRow(run: CableRunInput) {
     length_m: run.lengthM,
     current_a: run.currentA ?? null,
     load_id: run.loadId ?? null,
+    inverter_link: run.inverterLink,
     max_drop_percent: run.maxDropPercent,
     insulation_c: run.insulationC,
     engine_space: run.engineSpace,
@@ -34,15 +35,23 @@ function toRow(run: CableRunInput) {
 /** Every saved run of a rig with its size, drop and protection, and a warning where the fitted wire is too small. */
 export async function cableRunsOf(db: Db, rig: RigAccess) {
   const dto = await readRig(db, rig);
-  const V = dto.power.systemVoltage;
-  const eff = (dto.power.inverter?.efficiencyPercent ?? 90) / 100;
   const rows = await listCableRuns(db, rig.id);
-  return rows.map((row) => describe(row, V, eff, dto.loads));
+  return rows.map((row) => describe(row, dto.power, dto.loads));
 }
 
-function describe(row: Row, V: number, eff: number, loads: Awaited<ReturnType<typeof readRig>>['loads']) {
+/** The AC side of an inverter is mains wiring: these 12 V tables do not size it. */
+export const MAINS_WIRING_WARNING =
+  "This load runs on the inverter's AC output: its circuit is mains wiring, outside these 12 V tables. Have it wired to local code by a qualified electrician, and size the inverter's own feed instead (link a run to the inverter).";
+
+type Power = Awaited<ReturnType<typeof readRig>>['power'];
+
+function describe(row: Row, power: Power, loads: Awaited<ReturnType<typeof readRig>>['loads']) {
+  const V = power.systemVoltage;
+  const inverter = power.inverter;
+  const eff = (inverter?.efficiencyPercent ?? 90) / 100;
   const load = row.load_id ? loads.find((l) => l.id === row.load_id) : undefined;
-  const currentA = row.current_a ?? (load ? loadRunningCurrentA(load, V, eff) : 0);
+  const fromInverter = row.current_a === null && row.inverter_link;
+  const currentA = row.current_a ?? (fromInverter ? (inverter ? inverterFeedCurrentA(inverter.ratedW, V, inverter.efficiencyPercent) : 0) : load ? loadRunningCurrentA(load, V, eff) : 0);
   const base = {
     id: row.id,
     label: row.label,
@@ -50,8 +59,9 @@ function describe(row: Row, V: number, eff: number, loads: Awaited<ReturnType<ty
     to: row.to_point,
     lengthM: row.length_m,
     currentA: Math.round(currentA * 100) / 100,
-    currentFrom: row.current_a !== null ? ('entered' as const) : load ? ('load' as const) : ('missing' as const),
+    currentFrom: row.current_a !== null ? ('entered' as const) : fromInverter ? ('inverter' as const) : load ? ('load' as const) : ('missing' as const),
     loadId: row.load_id,
+    inverterLink: row.inverter_link,
     loadName: load?.name ?? null,
     maxDropPercent: row.max_drop_percent,
     insulationC: row.insulation_c,
@@ -62,17 +72,19 @@ function describe(row: Row, V: number, eff: number, loads: Awaited<ReturnType<ty
     existingAwg: row.existing_awg,
     existingMm2: row.existing_mm2,
   };
+  if (fromInverter && !inverter) return { ...base, sizing: null, warnings: ['The rig has no inverter: add one on the Power screen, or give the run its current.'] };
+  if (!fromInverter && row.current_a === null && load?.supply === 'ac') return { ...base, sizing: null, warnings: [MAINS_WIRING_WARNING] };
   if (currentA <= 0) return { ...base, sizing: null, warnings: ['The linked load was deleted: give the run its current.'] };
   const input = cableRunSizeSchema.parse({
     systemVoltage: V,
-    currentA,
+    ...(fromInverter ? { inverterW: inverter!.ratedW, inverterEfficiencyPercent: inverter!.efficiencyPercent } : { currentA }),
     lengthM: row.length_m,
     maxDropPercent: row.max_drop_percent,
     insulationC: row.insulation_c,
     engineSpace: row.engine_space,
     returnPath: row.return_path,
     continuous: row.continuous,
-    purpose: row.purpose,
+    purpose: fromInverter ? 'inverter' : row.purpose,
   });
   try {
     const sizing = sizeCableRun(input);

@@ -16,6 +16,7 @@ export function loadFromRow(row: LoadRow & { added_by_name?: string | null }): S
     when: row.when,
     status: row.status,
     quantity: row.quantity,
+    ...(row.essential ? { essential: true } : {}),
     addedBy: row.added_by ? { id: row.added_by, name: row.added_by_name ?? '' } : null,
   };
 }
@@ -33,6 +34,7 @@ export function loadToRow(load: Load, position: number, addedBy: string | null) 
     when: load.when,
     status: load.status,
     quantity: load.quantity,
+    essential: load.essential ?? false,
     position,
     added_by: addedBy,
   };

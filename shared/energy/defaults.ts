@@ -18,7 +18,12 @@ export type ChemistryDefaults = {
 };
 
 // US Army TM 10-6140-200-14, 1-9a: about 75 % of capacity at 0 °C and 40 % at -18 °C (lead-acid).
+// Below -18 °C the curve keeps falling, in proportion to the cranking power of TM 5-4210-230-14&P-1
+// Table 3 (40 % at -18 °C, 20 % at -29 °C): 0.2 at -29 °C (model choice), and 0.05 at -40 °C, the floor
+// (model choice: the -18 to -29 °C slope reaches 0 near -40 °C).
 const LEAD_ACID_TEMPERATURE = [
+  [-40, 0.05],
+  [-29, 0.2],
   [-18, 0.4],
   [0, 0.75],
   [25, 1],
@@ -92,13 +97,57 @@ export const MODEL_DEFAULTS = {
   fixPeakSunHours: 4,
   /** DC-DC chargers hold their current until nearly full (common practice). */
   dcdcTaperStartSoc: 95,
+  /**
+   * A voltage-sensitive relay joins at about 13.7 V and drops out below about 12.8 V (REFERENCES.md, common
+   * practice): it joins once the alternator has lifted the starting battery to 13.7 V, a few minutes into
+   * each drive (from memory), and drops out when the engine stops.
+   */
+  relayJoinMinutes: 5,
+  /** A self-heating LiFePO4 battery's heater: about 50 W for about an hour from a charging source (from memory). */
+  heaterW: 50,
+  heaterWarmupMinutes: 60,
+  /** Small 12 V inverters cut out at about 10.5 V input (common practice); scaled for 24 V and 48 V systems. */
+  inverterCutoutVPer12V: 10.5,
+  /** "Holds": the state at the same hour a week later falls by less than this share of the usable capacity (model choice). */
+  holdsTolerance: 1e-4,
+  /** Longest run, in days, for the planned stay and for the week's balance (the horizon's cap). */
+  maxRunDays: 60,
   /** Margin states: short below 0 days; tight below max(1 day, 25 % of the stay) (model choice). */
   tightMarginMinDays: 1,
   tightMarginShareOfStay: 0.25,
 } as const;
 
+/** Cranking power by temperature, as [°C, share of its 27 °C value] (US Army TM 5-4210-230-14&P-1 Table 3). */
+export const CRANKING_POWER_CURVE = [
+  [-29, 0.2],
+  [-18, 0.4],
+  [0, 0.65],
+  [27, 1],
+] as const;
+
+/**
+ * A starting battery's cut-off (its cranking reserve) at a temperature: the depth it may be drawn below
+ * full shrinks with the cranking power, so the reserve rises in the cold (model choice on TM 5-4210-230-14&P-1
+ * Table 3): cut-off = 100 − (100 − warm cut-off) × cranking power. 75 % at 27 °C is 83.75 % at 0 °C, 90 % at -18 °C.
+ */
+export function starterCutoffSoc(warmCutoffSoc: number, temperatureC: number): number {
+  return 100 - (100 - warmCutoffSoc) * temperatureFactor(CRANKING_POWER_CURVE, temperatureC);
+}
+
+/**
+ * Freezing point of a lead-acid battery's electrolyte by state of charge, as [% charged, °C]: about -8 °C
+ * flat and -60 °C full (REFERENCES.md, from memory); the points between are from memory too.
+ */
+export const LEAD_ACID_FREEZING_CURVE = [
+  [0, -8],
+  [25, -16],
+  [50, -24],
+  [75, -37],
+  [100, -60],
+] as const;
+
 /** Capacity factor at a temperature: linear between the curve's points, flat beyond its ends. */
-export function temperatureFactor(curve: ChemistryDefaults['temperatureCurve'], temperatureC: number): number {
+export function temperatureFactor(curve: readonly (readonly [number, number])[], temperatureC: number): number {
   const first = curve[0];
   const last = curve[curve.length - 1];
   if (temperatureC <= first[0]) return first[1];

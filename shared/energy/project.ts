@@ -1,38 +1,39 @@
 import type { CompareInput, Load, ProjectionInput } from '../schemas/projection';
 import { MODEL_DEFAULTS } from './defaults';
+import { type Fix, findFixes, toDays } from './fixes';
 import { buildDemandProfile, type DemandProfile, HOURS_PER_WEEK as WEEK } from './profile';
-import { resolve, type Resolved, round as roundTo, run, type RunTotals, type Trace } from './simulate';
+import { type Balance, repeatingWeek } from './repeating-week';
+import { resolve, type Resolved } from './resolve';
+import { round as roundTo, run, type Trace } from './simulate';
+import { collectWarnings, type Warning } from './warnings';
+
+export type { Fix, FixKind, FixStops } from './fixes';
+export { fixGainText } from './fixes';
+export type { Warning } from './warnings';
 
 // Module-level copies: imported bindings are getters once compiled, too slow for the series loop.
 const HOURS_PER_WEEK = WEEK;
 const round = roundTo;
 
 export type MarginState = 'comfortable' | 'tight' | 'short';
-export type FixKind = 'cutoff-switch' | 'ignition-relay' | 'low-voltage-disconnect' | 'more-driving' | 'more-battery' | 'solar';
 
 export type DaysFigure = { daysToCutoff: number | null; daysToFlat: number | null };
-export type Warning = { code: string; message: string };
-export type Fix = {
-  kind: FixKind;
-  daysGainedParked: number;
-  daysGainedRoutine: number;
-  ahPerDaySaved: number;
-  summary: string;
-  convenience: string;
-  /** The change the Fix makes, for the form that applies it. */
-  change: Record<string, unknown>;
-  /** True when, with the Fix, the routine no longer reaches the cut-off within the horizon. */
-  holds: boolean;
-};
 export type BreakdownItem = { name: string; kind: 'load' | 'standby'; supply: 'dc' | 'ac' | null; ahPerDay: number; share: number };
 
 export type Projection = {
+  /** Days are counted over the run that covers the planned stay (the horizon, or longer: margin.coveredDays). */
   parked: DaysFigure;
   routine: DaysFigure & { holds: boolean };
-  daily: { consumptionAh: number; chargeAh: number; netAh: number };
+  /** Per day of the routine's repeating week. */
+  daily: { consumptionAh: number; chargeAh: number; netAh: number; offeredAh: number; notStoredAh: number };
+  /** The repeating week's balance: used, put back, and offered by the sources but not stored. */
+  balance: { holds: boolean; usedAh: number; putBackAh: number; offeredAh: number; notStoredAh: number; heatingAh: number; weeksRun: number };
   standby: { inverterIdleAh: number; keyOffAh: number; selfDischargeAh: number };
   breakdown: BreakdownItem[];
-  margin: { days: number | null; state: MarginState; plannedStayDays: number };
+  /** days: to the cut-off on the routine minus the stay; atLeastDays where the cut-off lies beyond the run. */
+  margin: { days: number | null; atLeastDays: number | null; state: MarginState; plannedStayDays: number; coveredDays: number };
+  /** The chart's first point: the state of charge the projection starts from. */
+  start: { socPercent: number; weekday: number; hourOfDay: number };
   series: {
     hour: number;
     weekday: number;
@@ -46,13 +47,10 @@ export type Projection = {
   }[];
   warnings: Warning[];
   fixes: Fix[];
-  assumptions: Record<string, number | string | null>;
+  assumptions: Record<string, number | string | boolean | null>;
   horizonDays: number;
   cutoffSocPercent: number;
 };
-
-const toDays = (hours: number | null, horizonHours: number) =>
-  hours === null || hours > horizonHours + 1e-9 ? null : round(hours / 24, 2);
 
 export function marginState(days: number | null, plannedStayDays: number): MarginState {
   if (days === null) return 'comfortable';
@@ -61,73 +59,86 @@ export function marginState(days: number | null, plannedStayDays: number): Margi
   return days < tight ? 'tight' : 'comfortable';
 }
 
+/** Hours the routine is run: the horizon, or far enough to see the stay and its tight margin (up to 60 days). */
+export function coverHoursOf(input: ProjectionInput): number {
+  const stay = input.plannedStayDays;
+  const tight = Math.max(MODEL_DEFAULTS.tightMarginMinDays, MODEL_DEFAULTS.tightMarginShareOfStay * stay);
+  const days = Math.min(MODEL_DEFAULTS.maxRunDays, Math.max(input.horizonDays, Math.ceil(stay + tight + 1)));
+  return days * 24;
+}
+
 function installedLoads(loads: Load[]) {
   return loads.filter((l) => l.status === 'installed');
 }
 
-/** Days to cut-off on the routine alone (for the Fixes' searches). */
-function routineDays(r: Resolved, demand: DemandProfile) {
-  return toDays(run(r, demand, { withDriving: true, untilCutoff: true }).hoursToCutoff, r.horizonHours);
-}
-
-/** The figures Fixes compare: days to cut-off parked and on the routine. */
-function quickDays(r: Resolved, demand: DemandProfile) {
-  const p = run(r, demand, { withDriving: false, untilCutoff: true });
-  const q = run(r, demand, { withDriving: true, untilCutoff: true });
-  return { parked: toDays(p.hoursToCutoff, r.horizonHours), routine: toDays(q.hoursToCutoff, r.horizonHours) };
-}
-
 /** The model's full answer for a rig: candidate loads are left out (see compare for Try a load). */
-export function project(input: ProjectionInput, options: { fixes?: boolean } = {}): Projection {
+export function project(input: ProjectionInput, options: { fixes?: boolean; substeps?: number } = {}): Projection {
   const loads = installedLoads(input.loads);
   const r = resolve(input);
-  const demand = buildDemandProfile(loads, r.systemVoltage, r.inverter?.efficiency ?? 1, r.inverter?.idleA ?? 0);
+  const demand = buildDemandProfile(loads, r.systemVoltage, r.inverter?.efficiency ?? 1);
   const horizon = r.horizonHours;
+  const cover = coverHoursOf(input);
+  const substeps = options.substeps;
 
-  const parkedRun = run(r, demand, { withDriving: false, record: true });
-  const weekHours = Math.max(horizon, HOURS_PER_WEEK);
-  const routineRun = run(r, demand, { withDriving: true, record: true, trackWeek: true, hours: weekHours });
-  const week = routineRun.week!;
+  const parkedRun = run(r, demand, { withDriving: false, record: true, hours: cover, substeps });
+  const routineRun = run(r, demand, { withDriving: true, record: true, hours: cover, substeps });
+  const balance = repeatingWeek(r, demand, true, substeps);
+  const week = balance.week;
   const perDay = 24 / week.hours;
 
-  const parked = { daysToCutoff: toDays(parkedRun.hoursToCutoff, horizon), daysToFlat: toDays(parkedRun.hoursToFlat, horizon) };
-  const consumptionAh = (week.loadAh + week.inverterIdleAh + week.keyOffAh + week.selfDischargeAh) * perDay;
+  const parked = { daysToCutoff: toDays(parkedRun.hoursToCutoff, cover), daysToFlat: toDays(parkedRun.hoursToFlat, cover) };
+  const usedAh = week.loadAh + week.inverterIdleAh + week.keyOffAh + week.selfDischargeAh;
+  const consumptionAh = usedAh * perDay;
   const chargeAh = week.chargeAh * perDay;
-  const daily = { consumptionAh: round(consumptionAh, 2), chargeAh: round(chargeAh, 2), netAh: round(chargeAh - consumptionAh, 2) };
-  const routineCut = toDays(routineRun.hoursToCutoff, horizon);
-  const routine = {
-    daysToCutoff: routineCut,
-    daysToFlat: toDays(routineRun.hoursToFlat, horizon),
-    holds: routineCut === null && daily.netAh >= 0,
+  const daily = {
+    consumptionAh: round(consumptionAh, 2),
+    chargeAh: round(chargeAh, 2),
+    netAh: round(chargeAh - consumptionAh, 2),
+    offeredAh: round(week.offeredAh * perDay, 2),
+    notStoredAh: round((week.offeredAh - week.chargeAh) * perDay, 2),
   };
+  const routineCut = toDays(routineRun.hoursToCutoff, cover);
+  const routine = { daysToCutoff: routineCut, daysToFlat: toDays(routineRun.hoursToFlat, cover), holds: balance.holds };
   const standby = {
     inverterIdleAh: round(week.inverterIdleAh * perDay, 2),
     keyOffAh: round(week.keyOffAh * perDay, 2),
     selfDischargeAh: round(week.selfDischargeAh * perDay, 2),
   };
 
-  const breakdown = breakdownOf(r, demand, week, perDay);
-
-  const marginDays = routineCut === null ? null : round(routineCut - input.plannedStayDays, 2);
-  const margin = { days: marginDays, state: marginState(marginDays, input.plannedStayDays), plannedStayDays: input.plannedStayDays };
-
+  const breakdown = breakdownOf(r, demand, balance, perDay);
+  const margin = marginOf(input, routineCut, balance.holds, cover / 24);
   const series = seriesOf(r, routineRun.trace!, parkedRun.trace!.ah);
-
-  const warnings = collectWarnings(input, r, demand, parkedRun.minSoc, routineRun.minSoc, Math.max(parkedRun.maxAcWatts, routineRun.maxAcWatts), week.acNotServedAh * perDay);
-  const fixes = options.fixes === false ? [] : findFixes(input, r, demand, { parked: parked.daysToCutoff, routine: routineCut }, daily.netAh);
+  const warnings = collectWarnings(input, r, demand, {
+    parkedMinSoc: parkedRun.minSoc,
+    routineMinSoc: routineRun.minSoc,
+    maxAcWatts: Math.max(parkedRun.maxAcWatts, routineRun.maxAcWatts),
+    acNotServedAhPerDay: week.acNotServedAh * perDay,
+    coverDays: cover / 24,
+  });
+  const fixes = options.fixes === false ? [] : findFixes(input, r, demand, { parked: parked.daysToCutoff, routine: routineCut, balance }, { horizonHours: horizon, coverHours: cover });
 
   return {
     parked,
     routine,
     daily,
+    balance: {
+      holds: balance.holds,
+      usedAh: round(usedAh, 2),
+      putBackAh: round(week.chargeAh, 2),
+      offeredAh: round(week.offeredAh, 2),
+      notStoredAh: round(week.offeredAh - week.chargeAh, 2),
+      heatingAh: round(week.heatingAh, 2),
+      weeksRun: balance.weeks,
+    },
     standby,
     breakdown,
     margin,
+    start: { socPercent: r.startSoc, weekday: Math.floor(r.startHourOfWeek / 24), hourOfDay: r.startHourOfWeek % 24 },
     series,
     warnings,
     fixes,
     horizonDays: input.horizonDays,
-    cutoffSocPercent: r.cutoffSoc,
+    cutoffSocPercent: round(r.cutoffSoc, 2),
     assumptions: {
       systemVoltage: r.systemVoltage,
       usableAh: round(r.usableAh, 2),
@@ -136,9 +147,15 @@ export function project(input: ProjectionInput, options: { fixes?: boolean } = {
       ratedHours: r.ratedHours,
       chargeEfficiency: r.chargeEfficiency,
       selfDischargePercentPerMonth: r.selfDischargePercentPerMonth,
-      cutoffSocPercent: r.cutoffSoc,
+      cutoffSocPercent: round(r.cutoffSoc, 2),
       bulkAcceptanceA: round(r.bulkAcceptanceA, 2),
       taperStartSocPercent: r.taperStartSoc,
+      charger: r.charger,
+      alternatorTaperStartSocPercent: r.alternatorTaperStartSoc,
+      relayJoinMinutes: r.relayJoinMinutes,
+      chargeBlockedByFrost: r.frozen && !r.selfHeating,
+      selfHeating: r.frozen && r.selfHeating,
+      heaterA: r.frozen && r.selfHeating ? round(r.heaterA, 2) : null,
       inverterEfficiency: r.inverter?.efficiency ?? null,
       lvdSocPercent: r.inverter?.lvdSoc ?? null,
       solarDerate: r.solarDerate,
@@ -146,8 +163,24 @@ export function project(input: ProjectionInput, options: { fixes?: boolean } = {
   };
 }
 
-/** What each load and standby draw uses a day, largest first, with its share of the whole. */
-function breakdownOf(r: Resolved, demand: DemandProfile, week: RunTotals, perDay: number): BreakdownItem[] {
+/** The margin on the planned stay: from the cut-off on the routine, or a lower bound where it lies beyond the run. */
+function marginOf(input: ProjectionInput, routineCut: number | null, holds: boolean, coverDays: number): Projection['margin'] {
+  const stay = input.plannedStayDays;
+  const base = { plannedStayDays: stay, coveredDays: coverDays };
+  if (routineCut !== null) {
+    const days = round(routineCut - stay, 2);
+    return { ...base, days, atLeastDays: null, state: marginState(days, stay) };
+  }
+  // No cut-off on the run: "none" is Comfortable only when the routine holds; otherwise the run's end
+  // bounds the margin from below.
+  if (holds) return { ...base, days: null, atLeastDays: null, state: 'comfortable' };
+  const atLeastDays = round(coverDays - stay, 2);
+  return { ...base, days: null, atLeastDays, state: marginState(atLeastDays, stay) };
+}
+
+/** What each load and standby draw uses a day in the repeating week, largest first, with its share of the whole. */
+function breakdownOf(r: Resolved, demand: DemandProfile, balance: Balance, perDay: number): BreakdownItem[] {
+  const week = balance.week;
   // Built as the final objects (the raw amp-hours first, rounded once the total is known).
   const breakdown: BreakdownItem[] = [];
   const item = (name: string, kind: BreakdownItem['kind'], supply: BreakdownItem['supply'], ahPerDay: number) =>
@@ -203,207 +236,6 @@ function seriesOf(r: Resolved, trace: Trace, parkedAh: number[]): Projection['se
     before = now;
   }
   return series;
-}
-
-function collectWarnings(
-  input: ProjectionInput,
-  r: Resolved,
-  demand: DemandProfile,
-  parkedMinSoc: number,
-  routineMinSoc: number,
-  maxAcWatts: number,
-  acNotServedAhPerDay: number,
-): Warning[] {
-  const warnings: Warning[] = [];
-  const inv = r.inverter;
-  if (inv?.control === 'ignition-relay') {
-    const cut = demand.loads.filter((lp) => lp.ac && lp.runsParked).map((lp) => lp.load.name);
-    if (cut.length) {
-      warnings.push({
-        code: 'ac-loads-cut-while-parked',
-        message: `On an ignition relay the inverter is off while parked, so ${listNames(cut)} cannot run then (${round(acNotServedAhPerDay, 1)} Ah a day not served).`,
-      });
-    }
-  }
-  if (r.role === 'starter' && Math.min(parkedMinSoc, routineMinSoc) < r.cutoffSoc) {
-    warnings.push({
-      code: 'starter-below-reserve',
-      message: `The starting battery is projected below its cranking reserve of ${r.cutoffSoc} %: the engine may not start.`,
-    });
-  }
-  if (inv && maxAcWatts > inv.ratedW) {
-    warnings.push({
-      code: 'inverter-overloaded',
-      message: `AC loads scheduled together draw up to ${round(maxAcWatts, 0)} W, more than the inverter's ${inv.ratedW} W rating.`,
-    });
-  }
-  const charges = r.alternatorA > 0 || r.solarW > 0 || r.shoreByHourOfWeek.some((x) => x > 0);
-  if (r.chemistry === 'lifepo4' && r.temperatureC < 0 && charges) {
-    warnings.push({
-      code: 'lifepo4-cold-charge',
-      message: 'A LiFePO4 battery must not be charged below 0 °C: check that its protection system blocks charging, or warm it first.',
-    });
-  }
-  if (input.battery.temperatureC < -18 && r.chemistry !== 'lifepo4') {
-    warnings.push({ code: 'temperature-below-table', message: 'Below -18 °C the capacity factor is held at its -18 °C value; real capacity may be lower.' });
-  }
-  if (input.plannedStayDays > input.horizonDays) {
-    warnings.push({ code: 'stay-beyond-horizon', message: 'The planned stay is longer than the horizon: lengthen the horizon to see the whole stay.' });
-  }
-  return warnings;
-}
-
-function listNames(names: string[]) {
-  return names.length <= 1 ? (names[0] ?? '') : `${names.slice(0, -1).join(', ')} and ${names[names.length - 1]}`;
-}
-
-/** Smallest x in [lo, hi] (to within step) for which ok(x) holds, or null; ok must be monotone. */
-function searchMin(lo: number, hi: number, step: number, ok: (x: number) => boolean): number | null {
-  if (!ok(hi)) return null;
-  if (ok(lo)) return lo;
-  while (hi - lo > step) {
-    const mid = (lo + hi) / 2;
-    if (ok(mid)) hi = mid;
-    else lo = mid;
-  }
-  return Math.ceil(hi / step) * step;
-}
-
-function findFixes(
-  input: ProjectionInput,
-  r: Resolved,
-  demand: DemandProfile,
-  base: { parked: number | null; routine: number | null },
-  baseNetAh: number,
-): Fix[] {
-  const horizonDays = input.horizonDays;
-  const gained = (before: number | null, after: number | null) => round((after ?? horizonDays) - (before ?? horizonDays), 2);
-  const fixes: Fix[] = [];
-  const netWith = (changed: ProjectionInput) => {
-    const rc = resolve(changed);
-    const w = run(rc, demand, { withDriving: true, trackWeek: true, perLoad: false, hours: Math.max(rc.horizonHours, HOURS_PER_WEEK) }).week!;
-    return round(((w.chargeAh - w.loadAh - w.inverterIdleAh - w.keyOffAh - w.selfDischargeAh) * 24) / w.hours, 2);
-  };
-  const push = (fix: Omit<Fix, 'daysGainedParked' | 'daysGainedRoutine' | 'ahPerDaySaved' | 'holds'>, after: { parked: number | null; routine: number | null }, changed: ProjectionInput) => {
-    const daysGainedParked = gained(base.parked, after.parked);
-    const daysGainedRoutine = gained(base.routine, after.routine);
-    if (daysGainedParked <= 0.01 && daysGainedRoutine <= 0.01) return;
-    fixes.push({ ...fix, daysGainedParked, daysGainedRoutine, ahPerDaySaved: round(netWith(changed) - baseNetAh, 2), holds: after.routine === null });
-  };
-  const withControl = (control: NonNullable<ProjectionInput['inverter']>['control']): ProjectionInput => ({
-    ...input,
-    inverter: input.inverter ? { ...input.inverter, control } : null,
-  });
-  const acNames = demand.loads.filter((lp) => lp.ac).map((lp) => lp.load.name);
-  const acParkedNames = demand.loads.filter((lp) => lp.ac && lp.runsParked).map((lp) => lp.load.name);
-
-  if (input.inverter && input.inverter.control !== 'manual-switch') {
-    const changed = withControl('manual-switch');
-    push(
-      {
-        kind: 'cutoff-switch',
-        summary: `Fit a manual cut-off switch on the inverter feed and switch it on only when an AC load runs: no more ${input.inverter.idleA} A idle draw.`,
-        convenience: acNames.length ? `You switch the inverter on before using ${listNames(acNames)}.` : 'You switch the inverter on when you need it.',
-        change: { inverter: { control: 'manual-switch' } },
-      },
-      quickDays(resolve(changed), demand),
-      changed,
-    );
-  }
-  if (input.inverter && input.inverter.control !== 'ignition-relay') {
-    const changed = withControl('ignition-relay');
-    push(
-      {
-        kind: 'ignition-relay',
-        summary: 'Feed the inverter through an ignition-keyed relay so it is live only while the vehicle runs.',
-        convenience: acParkedNames.length
-          ? `${listNames(acParkedNames)} would no longer run while parked.`
-          : 'Nothing you use while parked is cut.',
-        change: { inverter: { control: 'ignition-relay' } },
-      },
-      quickDays(resolve(changed), demand),
-      changed,
-    );
-  }
-  if (input.inverter && input.inverter.control !== 'low-voltage-disconnect') {
-    const changed = withControl('low-voltage-disconnect');
-    const rr = resolve(changed);
-    push(
-      {
-        kind: 'low-voltage-disconnect',
-        summary: `Put a low-voltage disconnect on the inverter: it switches off at ${rr.inverter!.lvdSoc} % and leaves the rest for the DC loads.`,
-        convenience: 'AC loads stop when the battery runs low, until it is charged again.',
-        change: { inverter: { control: 'low-voltage-disconnect', lvdSocPercent: rr.inverter!.lvdSoc } },
-      },
-      quickDays(rr, demand),
-      changed,
-    );
-  }
-
-  const routineFalls = base.routine !== null;
-  if (routineFalls && r.alternatorA > 0) {
-    const withMinutes = (m: number): ProjectionInput => ({
-      ...input,
-      charging: { ...input.charging, drivingMinutesPerDay: input.charging.drivingMinutesPerDay.map((x) => Math.max(x, m)) },
-    });
-    const minutes = searchMin(0, 480, 5, (m) => routineDays(resolve(withMinutes(m)), demand) === null);
-    if (minutes !== null && minutes > 0) {
-      const changed = withMinutes(minutes);
-      push(
-        {
-          kind: 'more-driving',
-          summary: `Drive at least ${minutes} minutes every day: the alternator then puts back what the week uses.`,
-          convenience: `${minutes} minutes behind the wheel each day, parked or not.`,
-          change: { charging: { drivingMinutesPerDay: changed.charging.drivingMinutesPerDay } },
-        },
-        quickDays(resolve(changed), demand),
-        changed,
-      );
-    }
-  }
-
-  if (input.plannedStayDays > 0 && base.routine !== null && base.routine < input.plannedStayDays) {
-    const withCapacity = (ah: number): ProjectionInput => ({ ...input, battery: { ...input.battery, capacityAh: ah } });
-    const reach = (ah: number) => {
-      const d = routineDays(resolve(withCapacity(ah)), demand);
-      return d === null || d >= input.plannedStayDays;
-    };
-    const needed = searchMin(input.battery.capacityAh, Math.min(20_000, input.battery.capacityAh * 20), 10, reach);
-    if (needed !== null && needed > input.battery.capacityAh) {
-      const changed = withCapacity(needed);
-      push(
-        {
-          kind: 'more-battery',
-          summary: `A battery bank of about ${needed} Ah (${needed - input.battery.capacityAh} Ah more) covers the planned ${input.plannedStayDays}-day stay.`,
-          convenience: 'Cost, weight and space for the extra battery, and a charging source to refill it.',
-          change: { battery: { capacityAh: needed } },
-        },
-        quickDays(resolve(changed), demand),
-        changed,
-      );
-    }
-  }
-
-  if (routineFalls) {
-    const psh = input.charging.peakSunHours > 0 ? input.charging.peakSunHours : MODEL_DEFAULTS.fixPeakSunHours;
-    const withSolar = (w: number): ProjectionInput => ({ ...input, charging: { ...input.charging, solarW: w, peakSunHours: psh } });
-    const watts = searchMin(input.charging.solarW, 3000, 10, (w) => routineDays(resolve(withSolar(w)), demand) === null);
-    if (watts !== null && watts > input.charging.solarW) {
-      const changed = withSolar(watts);
-      push(
-        {
-          kind: 'solar',
-          summary: `About ${watts} W of solar${input.charging.solarW ? ` (${watts - input.charging.solarW} W more)` : ''} at ${psh} peak sun hours balances the week.`,
-          convenience: 'Roof space and a charge controller; less in cloud and in winter.',
-          change: { charging: { solarW: watts, peakSunHours: psh } },
-        },
-        quickDays(resolve(changed), demand),
-        changed,
-      );
-    }
-  }
-
-  return fixes.sort((a, b) => b.daysGainedRoutine - a.daysGainedRoutine || b.daysGainedParked - a.daysGainedParked);
 }
 
 export type CompareSide = {

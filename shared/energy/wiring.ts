@@ -1,4 +1,5 @@
 import type { CableRunSizeInput } from '../schemas/cable-run';
+import { MODEL_DEFAULTS } from './defaults';
 
 /**
  * Sizing a cable run: the smallest conductor whose voltage drop stays within the limit and whose
@@ -150,6 +151,26 @@ export function maximumProtectionA(ampacityA: number, systemVoltage: number): nu
   return systemVoltage < 50 ? ampacityA * 1.5 : ampacityA;
 }
 
+/**
+ * What a fuse of this rating is: the ISO 8820-3 blade series has no 6 A (NEC 240.6(A)'s 6 A is a cartridge
+ * fuse), and above 40 A fuses bolt down.
+ */
+export function fuseKindOf(ratingA: number): string {
+  if (BLADE_FUSES.includes(ratingA)) return 'Blade fuse (ISO 8820-3 series) or circuit breaker';
+  if (ratingA < 40) return `Cartridge fuse (NEC 240.6(A) rating; no ${ratingA} A blade in the ISO 8820-3 series) or circuit breaker`;
+  return 'Bolt-down high-current fuse or circuit breaker';
+}
+
+/**
+ * The current an inverter's feed is sized for: its rated watts at its low-voltage cut-out (about 10.5 V on
+ * 12 V, common practice; in proportion on 24 and 48 V) through its efficiency. The feed carries it
+ * continuously (NEC 210.20(A)).
+ */
+export function inverterFeedCurrentA(ratedW: number, systemVoltage: number, efficiencyPercent: number): number {
+  const cutoutV = (MODEL_DEFAULTS.inverterCutoutVPer12V * systemVoltage) / 12;
+  return ratedW / (cutoutV * (efficiencyPercent / 100));
+}
+
 /** The smallest standard rating in [min, max], or null. */
 export function standardRating(minA: number, maxA: number): number | null {
   return STANDARD_RATINGS.find((r) => r >= minA - 1e-9 && r <= maxA + 1e-9) ?? null;
@@ -186,6 +207,9 @@ export const CHASSIS_GROUND_ALLOWANCE_OHM = 0.001;
 export type SizeCheck = { dropV: number; dropPercent: number; ampacityA: number; meetsDrop: boolean; carries: boolean };
 
 export type CableRunResult = {
+  /** The current the run is sized for, and where it came from. */
+  currentA: number;
+  basis: null | { inverterW: number; cutoutV: number; efficiencyPercent: number; continuous: true };
   awg: Awg;
   mm2: number;
   dropV: number;
@@ -218,7 +242,11 @@ export const CABLE_CAUTIONS = [
 ];
 
 export function sizeCableRun(input: CableRunSizeInput): CableRunResult {
-  const { systemVoltage: V, currentA: I, lengthM, maxDropPercent, engineSpace, returnPath, continuous } = input;
+  const { systemVoltage: V, lengthM, maxDropPercent, engineSpace, returnPath } = input;
+  const fromInverter = input.inverterW !== undefined;
+  const I = fromInverter ? inverterFeedCurrentA(input.inverterW!, V, input.inverterEfficiencyPercent) : input.currentA!;
+  // An inverter's feed is a continuous load (NEC 210.20(A)).
+  const continuous = fromInverter || input.continuous;
   const insulationC = input.insulationC as InsulationC;
   const T = input.conductorTemperatureC;
   const conductorLengthM = returnPath === 'cable' ? 2 * lengthM : lengthM;
@@ -251,13 +279,17 @@ export function sizeCableRun(input: CableRunSizeInput): CableRunResult {
     );
   }
   return {
+    currentA: r3(I),
+    basis: fromInverter
+      ? { inverterW: input.inverterW!, cutoutV: (MODEL_DEFAULTS.inverterCutoutVPer12V * V) / 12, efficiencyPercent: input.inverterEfficiencyPercent, continuous: true }
+      : null,
     awg: AWG_SIZES[ai],
     mm2: MM2_SIZES[mi],
     dropV: r3(a.dropV),
     dropPercent: r3(a.dropPercent),
     ampacityA: r3(a.ampacityA),
     fuseA,
-    fuseKind: fuseA <= 40 ? 'Blade fuse (ISO 8820-3 series) or circuit breaker' : 'Bolt-down high-current fuse or circuit breaker',
+    fuseKind: fuseKindOf(fuseA),
     breaker: {
       type: 'type III, manual reset, trip-free',
       standard: 'SAE J553',

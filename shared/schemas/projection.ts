@@ -30,6 +30,12 @@ export const batterySchema = z.object({
   temperatureFactor: num(0.05, 1).optional(),
   bulkAcceptanceC: num(0.01, 3).optional(),
   taperStartSocPercent: num(50, 100).optional(),
+  /** A self-heating LiFePO4 battery warms itself from a charging source before it accepts charge below 0 °C. */
+  selfHeating: z.boolean().default(false),
+  /** The heater's draw while it warms, in watts (default in shared/energy/defaults.ts). */
+  heaterW: num(0, 1000).optional(),
+  /** Minutes of charging-source time the heater needs before the battery accepts charge. */
+  heaterWarmupMinutes: num(0, 600).optional(),
 });
 
 export const inverterSchema = z.object({
@@ -56,6 +62,8 @@ export const loadSchema = z
     when: whenSchema.default('always'),
     status: loadStatusSchema.default('installed'),
     quantity: z.number().int().min(1).max(100).default(1),
+    /** An essential load (a CPAP, a medical device): a Fix that would stop it says so. */
+    essential: z.boolean().optional(),
   })
   .superRefine((load, ctx) => {
     if ((load.watts === undefined) === (load.amps === undefined)) {
@@ -76,7 +84,10 @@ export const chargingSchema = z.object({
   drivingMinutesPerDay: z.array(num(0, 1440)).length(7).default([0, 0, 0, 0, 0, 0, 0]),
   /** Hour of day when each day's driving begins. */
   drivingStartHour: z.number().int().min(0).max(23).default(10),
+  /** How the alternator charges the battery: a voltage-sensitive relay or a DC-DC charger (alternatorA is then its rating). */
   charger: z.enum(['relay', 'dc-dc']).default('relay'),
+  /** Minutes into each drive before a relay joins (the starting battery must first reach its join voltage). */
+  relayJoinMinutes: num(0, 60).optional(),
   solarW: num(0, 5_000).default(0),
   peakSunHours: num(0, 12).default(0),
   solarDeratePercent: num(10, 100).optional(),

@@ -123,6 +123,9 @@ describe('the rig workspace', () => {
     await signInAs(page, 'marguerite@example.org');
     await page.getByTestId('open-Wren').click();
     await page.getByTestId('fixes').waitFor();
+    expect(await page.getByTestId('week-balance').textContent()).toMatch(/The repeating week: .* used, .* put back/);
+    // Wren's laptop runs parked: the ignition relay says it stops it, and how much a day.
+    expect(await page.getByTestId('fix-stops-ignition-relay').textContent()).toMatch(/Stops Laptop whenever parked: .* a day not served/);
     await page.screenshot({ path: path.join(SHOTS, 'outlook-wide.png'), fullPage: true });
     await page.getByTestId('tab-Loads').click();
     await page.getByTestId('load-Roof fan').waitFor();
@@ -175,6 +178,12 @@ describe('cable runs on a rig', () => {
     await page.getByTestId('unit-wire-mm2').click();
     await page.goBack();
     await expect.poll(() => page.getByTestId('run-size-Inverter feed').textContent()).toMatch(/mm²/);
+    // A run linked to the inverter is sized from its rating: 300 W / (10.5 V × 0.9) = 31.75 A (common practice).
+    await page.getByTestId('add-run').click();
+    await fill(page, 'field-label', 'Feed from rating');
+    await page.getByTestId('run-from-inverter').click();
+    await page.getByTestId('run-submit').click();
+    await expect.poll(() => page.getByTestId('run-Feed from rating').textContent()).toMatch(/31\.75 A \(the inverter at its 10\.5 V cut-out, continuous\)/);
     await page.close();
   });
 });

@@ -53,4 +53,21 @@ describe('POST /api/cable-runs/size', () => {
     const res = await post({ ...valid, currentA: '20' }).expect(400);
     expect(paths(res)).toContain('currentA');
   });
+
+  it('sizes an inverter feed from inverterW: rated watts at the 10.5 V cut-out and 90 %, continuous', async () => {
+    // 1000 / (10.5 × 0.9) = 105.8 A (REFERENCES.md, Inverters and their switching: common practice);
+    // continuous, so at least 125 % = 132.3 A of protection (NEC 210.20(A)): the 150 A standard rating (NEC 240.6(A)).
+    const { currentA: _c, ...rest } = valid;
+    const res = await post({ ...rest, inverterW: 1000, purpose: 'inverter', lengthM: 1.5 }).expect(200);
+    expect(res.body.currentA).toBeCloseTo(105.82, 2);
+    expect(res.body.basis).toMatchObject({ inverterW: 1000, cutoutV: 10.5, continuous: true });
+    expect(res.body.fuseA).toBe(150);
+  });
+
+  it('refuses inverterW without the inverter purpose, and with a current too, naming the fields', async () => {
+    const { currentA: _c, ...rest } = valid;
+    expect(paths(await post({ ...rest, inverterW: 600 }).expect(400))).toContain('purpose');
+    expect(paths(await post({ ...valid, inverterW: 600, purpose: 'inverter' }).expect(400))).toContain('currentA');
+    expect(paths(await post({ ...rest, inverterW: -5, purpose: 'inverter' }).expect(400))).toContain('inverterW');
+  });
 });

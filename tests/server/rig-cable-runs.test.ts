@@ -63,4 +63,24 @@ describe('saved cable runs on a rig', () => {
     await fx.agents.owner.delete(`${base()}/${created.body.id}`).set('Origin', TEST_ORIGIN).expect(204);
     await fx.agents.owner.delete(`${base()}/${created.body.id}`).set('Origin', TEST_ORIGIN).expect(404);
   });
+
+  it("links a run to the rig's inverter and sizes it from its rating", async () => {
+    const rig = (await fx.agents.owner.get(`/api/rigs/${fx.rigId}`)).body;
+    const inv = rig.power.inverter;
+    const res = await fx.agents.owner.post(base()).set('Origin', TEST_ORIGIN).send({ label: 'Inverter feed', lengthM: 1, inverterLink: true, maxDropPercent: 3, insulationC: 105 }).expect(201);
+    expect(res.body.currentFrom).toBe('inverter');
+    // Rated watts at the 10.5 V cut-out through the inverter's efficiency (common practice).
+    expect(res.body.currentA).toBeCloseTo(inv.ratedW / (10.5 * (inv.efficiencyPercent / 100)), 2);
+    expect(res.body.sizing.basis).toMatchObject({ inverterW: inv.ratedW, continuous: true });
+    const both = await fx.agents.owner.post(base()).set('Origin', TEST_ORIGIN).send({ label: 'X', lengthM: 1, inverterLink: true, currentA: 5, maxDropPercent: 3, insulationC: 105 }).expect(400);
+    expect(both.body.fields[0].path).toBe('currentA');
+  });
+
+  it("does not size an AC load's own circuit: it is mains wiring", async () => {
+    const ac = (await fx.agents.owner.post(`/api/rigs/${fx.rigId}/loads`).set('Origin', TEST_ORIGIN).send({ name: 'Laptop', supply: 'ac', watts: 60, hoursPerDay: 2, essential: true }).expect(201)).body;
+    expect(ac.essential).toBe(true); // stored with the load (loads.essential)
+    const res = await fx.agents.owner.post(base()).set('Origin', TEST_ORIGIN).send({ label: 'Laptop socket', lengthM: 2, loadId: ac.id, maxDropPercent: 3, insulationC: 105 }).expect(201);
+    expect(res.body.sizing).toBeNull();
+    expect(res.body.warnings[0]).toMatch(/mains wiring/);
+  });
 });

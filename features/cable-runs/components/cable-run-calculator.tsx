@@ -9,6 +9,7 @@ import type { CableRunResult } from '@/shared/energy/wiring';
 import { type CableRunSizeForm, type CableRunSizeInput, cableRunSizeSchema } from '@/shared/schemas/cable-run';
 import { colors, radius, space, type } from '@/shared/theme';
 import { useCableRunSizeMutation } from '../api/size-cable-run';
+import { CurrentOrInverterFields } from './current-or-inverter-fields';
 
 const defaults: CableRunSizeForm = {
   systemVoltage: 12,
@@ -36,7 +37,8 @@ export function CableRunCalculator() {
       <View style={[styles.columns, wide && styles.columnsWide]}>
         <Card style={wide ? styles.col : undefined}>
           <ChoiceField control={form.control} name="systemVoltage" label="System voltage" options={[{ value: 12, label: '12 V' }, { value: 24, label: '24 V' }]} />
-          <NumberField control={form.control} name="currentA" label="Current" unit="A" hint="The most the device draws from the battery." />
+          <ChoiceField control={form.control} name="purpose" label="What it feeds" options={[{ value: 'general', label: 'A device' }, { value: 'inverter', label: 'An inverter' }]} />
+          <CurrentOrInverterFields control={form.control} setValue={form.setValue} />
           <NumberField control={form.control} name="lengthM" label="Length, one way" unit="m" hint="From the battery to the device." />
           <NumberField control={form.control} name="maxDropPercent" label="Allowed voltage drop" unit="%" hint="3 % for electronics and feeds, 10 % for non-critical loads (ABYC E-11)." />
           <ChoiceField
@@ -48,7 +50,6 @@ export function CableRunCalculator() {
           <ChoiceField control={form.control} name="returnPath" label="Return path" options={[{ value: 'cable', label: 'Negative cable' }, { value: 'chassis', label: 'Through the chassis' }]} />
           <SwitchField control={form.control} name="engineSpace" label="Runs through the engine space" />
           <SwitchField control={form.control} name="continuous" label="Continuous load (3 hours or more)" />
-          <ChoiceField control={form.control} name="purpose" label="What it feeds" options={[{ value: 'general', label: 'A device' }, { value: 'inverter', label: 'An inverter' }]} />
           <Button testID="size-run" label="Size this run" onPress={onSubmit} busy={mutation.isPending} />
           {mutation.isError ? (
             <Text role="alert" style={styles.error}>
@@ -74,6 +75,11 @@ function Result({ result }: { result: CableRunResult }) {
           <Figure label="mm²" value={String(result.mm2)} testID="result-mm2" />
           <Figure label="Fuse or breaker" value={`${result.fuseA} A`} testID="result-fuse" />
         </View>
+        {result.basis ? (
+          <Small testID="result-basis">
+            Sized for {result.currentA.toFixed(1)} A: the inverter&apos;s {result.basis.inverterW} W at its {result.basis.cutoutV} V cut-out and {result.basis.efficiencyPercent} %, a continuous load. The inverter maker&apos;s fuse instructions come first.
+          </Small>
+        ) : null}
         <Body>
           Drop {result.dropV.toFixed(2)} V ({result.dropPercent.toFixed(1)} %) over {result.conductorLengthM} m of conductor; the wire carries up to {Math.round(result.ampacityA)} A.
         </Body>

@@ -12,8 +12,9 @@ export type SavedCableRun = {
   to: string;
   lengthM: number;
   currentA: number;
-  currentFrom: 'entered' | 'load' | 'missing';
+  currentFrom: 'entered' | 'load' | 'inverter' | 'missing';
   loadId: string | null;
+  inverterLink: boolean;
   loadName: string | null;
   maxDropPercent: number;
   insulationC: number;

@@ -8,6 +8,8 @@ import { Button, Card, Heading } from '@/components/ui';
 import { type Load, type LoadInput, loadSchema } from '@/shared/schemas/projection';
 import { colors, space, type } from '@/shared/theme';
 
+import { EssentialField } from './essential-field';
+
 export const EMPTY_LOAD: LoadInput = { name: '', supply: 'dc', watts: 10, dutyPercent: 100, hoursPerDay: 2, startHour: 18, when: 'always', status: 'installed', quantity: 1 };
 
 /** Add or edit a load, validated inline by the same schema the server uses. */
@@ -64,6 +66,7 @@ export function LoadForm({
         </View>
       </View>
       <ChoiceField control={form.control} name="when" label="Runs" options={[{ value: 'always', label: 'Any time' }, { value: 'parked', label: 'Only parked' }, { value: 'driving', label: 'Only driving' }]} />
+      <EssentialField control={form.control} />
       {error ? (
         <Text role="alert" style={{ ...type.body, color: colors.short }}>
           {error}

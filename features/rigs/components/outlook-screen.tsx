@@ -5,6 +5,7 @@ import { MarginBadge } from '@/components/margin-badge';
 import { Body, Button, Card, Heading, Small } from '@/components/ui';
 import { formatEnergy, useUnits } from '@/components/units';
 import { useIsWide } from '@/components/use-layout';
+import { fixGainText } from '@/shared/energy/project';
 import { FIX_WIRING_CAUTION, needsWiringCaution } from '@/shared/safety';
 import { colors, radius, space, type } from '@/shared/theme';
 import { type Outlook, useOutlookQuery } from '../api/rig';
@@ -16,6 +17,7 @@ const FIX_TITLE: Record<string, string> = {
   'low-voltage-disconnect': 'Low-voltage disconnect',
   'more-driving': 'More driving',
   'more-battery': 'More battery',
+  'house-battery': 'A separate house battery',
   solar: 'Solar',
 };
 
@@ -36,19 +38,30 @@ export function OutlookScreen({ rigId, narrow = false }: { rigId: string; narrow
   return (
     <View style={{ gap: space.lg }} testID="outlook-screen">
       <View style={[styles.figures, wide && { flexWrap: 'nowrap' }]}>
-        <Figure label="Days parked" value={formatDays(o.parked.daysToCutoff, o.horizonDays)} hint="to the cut-off, not driving at all" testID="figure-days-parked" />
-        <Figure label="Days on your routine" value={o.routine.holds ? 'Holds' : formatDays(o.routine.daysToCutoff, o.horizonDays)} hint={o.routine.holds ? 'the week puts back what it uses' : 'to the cut-off, driving as you do'} testID="figure-days-routine" />
+        <Figure label="Days parked" value={formatDays(o.parked.daysToCutoff, o.margin.coveredDays)} hint="to the cut-off, not driving at all" testID="figure-days-parked" />
+        <Figure
+          label="Days on your routine"
+          value={o.routine.holds && o.routine.daysToCutoff === null ? 'Holds' : formatDays(o.routine.daysToCutoff, o.margin.coveredDays)}
+          hint={o.routine.holds ? 'the repeating week puts back what it uses' : 'to the cut-off, driving as you do'}
+          testID="figure-days-routine"
+        />
         <Card style={styles.figureCard}>
           <Text style={styles.figureLabel}>Margin for a {o.margin.plannedStayDays}-day stay</Text>
           <MarginBadge state={o.margin.state} />
-          <Small>{o.margin.days === null ? 'The cut-off is beyond the horizon.' : `${o.margin.days >= 0 ? '+' : ''}${o.margin.days.toFixed(1)} days`}</Small>
+          <Small testID="margin-days">
+            {o.margin.days !== null
+              ? `${o.margin.days >= 0 ? '+' : ''}${o.margin.days.toFixed(1)} days`
+              : o.margin.atLeastDays !== null
+                ? `At least +${o.margin.atLeastDays.toFixed(1)} days: the cut-off is beyond the ${o.margin.coveredDays}-day run, but the routine does not hold.`
+                : 'The routine holds: the cut-off is not reached.'}
+          </Small>
         </Card>
       </View>
       <View style={[{ gap: space.lg }, wide && { flexDirection: 'row', alignItems: 'flex-start' }]}>
         <View style={[{ gap: space.lg }, wide && { flex: 3 }]}>
           <Card>
             <Heading>State of charge, {o.horizonDays} days</Heading>
-            <SocChart series={o.series} cutoffSocPercent={o.cutoffSocPercent} />
+            <SocChart series={o.series} cutoffSocPercent={o.cutoffSocPercent} startSocPercent={o.start.socPercent} />
             <Small>
               Dark line: on your routine. Grey: parked. Red line: cut-off at {o.cutoffSocPercent} %. Amber bands: driving.
             </Small>
@@ -96,6 +109,11 @@ function Drains({ outlook }: { outlook: Outlook }) {
       <Small>
         {formatEnergy(outlook.daily.consumptionAh, units, V)} a day used, {formatEnergy(outlook.daily.chargeAh, units, V)} put back.
       </Small>
+      <Small testID="week-balance">
+        The repeating week: {formatEnergy(outlook.balance.usedAh, units, V)} used, {formatEnergy(outlook.balance.putBackAh, units, V)} put back,{' '}
+        {formatEnergy(outlook.balance.notStoredAh, units, V)} offered by the chargers but not stored
+        {outlook.balance.heatingAh > 0 ? ` (${formatEnergy(outlook.balance.heatingAh, units, V)} of it warming the battery)` : ''}.
+      </Small>
       {top.map((b) => (
         <View key={b.name} style={{ gap: 2 }}>
           <View style={styles.drainRow}>
@@ -117,6 +135,8 @@ function Drains({ outlook }: { outlook: Outlook }) {
 }
 
 function Fixes({ outlook }: { outlook: Outlook }) {
+  const { units } = useUnits();
+  const V = outlook.assumptions.systemVoltage as number | undefined;
   return (
     <Card testID="fixes">
       <Heading>Fixes</Heading>
@@ -124,10 +144,16 @@ function Fixes({ outlook }: { outlook: Outlook }) {
       {outlook.fixes.map((f) => (
         <View key={f.kind} style={styles.fix} testID={`fix-${f.kind}`}>
           <Text style={styles.fixTitle}>
-            {FIX_TITLE[f.kind] ?? f.kind}: {f.holds ? 'the routine holds' : `+${f.daysGainedRoutine.toFixed(1)} days on your routine`}
-            {f.daysGainedParked > 0 ? `, +${f.daysGainedParked.toFixed(1)} days parked` : ''}
+            {FIX_TITLE[f.kind] ?? f.kind}: {fixGainText(f)}
           </Text>
           <Body>{f.summary}</Body>
+          {f.stops ? (
+            <Small style={f.cutsEssential ? { color: colors.short, fontFamily: 'Nunito_700Bold' } : undefined} testID={`fix-stops-${f.kind}`}>
+              Stops {f.stops.loads.map((n) => (f.stops!.essentialLoads.includes(n) ? `${n} (essential)` : n)).join(', ')}{' '}
+              {f.stops.when === 'parked' ? 'whenever parked' : f.stops.fromDay !== null ? `once the battery runs low (from day ${f.stops.fromDay.toFixed(1)})` : 'once the battery runs low'}:{' '}
+              {formatEnergy(f.stops.ahPerDayNotServed, units, V)} a day not served.
+            </Small>
+          ) : null}
           <Small>Cost in convenience: {f.convenience}</Small>
         </View>
       ))}

@@ -13,6 +13,7 @@ import { colors, space, type } from '@/shared/theme';
 import { useRouter } from 'expo-router';
 
 import { type Rig, useRigDeleteMutation, useRigQuery, useRigUpdateMutation } from '../api/rig';
+import { SelfHeatingFields } from './self-heating-fields';
 
 const DAYS = ['Mon', 'Tue', 'Wed', 'Thu', 'Fri', 'Sat', 'Sun'];
 const INVERTER = { ratedW: 300, efficiencyPercent: 90, idleA: 0.5, control: 'always-on' } as const;
@@ -59,6 +60,7 @@ function PowerForm({ rig }: { rig: Rig }) {
             hint="Cold batteries hold less: about 75 % of their capacity at 0 °C (32 °F)."
           />
           <NumberField control={form.control} name="battery.startSocPercent" label="Charge at the start" unit="%" />
+          <SelfHeatingFields control={form.control} />
           <ChoiceField control={form.control} name="battery.role" label="Battery" options={[{ value: 'house', label: 'House battery' }, { value: 'starter', label: 'Starting battery' }]} />
           <NumberField control={form.control} name="systemVoltage" label="System voltage" unit="V" />
         </Card>
@@ -88,7 +90,13 @@ function PowerForm({ rig }: { rig: Rig }) {
         <Card style={col}>
           <Heading>Charging</Heading>
           <NumberField control={form.control} name="charging.alternatorA" label="Alternator charge current" unit="A" />
-          <ChoiceField control={form.control} name="charging.charger" label="Through" options={[{ value: 'relay', label: 'A relay' }, { value: 'dc-dc', label: 'A DC-DC charger' }]} />
+          <ChoiceField
+            control={form.control}
+            name="charging.charger"
+            label="Through"
+            options={[{ value: 'relay', label: 'A relay' }, { value: 'dc-dc', label: 'A DC-DC charger' }]}
+            hint="A relay joins a few minutes into each drive and the battery takes what it accepts; a DC-DC charger gives its rated current until nearly full."
+          />
           <NumberField control={form.control} name="charging.solarW" label="Solar panels" unit="W" />
           <NumberField control={form.control} name="charging.peakSunHours" label="Peak sun hours" unit="h/day" />
         </Card>

@@ -12,6 +12,7 @@ import { type CableRunForm, type CableRunInput, cableRunSchema } from '@/shared/
 import { colors, radius, space, type } from '@/shared/theme';
 import { type SavedCableRun, useCableRunCreateMutation, useCableRunDeleteMutation, useCableRunsQuery, useCableRunUpdateMutation } from '../api/cable-runs';
 import { useRigQuery } from '../api/rig';
+import { type RunSource, RunSourceChips } from './run-source';
 
 const EMPTY: CableRunForm = { label: '', from: 'Battery', to: '', lengthM: 2, currentA: 10, maxDropPercent: 3, insulationC: 105, engineSpace: false, returnPath: 'cable', continuous: false, purpose: 'general' };
 const CAUTION =
@@ -51,6 +52,7 @@ export function RigCableRunsScreen({ rigId }: { rigId: string }) {
                 <Text style={styles.name}>{r.label}</Text>
                 <Small>
                   {r.from} → {r.to || '—'} · {r.lengthM} m one way · {r.currentA} A{r.loadName ? ` (${r.loadName})` : ''}
+                  {r.currentFrom === 'inverter' ? ' (the inverter at its 10.5 V cut-out, continuous)' : ''}
                 </Small>
                 <Text style={styles.figures} testID={`run-size-${r.label}`}>
                   {size(r)} · drop {drop(r)} · {r.sizing ? `${r.sizing.fuseA} A fuse or breaker` : 'no size'}
@@ -83,7 +85,8 @@ export function RigCableRunsScreen({ rigId }: { rigId: string }) {
           <RunForm
             key={editing === 'new' ? 'new' : editing.id}
             initial={editing === 'new' ? EMPTY : toForm(editing)}
-            loads={rig.data.loads.filter((l) => l.status === 'installed').map((l) => ({ value: l.id, label: l.name }))}
+            loads={rig.data.loads.filter((l) => l.status === 'installed' && l.supply === 'dc').map((l) => ({ value: l.id, label: l.name }))}
+            hasInverter={rig.data.power.inverter !== null}
             busy={create.isPending || update.isPending}
             error={(editing === 'new' ? create.error : update.error)?.message}
             onSubmit={save}
@@ -101,7 +104,7 @@ function toForm(r: SavedCableRun): CableRunForm {
     from: r.from,
     to: r.to,
     lengthM: r.lengthM,
-    ...(r.currentFrom === 'load' && r.loadId ? { loadId: r.loadId } : { currentA: r.currentA }),
+    ...(r.currentFrom === 'load' && r.loadId ? { loadId: r.loadId } : r.currentFrom === 'inverter' ? { inverterLink: true } : { currentA: r.currentA }),
     maxDropPercent: r.maxDropPercent,
     insulationC: r.insulationC as 105,
     engineSpace: r.engineSpace,
@@ -112,18 +115,23 @@ function toForm(r: SavedCableRun): CableRunForm {
   };
 }
 
-function RunForm(props: { initial: CableRunForm; loads: { value: string; label: string }[]; busy: boolean; error?: string; onSubmit: (r: CableRunInput) => void; onCancel: () => void }) {
+function RunForm(props: {
+  initial: CableRunForm;
+  loads: { value: string; label: string }[];
+  hasInverter: boolean;
+  busy: boolean;
+  error?: string;
+  onSubmit: (r: CableRunInput) => void;
+  onCancel: () => void;
+}) {
   const form = useForm<CableRunForm, unknown, CableRunInput>({ resolver: zodResolver(cableRunSchema), defaultValues: props.initial, mode: 'onTouched' });
-  const [fromLoad, setFromLoad] = useState(props.initial.loadId !== undefined);
-  const chooseSource = (on: boolean) => {
-    setFromLoad(on);
-    if (on) {
-      form.setValue('currentA', undefined);
-      form.setValue('loadId', props.loads[0]?.value);
-    } else {
-      form.setValue('loadId', undefined);
-      form.setValue('currentA', 10);
-    }
+  const [source, setSource] = useState<RunSource>(props.initial.loadId !== undefined ? 'load' : props.initial.inverterLink ? 'inverter' : 'current');
+  const chooseSource = (next: RunSource) => {
+    setSource(next);
+    form.setValue('currentA', next === 'current' ? 10 : undefined);
+    form.setValue('loadId', next === 'load' ? props.loads[0]?.value : undefined);
+    form.setValue('inverterLink', next === 'inverter');
+    if (next === 'inverter') form.setValue('purpose', 'inverter');
   };
   return (
     <Card testID="run-form">
@@ -131,17 +139,10 @@ function RunForm(props: { initial: CableRunForm; loads: { value: string; label: 
       <TextField control={form.control} name="label" label="Name" placeholder="Inverter feed" />
       <TextField control={form.control} name="to" label="To" placeholder="Inverter" />
       <NumberField control={form.control} name="lengthM" label="Length, one way" unit="m" />
-      {props.loads.length ? (
-        <View style={{ flexDirection: 'row', gap: space.sm }}>
-          <Pressable role="radio" aria-checked={!fromLoad} onPress={() => chooseSource(false)} style={[styles.chip, !fromLoad && styles.chipOn]}>
-            <Text style={[styles.chipText, !fromLoad && styles.chipTextOn]}>Enter the current</Text>
-          </Pressable>
-          <Pressable role="radio" aria-checked={fromLoad} onPress={() => chooseSource(true)} style={[styles.chip, fromLoad && styles.chipOn]} testID="run-from-load">
-            <Text style={[styles.chipText, fromLoad && styles.chipTextOn]}>Take a load&apos;s current</Text>
-          </Pressable>
-        </View>
-      ) : null}
-      {fromLoad ? <ChoiceField control={form.control} name="loadId" label="Load" options={props.loads} /> : <NumberField control={form.control} name="currentA" label="Current" unit="A" />}
+      <RunSourceChips value={source} onChange={chooseSource} hasLoads={props.loads.length > 0} hasInverter={props.hasInverter} />
+      {source === 'load' ? <ChoiceField control={form.control} name="loadId" label="Load" options={props.loads} hint="DC loads only: an AC load's own circuit is mains wiring, outside these tables." /> : null}
+      {source === 'current' ? <NumberField control={form.control} name="currentA" label="Current" unit="A" /> : null}
+      {source === 'inverter' ? <Small>Sized from the inverter&apos;s rating at its 10.5 V cut-out and its efficiency, as a continuous load.</Small> : null}
       <NumberField control={form.control} name="maxDropPercent" label="Allowed drop" unit="%" hint="3 % for electronics and feeds, 10 % for other loads (ABYC E-11)." />
       <ChoiceField control={form.control} name="insulationC" label="Insulation rating" options={[60, 75, 90, 105, 125].map((t) => ({ value: t, label: `${t} °C` }))} />
       <ChoiceField control={form.control} name="returnPath" label="Return" options={[{ value: 'cable', label: 'Negative cable' }, { value: 'chassis', label: 'Chassis' }]} />

@@ -8,5 +8,5 @@ export const COMMON_LOADS: { key: string; label: string; load: Load }[] = [
   { key: 'fan', label: 'Roof fan, 20 W at half speed for 8 h', load: { name: 'Roof fan', supply: 'dc', watts: 20, dutyPercent: 50, hoursPerDay: 8, startHour: 22, when: 'parked', status: 'installed', quantity: 1 } },
   { key: 'laptop', label: 'Laptop on the inverter, 60 W for 3 h', load: { name: 'Laptop', supply: 'ac', watts: 60, dutyPercent: 70, hoursPerDay: 3, startHour: 14, when: 'parked', status: 'installed', quantity: 1 } },
   { key: 'heater', label: 'Diesel heater fan, 1 A for 6 h', load: { name: 'Diesel heater fan', supply: 'dc', amps: 1, dutyPercent: 100, hoursPerDay: 6, startHour: 23, when: 'parked', status: 'installed', quantity: 1 } },
-  { key: 'cpap', label: 'CPAP machine, 30 W for 8 h', load: { name: 'CPAP machine', supply: 'dc', watts: 30, dutyPercent: 100, hoursPerDay: 8, startHour: 23, when: 'parked', status: 'installed', quantity: 1 } },
+  { key: 'cpap', label: 'CPAP machine, 30 W for 8 h', load: { name: 'CPAP machine', supply: 'dc', watts: 30, dutyPercent: 100, hoursPerDay: 8, startHour: 23, when: 'parked', status: 'installed', quantity: 1, essential: true } },
 ];

@@ -76,7 +76,7 @@ describe('energy model properties', () => {
       fc.property(rigArb({ controls: ['always-on', 'manual-switch', 'ignition-relay'] }), loadArb(), (raw, extra) => {
         const a = project(projectionInputSchema.parse(raw), { fixes: false });
         const b = project(projectionInputSchema.parse({ ...raw, loads: [...(raw.loads ?? []), extra] }), { fixes: false });
-        const h = raw.horizonDays!;
+        const h = a.margin.coveredDays; // days are counted over the run that covers the stay
         expect(days(b.parked.daysToCutoff, h)).toBeLessThanOrEqual(days(a.parked.daysToCutoff, h) + EPS);
         expect(days(b.routine.daysToCutoff, h)).toBeLessThanOrEqual(days(a.routine.daysToCutoff, h) + EPS);
       }),
@@ -90,7 +90,7 @@ describe('energy model properties', () => {
         const a = project(projectionInputSchema.parse(raw), { fixes: false });
         const bigger = { ...raw, battery: { ...raw.battery, capacityAh: raw.battery.capacityAh + more } };
         const b = project(projectionInputSchema.parse(bigger), { fixes: false });
-        const h = raw.horizonDays!;
+        const h = a.margin.coveredDays; // days are counted over the run that covers the stay
         expect(days(b.parked.daysToCutoff, h)).toBeGreaterThanOrEqual(days(a.parked.daysToCutoff, h) - EPS);
         expect(days(b.routine.daysToCutoff, h)).toBeGreaterThanOrEqual(days(a.routine.daysToCutoff, h) - EPS);
       }),
@@ -111,7 +111,7 @@ describe('energy model properties', () => {
           const minutes = [...raw.charging!.drivingMinutesPerDay!];
           minutes[day] += extra;
           const b = project(projectionInputSchema.parse({ ...raw, charging: { ...raw.charging, drivingMinutesPerDay: minutes } }), { fixes: false });
-          const h = raw.horizonDays!;
+          const h = a.margin.coveredDays; // days are counted over the run that covers the stay
           expect(days(b.routine.daysToCutoff, h)).toBeGreaterThanOrEqual(days(a.routine.daysToCutoff, h) - EPS);
         },
       ),
@@ -124,7 +124,7 @@ describe('energy model properties', () => {
       fc.property(rigArb(), (raw) => {
         const input = projectionInputSchema.parse(raw);
         const p = project(input);
-        const h = input.horizonDays;
+        const h = p.margin.coveredDays;
         for (const fix of p.fixes) {
           expect(fix.daysGainedParked > 0 || fix.daysGainedRoutine > 0).toBe(true);
           const c = fix.change as { inverter?: object; battery?: object; charging?: object };
@@ -142,6 +142,49 @@ describe('energy model properties', () => {
         expect([...gains].sort((x, y) => y - x)).toEqual(gains);
       }),
       { numRuns: Math.ceil((RUNS * 2) / 3) },
+    );
+  });
+
+  it('judges "holds" and every figure of the week the same for every start hour of the same week', () => {
+    fc.assert(
+      fc.property(rigArb(), fc.array(fc.integer({ min: 0, max: 167 }), { minLength: 3, maxLength: 3 }), (raw, hours) => {
+        const at = (how: number) => project(projectionInputSchema.parse({ ...raw, start: { weekday: Math.floor(how / 24), hour: how % 24 } }), { fixes: false });
+        const first = at(0);
+        for (const how of hours) {
+          const p = at(how);
+          expect(p.routine.holds).toBe(first.routine.holds);
+          expect(p.balance).toEqual(first.balance);
+          expect(p.daily).toEqual(first.daily);
+          expect(p.standby).toEqual(first.standby);
+          expect(p.breakdown).toEqual(first.breakdown);
+        }
+      }),
+      { numRuns: RUNS },
+    );
+  });
+
+  it('moves no figure by more than 0.1 point when the step is halved', () => {
+    fc.assert(
+      fc.property(rigArb(), (raw) => {
+        const input = projectionInputSchema.parse(raw);
+        const a = project(input, { fixes: false });
+        const b = project(input, { fixes: false, substeps: 2 });
+        for (let i = 0; i < a.series.length; i++) {
+          expect(Math.abs(a.series[i].socPercent - b.series[i].socPercent)).toBeLessThanOrEqual(0.1);
+          expect(Math.abs(a.series[i].parkedSocPercent - b.series[i].parkedSocPercent)).toBeLessThanOrEqual(0.1);
+        }
+        expect(b.routine.holds).toBe(a.routine.holds);
+        // Days, and the daily figures as points of the usable capacity (beside their rounding to 0.01 Ah).
+        const usable = a.assumptions.usableAh as number;
+        const close = (x: number, y: number) => expect(Math.abs(x - y)).toBeLessThanOrEqual(0.001 * usable + 0.0101);
+        close(a.daily.consumptionAh, b.daily.consumptionAh);
+        close(a.daily.chargeAh, b.daily.chargeAh);
+        // Beyond the run counts as its end (a crossing at the very end may fall either side of it).
+        const h = a.margin.coveredDays - 1;
+        expect(Math.abs(days(a.routine.daysToCutoff, h) - days(b.routine.daysToCutoff, h))).toBeLessThanOrEqual(0.1);
+        expect(Math.abs(days(a.parked.daysToCutoff, h) - days(b.parked.daysToCutoff, h))).toBeLessThanOrEqual(0.1);
+      }),
+      { numRuns: RUNS },
     );
   });
 });
