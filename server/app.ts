@@ -12,6 +12,7 @@ import { sameOrigin } from './middleware/same-origin';
 import { forgetCachedSessions, requireSession } from './middleware/session';
 import { adminRouter } from './routes/admin';
 import { cableRunsRouter } from './routes/cable-runs';
+import { devicesRouter } from './routes/devices';
 import { clientsRouter } from './routes/clients';
 import { emailRouter } from './routes/email';
 import { healthRouter } from './routes/health';
@@ -61,6 +62,7 @@ export function createApp(ctx: AppContext): Express {
   app.use('/api/health', healthRouter(db, APP_VERSION));
   app.use('/api/projections', rateLimitedOpen(config.RATE_LIMIT_PER_MINUTE), projectionsRouter());
   app.use('/api/cable-runs', rateLimitedOpen(config.RATE_LIMIT_PER_MINUTE), cableRunsRouter());
+  app.use('/api/devices', rateLimitedOpen(config.RATE_LIMIT_PER_MINUTE), devicesRouter());
   app.use('/api/email', rateLimitedOpen(config.RATE_LIMIT_PER_MINUTE), express.urlencoded({ extended: false, limit: '10kb' }), emailRouter(ctx));
   app.use('/api/me', requireSession(auth), meRouter(ctx));
   app.use('/api/readings', rateLimitedOpen(config.RATE_LIMIT_PER_MINUTE), readingsAnalyzeRouter());
