@@ -96,7 +96,8 @@ export function resolve(input: ProjectionInput): Resolved {
     taperFloorA: MODEL_DEFAULTS.taperFloorC * b.capacityAh,
     inverter: inv
       ? {
-          control: inv.control,
+          // A socket live only with the ignition switches the inverter as an ignition relay would.
+          control: inv.connection === 'socket-ignition' ? 'ignition-relay' : inv.control,
           efficiency: inv.efficiencyPercent / 100,
           idleA: inv.idleA,
           ratedW: inv.ratedW,
