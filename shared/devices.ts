@@ -163,14 +163,18 @@ export const DEVICES: readonly Device[] = [
   d('leveling-jacks', 'Electric levelling jacks', 'Vehicle and other', 'dc', { a: 20, h: 0.02, when: 'parked' }, FM, 'A short heavy draw when setting up.'),
 ];
 
-/** Devices whose name, category or note contains every word of the query (case-insensitive); all when empty. */
-export function searchDevices(query: string, category?: DeviceCategory, limit = DEVICES.length): Device[] {
+/** Devices of a list whose name, category or note contains every word of the query (case-insensitive); all when empty. */
+export function filterDevices<D extends Device>(list: readonly D[], query: string, category?: DeviceCategory, limit = list.length): D[] {
   const words = query.toLowerCase().split(/\s+/).filter(Boolean);
-  return DEVICES.filter((dev) => {
-    if (category && dev.category !== category) return false;
-    const text = `${dev.name} ${dev.category} ${dev.note} ${dev.load.supply === 'ac' ? 'ac inverter' : 'dc 12 v'}`.toLowerCase();
-    return words.every((w) => text.includes(w));
-  }).slice(0, limit);
+  return list
+    .filter((dev) => {
+      if (category && dev.category !== category) return false;
+      const text = `${dev.name} ${dev.category} ${dev.note} ${dev.load.supply === 'ac' ? 'ac inverter' : 'dc 12 v'}`.toLowerCase();
+      return words.every((w) => text.includes(w));
+    })
+    .slice(0, limit);
 }
+
+export const searchDevices = (query: string, category?: DeviceCategory, limit?: number) => filterDevices(DEVICES, query, category, limit);
 
 export const DEVICE_CATEGORIES: readonly DeviceCategory[] = [...new Set(DEVICES.map((dev) => dev.category))];

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 
 import type { HouseholdRole } from '../permissions';
+import { ROUTINE_KEYS } from '../routines';
 import { loadSchema, rigPowerSchema } from './projection';
 
 /** What the caller may do with a rig, worked out on the server from their household role. */
@@ -32,6 +33,16 @@ export const rigCreateSchema = z.strictObject({
 });
 export type RigCreateInput = z.infer<typeof rigCreateSchema>;
 export type RigCreateForm = z.input<typeof rigCreateSchema>;
+
+/**
+ * New rig's form: the rig as created, plus the named routine the user started from (never sent: the
+ * routine's minutes are). Nothing about the driving is assumed until the user picks one.
+ */
+export const rigSetupSchema = rigCreateSchema.extend({
+  routine: z.enum([...ROUTINE_KEYS, 'own'], { error: 'Choose how the week\'s driving goes; you can adjust it after.' }),
+});
+export type RigSetupInput = z.infer<typeof rigSetupSchema>;
+export type RigSetupForm = z.input<typeof rigSetupSchema>;
 
 /** A change to a rig: its name, vehicle or power system, against the version the editor saw. */
 export const rigUpdateSchema = z.strictObject({
