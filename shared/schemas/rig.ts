@@ -2,7 +2,7 @@ import { z } from 'zod';
 
 import type { HouseholdRole } from '../permissions';
 import { ROUTINE_KEYS } from '../routines';
-import { loadSchema, rigPowerSchema } from './projection';
+import { batterySchema, loadSchema, rigPowerSchema } from './projection';
 
 /** What the caller may do with a rig, worked out on the server from their household role. */
 export type RigPermissions = { edit: boolean; delete: boolean; manageLoads: boolean; managePeople: boolean; comment: boolean };
@@ -53,6 +53,10 @@ export const rigUpdateSchema = z.strictObject({
 });
 export type RigUpdateInput = z.infer<typeof rigUpdateSchema>;
 export type RigUpdateForm = z.input<typeof rigUpdateSchema>;
+
+/** The cut-off as set from "How this was worked out" (the rest of the power system is sent as it was). */
+export const cutoffFormSchema = z.object({ cutoffSocPercent: batterySchema.shape.cutoffSocPercent.unwrap() });
+export type CutoffForm = z.input<typeof cutoffFormSchema>;
 
 export const loadParamsSchema = z.object({ rigId: z.uuid(), loadId: z.uuid() });
 
