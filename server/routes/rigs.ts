@@ -5,7 +5,7 @@ import { invitationCreateSchema, invitationParamsSchema, memberParamsSchema, mem
 import { cableRunParamsSchema, cableRunSchema } from '@/shared/schemas/cable-run';
 import { noteCreateSchema, noteEditSchema, noteParamsSchema } from '@/shared/schemas/note';
 import { loadSchema } from '@/shared/schemas/projection';
-import { loadParamsSchema, rigCreateSchema, rigUpdateSchema, tryLoadsSchema } from '@/shared/schemas/rig';
+import { loadParamsSchema, rigCreateSchema, rigUpdateSchema, sheetQuerySchema, tryLoadsSchema } from '@/shared/schemas/rig';
 import type { AppContext } from '../context';
 import { rigAccess, rigOf } from '../middleware/rig-access';
 import { session } from '../middleware/session';
@@ -15,6 +15,7 @@ import * as cableRuns from '../services/cable-runs';
 import * as notes from '../services/notes';
 import * as rigs from '../services/rigs';
 import * as reports from '../services/reports';
+import { budgetSheet } from '../services/sheet';
 import { historyOf } from '../services/history';
 import { noteRecipients } from '../jobs/notes';
 import { HttpError } from '../errors';
@@ -66,6 +67,12 @@ export function rigsRouter({ db, auth, jobs, config }: AppContext) {
     res.type('json');
     if (req.acceptsEncodings('gzip', 'identity') === 'gzip') return res.set('Content-Encoding', 'gzip').send(body.gzip);
     res.send(body.json);
+  });
+
+  // The budget sheet: household only, like the Outlook it is made from.
+  router.get('/:rigId/sheet.pdf', rigAccess(db, { rig: ['read'] }), validate(sheetQuerySchema, 'query'), async (_req, res) => {
+    const { pdf, filename } = await budgetSheet(db, rigOf(res), parsed(res, sheetQuerySchema, 'query').size);
+    res.set({ 'Content-Disposition': `attachment; filename="${filename}"`, 'Cache-Control': 'private, no-store' }).type('pdf').send(pdf);
   });
 
   router.post('/:rigId/try', rigAccess(db, { rig: ['read'] }), validate(tryLoadsSchema), async (_req, res) => {

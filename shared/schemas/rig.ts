@@ -58,6 +58,9 @@ export type RigUpdateForm = z.input<typeof rigUpdateSchema>;
 export const cutoffFormSchema = z.object({ cutoffSocPercent: batterySchema.shape.cutoffSocPercent.unwrap() });
 export type CutoffForm = z.input<typeof cutoffFormSchema>;
 
+/** GET /api/rigs/:rigId/sheet.pdf?size=a4|letter: the budget sheet's paper. */
+export const sheetQuerySchema = z.strictObject({ size: z.enum(['a4', 'letter'], { error: 'Choose a4 or letter.' }).default('a4') });
+
 export const loadParamsSchema = z.object({ rigId: z.uuid(), loadId: z.uuid() });
 
 export const tryLoadsSchema = z.strictObject({

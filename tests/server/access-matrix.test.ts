@@ -176,6 +176,7 @@ const MATRIX: Record<string, Entry> = {
     expect: ownerOnly(204),
   },
   'GET /api/rigs/:rigId/outlook': { send: (a, c) => a.get(`/api/rigs/${c.rigId}/outlook`), expect: readRig },
+  'GET /api/rigs/:rigId/sheet.pdf': { send: (a, c) => a.get(`/api/rigs/${c.rigId}/sheet.pdf`), expect: readRig },
   'POST /api/rigs/:rigId/try': { send: (a, c) => a.post(`/api/rigs/${c.rigId}/try`).set('Origin', TEST_ORIGIN).send({ candidates: [LOAD] }), expect: readRig },
   'POST /api/rigs/:rigId/loads': { send: (a, c) => a.post(`/api/rigs/${c.rigId}/loads`).set('Origin', TEST_ORIGIN).send(LOAD), expect: editRole(201) },
   'PATCH /api/rigs/:rigId/loads/:loadId': {
