@@ -42,7 +42,7 @@ export function rigsRouter({ db, auth, jobs, config }: AppContext) {
   });
 
   router.post('/', validate(rigCreateSchema), async (_req, res) => {
-    const id = await rigs.createRig(db, auth, session(res).user.id, parsed(res, rigCreateSchema));
+    const id = await rigs.createRig(db, auth, actor(res), parsed(res, rigCreateSchema));
     res.status(201).location(`/api/rigs/${id}`).json({ id });
   });
 
@@ -97,15 +97,15 @@ export function rigsRouter({ db, auth, jobs, config }: AppContext) {
   });
 
   router.post('/:rigId/cable-runs', rigAccess(db, { cableRun: ['create'] }), validate(cableRunSchema), async (_req, res) => {
-    res.status(201).json(await cableRuns.addCableRun(db, rigOf(res), session(res).user.id, parsed(res, cableRunSchema)));
+    res.status(201).json(await cableRuns.addCableRun(db, rigOf(res), actor(res), parsed(res, cableRunSchema)));
   });
 
   router.patch('/:rigId/cable-runs/:runId', rigAccess(db, { cableRun: ['update'] }), validate(cableRunParamsSchema, 'params'), validate(cableRunSchema), async (_req, res) => {
-    res.json(await cableRuns.editCableRun(db, rigOf(res), parsed(res, cableRunParamsSchema, 'params').runId, parsed(res, cableRunSchema)));
+    res.json(await cableRuns.editCableRun(db, rigOf(res), actor(res), parsed(res, cableRunParamsSchema, 'params').runId, parsed(res, cableRunSchema)));
   });
 
   router.delete('/:rigId/cable-runs/:runId', rigAccess(db, { cableRun: ['delete'] }), validate(cableRunParamsSchema, 'params'), async (_req, res) => {
-    await cableRuns.removeCableRun(db, rigOf(res), parsed(res, cableRunParamsSchema, 'params').runId);
+    await cableRuns.removeCableRun(db, rigOf(res), actor(res), parsed(res, cableRunParamsSchema, 'params').runId);
     res.status(204).end();
   });
 
