@@ -163,6 +163,15 @@ export function rigsRouter({ db, auth, jobs, config }: AppContext) {
       .send((mail.html ?? '').replaceAll('cid:week-ahead', `/api/rigs/${rigId}/emails/${emailId}/chart.png`));
   });
 
+  // The next weekly report, previewed (nothing is sent): a strict policy like a sent one, its chart inline.
+  router.get('/:rigId/report-preview', rigAccess(db, { rig: ['read'] }), async (_req, res) => {
+    const html = await reports.reportPreview(db, config, rigOf(res), actor(res));
+    res
+      .set({ 'Content-Security-Policy': "default-src 'none'; img-src data:; style-src 'unsafe-inline'; frame-ancestors 'self' " + config.TRUSTED_ORIGINS.join(' '), 'Cache-Control': 'private, no-store' })
+      .type('html')
+      .send(html);
+  });
+
   router.get('/:rigId/emails/:emailId/chart.png', rigAccess(db, { rig: ['read'] }), validate(emailParamsSchema, 'params'), async (_req, res) => {
     const { rigId, emailId } = parsed(res, emailParamsSchema, 'params');
     const mail = await reports.sentEmail(db, rigId, emailId);

@@ -227,6 +227,7 @@ const MATRIX: Record<string, Entry> = {
     expect: { ...all(403), anonymous: 401 },
   },
   'GET /api/rigs/:rigId/history': { send: (a, c) => a.get(`/api/rigs/${c.rigId}/history`), expect: readRig },
+  'GET /api/rigs/:rigId/report-preview': { send: (a, c) => a.get(`/api/rigs/${c.rigId}/report-preview`), expect: readRig },
   'GET /api/rigs/:rigId/emails': { send: (a, c) => a.get(`/api/rigs/${c.rigId}/emails`), expect: readRig },
   'GET /api/rigs/:rigId/emails/:emailId': { send: async (a, c) => a.get(`/api/rigs/${c.rigId}/emails/${await sentEmailId()}`), expect: readRig },
   'GET /api/rigs/:rigId/emails/:emailId/chart.png': { send: async (a, c) => a.get(`/api/rigs/${c.rigId}/emails/${await sentEmailId()}/chart.png`), expect: readRig },
