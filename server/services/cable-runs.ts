@@ -1,5 +1,5 @@
 import type { Db } from '@/db/client';
-import type { CableRunTable } from '@/db/schema';
+import type { CableRunTable, HistoryKind } from '@/db/schema';
 import type { Selectable } from 'kysely';
 import { loadRunningCurrentA } from '@/shared/energy/profile';
 import { AWG_SIZES, type Awg, MM2_SIZES, NoConductorError, sizeCableRun } from '@/shared/energy/wiring';
@@ -12,7 +12,6 @@ import { readRig } from './rigs';
 import { stripLoad } from './rigs-model';
 import { type Actor, daysParkedOf, describeCableRun, describeCableRunEdit } from './history';
 import { insertHistory } from '../repositories/history';
-import type { HistoryKind } from '@/db/schema';
 
 type Row = Selectable<CableRunTable>;
 

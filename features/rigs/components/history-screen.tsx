@@ -16,7 +16,7 @@ export function HistoryScreen({ rigId }: { rigId: string }) {
   return (
     <Card testID="history">
       <Heading>History</Heading>
-      {history.data.length ? null : <Small>No changes yet. The rig's creation, edits to loads, cable runs, the battery, the inverter, charging and the routine, and people joining or leaving, show here.</Small>}
+      {history.data.length ? null : <Small>No changes yet. The rig&apos;s creation, edits to loads, cable runs, the battery, the inverter, charging and the routine, and people joining or leaving, show here.</Small>}
       {history.data.map((h) => {
         const created = h.kind === 'rig-created';
         const moved = !created && h.daysParkedBefore !== h.daysParkedAfter;
