@@ -21,7 +21,7 @@ export function DrivingFields<T extends FieldValues>({ control, prefix }: Props<
       <View style={styles.days}>
         {DAYS.map((d, i) => (
           <View key={d} style={{ width: 84 }}>
-            <NumberField control={control} name={at<T>(prefix, `charging.drivingMinutesPerDay.${i}`)} label={d} unit="min" />
+            <NumberField control={control} name={at<T>(prefix, `charging.drivingMinutesPerDay.${i}`)} label={d} />
           </View>
         ))}
       </View>
