@@ -1,3 +1,4 @@
+import { filterDevices } from './device-search';
 import type { LoadInput } from './schemas/projection';
 
 // The device catalogue: typical devices with a typical draw, duty cycle and hours, to pick loads from.
@@ -162,18 +163,6 @@ export const DEVICES: readonly Device[] = [
   d('lift-bed', 'Electric lift bed', 'Vehicle and other', 'dc', { a: 10, h: 0.02, from: 22, when: 'parked' }, FM, 'Moves for about a minute a day.'),
   d('leveling-jacks', 'Electric levelling jacks', 'Vehicle and other', 'dc', { a: 20, h: 0.02, when: 'parked' }, FM, 'A short heavy draw when setting up.'),
 ];
-
-/** Devices of a list whose name, category or note contains every word of the query (case-insensitive); all when empty. */
-export function filterDevices<D extends Device>(list: readonly D[], query: string, category?: DeviceCategory, limit = list.length): D[] {
-  const words = query.toLowerCase().split(/\s+/).filter(Boolean);
-  return list
-    .filter((dev) => {
-      if (category && dev.category !== category) return false;
-      const text = `${dev.name} ${dev.category} ${dev.note} ${dev.load.supply === 'ac' ? 'ac inverter' : 'dc 12 v'}`.toLowerCase();
-      return words.every((w) => text.includes(w));
-    })
-    .slice(0, limit);
-}
 
 export const searchDevices = (query: string, category?: DeviceCategory, limit?: number) => filterDevices(DEVICES, query, category, limit);
 

@@ -2,7 +2,8 @@ import { useState } from 'react';
 import { ActivityIndicator, Pressable, StyleSheet, Text, TextInput, View } from 'react-native';
 
 import { Small } from '@/components/ui';
-import { type Device, filterDevices } from '@/shared/devices';
+import { filterDevices } from '@/shared/device-search';
+import type { Device } from '@/shared/devices';
 import { colors, radius, space, type } from '@/shared/theme';
 import { useDevicesQuery } from '../api/devices';
 

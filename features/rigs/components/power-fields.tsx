@@ -1,10 +1,11 @@
 // Power-system fields that New rig and Power both show: the week's driving, shore power and its days.
 // `prefix` is where the power system sits in the form ('' on Power, 'power.' in New rig).
-import { type Control, Controller, type FieldPath, type FieldValues } from 'react-hook-form';
+import { type Control, Controller, type FieldPath, type FieldValues, useWatch } from 'react-hook-form';
 import { Pressable, StyleSheet, Switch, Text, View } from 'react-native';
 
 import { NumberField } from '@/components/form';
 import { Small } from '@/components/ui';
+import { routineOf } from '@/shared/routines';
 import { colors, space, type } from '@/shared/theme';
 
 export const DAYS = ['Mon', 'Tue', 'Wed', 'Thu', 'Fri', 'Sat', 'Sun'];
@@ -15,8 +16,16 @@ const at = <T extends FieldValues>(prefix: string, path: string) => `${prefix}${
 
 /** Minutes of driving on each day of the week and the hour the day's driving starts. */
 export function DrivingFields<T extends FieldValues>({ control, prefix }: Props<T>) {
+  const minutes = useWatch({ control, name: at<T>(prefix, 'charging.drivingMinutesPerDay') }) as number[] | undefined;
+  const start = useWatch({ control, name: at<T>(prefix, 'charging.drivingStartHour') }) as number | undefined;
+  const ok = Array.isArray(minutes) && minutes.length === 7 && minutes.every(Number.isFinite) && Number.isFinite(start);
   return (
     <>
+      {ok ? (
+        <Text style={styles.routine} testID="routine-name">
+          {routineOf({ drivingMinutesPerDay: minutes, drivingStartHour: start! }).name}
+        </Text>
+      ) : null}
       <Small>Minutes of driving each day.</Small>
       <View style={styles.days}>
         {DAYS.map((d, i) => (
@@ -91,4 +100,5 @@ const styles = StyleSheet.create({
   chipText: { ...type.small, color: colors.ink, fontFamily: 'Nunito_700Bold' },
   chipTextOn: { color: colors.paper },
   error: { ...type.small, color: colors.short, fontFamily: 'Nunito_700Bold' },
+  routine: { ...type.body, color: colors.ink, fontFamily: 'Nunito_700Bold' },
 });
