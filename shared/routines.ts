@@ -34,7 +34,10 @@ export function describeDriving(minutes: readonly number[], startHour: number): 
   const same = days.every((i) => minutes[i] === minutes[days[0]]);
   const when = `from ${String(startHour).padStart(2, '0')}:00`;
   if (days.length === 1) return `${minutes[days[0]]} min on ${DAY[days[0]]} ${when}`;
-  if (same) return `${minutes[days[0]]} min on ${days.length === 7 ? 'every day' : `${days.length} days a week (${days.map((i) => DAY[i]).join(', ')})`} ${when}`;
+  // A run of days reads as "Mon to Sat"; scattered days are listed.
+  const run = days.every((d, k) => k === 0 || d === days[k - 1] + 1);
+  const which = run && days.length > 2 ? `${DAY[days[0]]} to ${DAY[days[days.length - 1]]}` : days.map((i) => DAY[i]).join(', ');
+  if (same) return `${minutes[days[0]]} min on ${days.length === 7 ? 'every day' : `${days.length} days a week (${which})`} ${when}`;
   return `${total} min a week over ${days.length} days ${when}`;
 }
 
