@@ -133,7 +133,7 @@ export interface RigHistoryTable {
   days_parked_after: number | null;
   created_at: Timestamp;
 }
-export type HistoryKind = 'load-added' | 'load-edited' | 'load-removed' | 'reading-added' | 'reading-removed' | 'battery' | 'inverter' | 'charging' | 'routine' | 'stay' | 'rig' | 'member-joined' | 'member-left' | 'member-removed' | 'role-changed';
+export type HistoryKind = 'rig-created' | 'cable-run-added' | 'cable-run-edited' | 'cable-run-removed' | 'load-added' | 'load-edited' | 'load-removed' | 'reading-added' | 'reading-removed' | 'battery' | 'inverter' | 'charging' | 'routine' | 'stay' | 'rig' | 'member-joined' | 'member-left' | 'member-removed' | 'role-changed';
 
 export interface EmailPrefsTable {
   user_id: string;

@@ -86,6 +86,15 @@ ensure_auth_secret() {
   export AUTH_SECRET
 }
 
+# poppler-utils: pdftotext and pdfinfo read the budget sheet back in its tests.
+ensure_poppler() {
+  if command -v pdftotext >/dev/null && command -v pdfinfo >/dev/null; then return; fi
+  say "installing Debian's poppler-utils for the budget sheet tests"
+  if [ "$(id -u)" != 0 ]; then say "need root for apt-get install poppler-utils"; exit 1; fi
+  DEBIAN_FRONTEND=noninteractive apt-get update -qq
+  DEBIAN_FRONTEND=noninteractive apt-get install -y -qq poppler-utils >/dev/null
+}
+
 ensure_chromium() {
   if [ -x /usr/bin/chromium ]; then return; fi
   say "installing Debian's chromium for the browser tests"

@@ -20,6 +20,7 @@ start_s3
 cd "$ROOT"
 say "type check"; npx tsc --noEmit
 say "lint"; npx eslint . --max-warnings=0
+ensure_poppler
 say "unit and integration tests"; npx vitest run --reporter=default --reporter=json --outputFile.json=test-results/unit.json
 build_web
 ensure_chromium

@@ -13,6 +13,7 @@ import { sameOrigin } from './middleware/same-origin';
 import { forgetCachedSessions, requireSession } from './middleware/session';
 import { adminRouter } from './routes/admin';
 import { cableRunsRouter } from './routes/cable-runs';
+import { devicesRouter } from './routes/devices';
 import { clientsRouter } from './routes/clients';
 import { emailRouter } from './routes/email';
 import { healthRouter } from './routes/health';
@@ -79,6 +80,7 @@ export function createApp(ctx: AppContext): Express {
   const openLimit = rateLimitedOpen(config.RATE_LIMIT_PER_MINUTE);
   app.use('/api/projections', openLimit, projectionsRouter());
   app.use('/api/cable-runs', openLimit, cableRunsRouter());
+  app.use('/api/devices', openLimit, devicesRouter());
   app.use('/api/email', openLimit, express.urlencoded({ extended: false, limit: '10kb' }), emailRouter(ctx));
   app.use('/api/me', requireSession(auth), meRouter(ctx));
   app.use('/api/readings', openLimit, readingsAnalyzeRouter());

@@ -12,7 +12,7 @@ const DAYS = ['Mon', 'Tue', 'Wed', 'Thu', 'Fri', 'Sat', 'Sun'];
  * each day's name at its noon. firstHourOfWeek is the hour of the week (Monday 00:00 = 0) of the first
  * point; the points are an hour apart. Our own drawing, no chart library.
  */
-export function weekChartSvg(socPercent: number[], cutoffSocPercent: number, firstHourOfWeek: number) {
+export function weekChartSvg(socPercent: number[], cutoffSocPercent: number, firstHourOfWeek: number, parkedSocPercent?: number[]) {
   const w = 560;
   const h = 200;
   const left = 40;
@@ -24,7 +24,10 @@ export function weekChartSvg(socPercent: number[], cutoffSocPercent: number, fir
   const n = Math.max(1, socPercent.length - 1);
   const x = (i: number) => left + (i / n) * iw;
   const y = (soc: number) => top + (1 - Math.max(0, Math.min(100, soc)) / 100) * ih;
-  const line = socPercent.map((s, i) => `${i ? 'L' : 'M'}${x(i).toFixed(1)} ${y(s).toFixed(1)}`).join(' ');
+  const path = (series: number[]) => series.map((s, i) => `${i ? 'L' : 'M'}${x(i).toFixed(1)} ${y(s).toFixed(1)}`).join(' ');
+  const line = path(socPercent);
+  // The budget sheet adds the parked line (no driving at all) in grey under the routine's.
+  const parked = parkedSocPercent ? `<path d="${path(parkedSocPercent)}" fill="none" stroke="${colors.inkSoft}" stroke-width="1.5" stroke-dasharray="2 3"/>` : '';
   const grid = [0, 50, 100]
     .map((v) => `<line x1="${left}" x2="${w - right}" y1="${y(v)}" y2="${y(v)}" stroke="${colors.line}" stroke-width="1"/><text x="${left - 6}" y="${y(v) + 4}" font-size="11" text-anchor="end" fill="${colors.inkSoft}">${v} %</text>`)
     .join('');
@@ -40,12 +43,16 @@ export function weekChartSvg(socPercent: number[], cutoffSocPercent: number, fir
 <rect width="${w}" height="${h}" fill="#FFFFFF"/>${grid}${midnights}
 <line x1="${left}" x2="${w - right}" y1="${y(cutoffSocPercent)}" y2="${y(cutoffSocPercent)}" stroke="${colors.short}" stroke-width="1.5" stroke-dasharray="6 4"/>
 <text x="${w - right}" y="${y(cutoffSocPercent) - 4}" font-size="11" text-anchor="end" fill="${colors.short}">cut-off ${cutoffSocPercent} %</text>
-<path d="${line}" fill="none" stroke="${colors.night}" stroke-width="2.5" stroke-linejoin="round"/>${days}
+${parked}<path d="${line}" fill="none" stroke="${colors.night}" stroke-width="2.5" stroke-linejoin="round"/>${days}
 </svg>`;
 }
 
 /** The chart as a PNG for the e-mail (mail programs do not show SVG), drawn with the app's own Nunito. */
 export function weekChartPng(socPercent: number[], cutoffSocPercent: number, firstHourOfWeek: number): Buffer {
-  const svg = weekChartSvg(socPercent, cutoffSocPercent, firstHourOfWeek);
-  return new Resvg(svg, { font: { fontFiles: [FONT], loadSystemFonts: false, defaultFontFamily: 'Nunito' }, fitTo: { mode: 'width', value: 1120 } }).render().asPng();
+  return svgToPng(weekChartSvg(socPercent, cutoffSocPercent, firstHourOfWeek));
+}
+
+/** An SVG chart as a PNG at twice its width (sharp in mail and print), drawn with the app's own Nunito. */
+export function svgToPng(svg: string, widthPx = 1120): Buffer {
+  return new Resvg(svg, { font: { fontFiles: [FONT], loadSystemFonts: false, defaultFontFamily: 'Nunito' }, fitTo: { mode: 'width', value: widthPx } }).render().asPng();
 }

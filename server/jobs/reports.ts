@@ -55,45 +55,60 @@ export async function sendReport(deps: JobDeps, job: ReportJob) {
     if (!user || !user.on || !stillMember) return null;
     const previousMeta = await lastSentMeta(db, job.userId, job.rigId, 'report', reportKey(job.userId, job.rigId, job.weekKey));
     const lastState = (previousMeta as { figures?: RigFigures } | null)?.figures?.marginState;
-    const f = job.figures;
     const notes = await openAdvisorThreads(db, job.rigId);
-    const chartPng = weekChartPng(f.weekSocPercent, f.cutoffSocPercent, f.chartStartHourOfWeek);
-    const change = !lastState ? 'your first weekly report for this rig' : lastState === f.marginState ? `unchanged since last week` : `${STATE_WORD[lastState]} last week`;
-    const { html, text } = await renderLetter({
-      preview: `${f.rigName}: ${daysText(f.daysParked, f.horizonDays)} parked, margin ${STATE_WORD[f.marginState]}`,
-      heading: `${f.rigName}: your week ahead`,
-      intro: [`Hello ${user.name}, here is ${f.rigName}'s battery budget for the week of ${job.weekKey}.`],
-      sections: [
-        {
-          rows: [
-            ['Days parked', daysText(f.daysParked, f.horizonDays)],
-            ['Days on your routine', f.holds ? 'holds (the week balances)' : daysText(f.daysOnRoutine, f.horizonDays)],
-            ['Margin', `${STATE_WORD[f.marginState]} (${change})`],
-            ['Planned stay', `${f.plannedStayDays} days`],
-          ],
-        },
-        { heading: 'The week ahead', image: { cid: 'week-ahead', alt: `State of charge over the next 7 days; cut-off at ${f.cutoffSocPercent} %` } },
-        {
-          heading: 'Biggest drains',
-          rows: f.drains.map((d) => [d.kind === 'standby' ? `${d.name} (standby)` : d.name, `${d.ahPerDay.toFixed(1)} Ah a day, ${d.sharePercent} %`]),
-          lines: [`Standby (inverter idle, key-off draw, self-discharge) is ${f.standbySharePercent} % of what the rig uses.`],
-        },
-        ...(f.fixes.length
-          ? [{ heading: 'Top Fixes', lines: f.fixes.map((x) => `${x.summary} (${x.gain})`), caution: needsWiringCaution(f.fixes) ? FIX_WIRING_CAUTION : undefined }]
-          : []),
-        ...(notes.length ? [{ heading: 'Open notes from your advisor', lines: notes.map((n) => `${n.author ?? 'Advisor'}: ${n.body.length > 160 ? `${n.body.slice(0, 157)}…` : n.body}`) }] : []),
-      ],
-      action: { label: 'Open the Outlook', url: `${config.KEYOFF_URL}/rigs/${job.rigId}` },
-      footer: footerFor(config, user.id, 'reports'),
-    });
+    const chartPng = weekChartPng(job.figures.weekSocPercent, job.figures.cutoffSocPercent, job.figures.chartStartHourOfWeek);
+    const { html, text, subject } = await reportLetter(config, user, job, lastState, notes);
     return {
       to: user.email,
-      subject: `${f.rigName}: ${daysText(f.daysParked, f.horizonDays)} parked, margin ${STATE_WORD[f.marginState]}`,
+      subject,
       html,
       text,
       chartPng,
       headers: listHeaders(config, user.id, 'reports'),
-      meta: { weekKey: job.weekKey, scheduledFor: job.scheduledFor, figures: { ...f, weekSocPercent: undefined } },
+      meta: { weekKey: job.weekKey, scheduledFor: job.scheduledFor, figures: { ...job.figures, weekSocPercent: undefined } },
     };
   });
+}
+
+/**
+ * The weekly report's letter for one person: what sendReport mails, and what the Reports screen previews
+ * before the first one goes out. The chart is the image `cid:week-ahead`.
+ */
+export async function reportLetter(
+  config: JobDeps['config'],
+  user: { id: string; name: string },
+  job: Pick<ReportJob, 'rigId' | 'weekKey' | 'figures'>,
+  lastState: RigFigures['marginState'] | undefined,
+  notes: { author: string | null; body: string }[],
+) {
+  const f = job.figures;
+  const change = !lastState ? 'your first weekly report for this rig' : lastState === f.marginState ? `unchanged since last week` : `${STATE_WORD[lastState]} last week`;
+  const letter = await renderLetter({
+    preview: `${f.rigName}: ${daysText(f.daysParked, f.horizonDays)} parked, margin ${STATE_WORD[f.marginState]}`,
+    heading: `${f.rigName}: your week ahead`,
+    intro: [`Hello ${user.name}, here is ${f.rigName}'s battery budget for the week of ${job.weekKey}.`],
+    sections: [
+      {
+        rows: [
+          ['Days parked', daysText(f.daysParked, f.horizonDays)],
+          ['Days on your routine', f.holds ? 'holds (the week balances)' : daysText(f.daysOnRoutine, f.horizonDays)],
+          ['Margin', `${STATE_WORD[f.marginState]} (${change})`],
+          ['Planned stay', `${f.plannedStayDays} days`],
+        ],
+      },
+      { heading: 'The week ahead', image: { cid: 'week-ahead', alt: `State of charge over the next 7 days; cut-off at ${f.cutoffSocPercent} %` } },
+      {
+        heading: 'Biggest drains',
+        rows: f.drains.map((d) => [d.kind === 'standby' ? `${d.name} (standby)` : d.name, `${d.ahPerDay.toFixed(1)} Ah a day, ${d.sharePercent} %`]),
+        lines: [`Standby (inverter idle, key-off draw, self-discharge) is ${f.standbySharePercent} % of what the rig uses.`],
+      },
+      ...(f.fixes.length
+        ? [{ heading: 'Top Fixes', lines: f.fixes.map((x) => `${x.summary} (${x.gain})`), caution: needsWiringCaution(f.fixes) ? FIX_WIRING_CAUTION : undefined }]
+        : []),
+      ...(notes.length ? [{ heading: 'Open notes from your advisor', lines: notes.map((n) => `${n.author ?? 'Advisor'}: ${n.body.length > 160 ? `${n.body.slice(0, 157)}…` : n.body}`) }] : []),
+    ],
+    action: { label: 'Open the Outlook', url: `${config.KEYOFF_URL}/rigs/${job.rigId}` },
+    footer: footerFor(config, user.id, 'reports'),
+  });
+  return { ...letter, subject: `${f.rigName}: ${daysText(f.daysParked, f.horizonDays)} parked, margin ${STATE_WORD[f.marginState]}` };
 }

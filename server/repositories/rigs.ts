@@ -46,6 +46,8 @@ export async function insertRig(
   db: Exec,
   rig: { householdId: string; createdBy: string; name: string; vehicle: string; power: unknown },
   loads: Omit<NewLoad, 'rig_id'>[],
+  /** Runs in the same transaction once the rig is there (its History entry). */
+  then?: (trx: Transaction<Database>, row: RigRow) => Promise<void>,
 ): Promise<RigRow> {
   return db.transaction().execute(async (trx) => {
     const row = await trx
@@ -54,6 +56,7 @@ export async function insertRig(
       .returningAll()
       .executeTakeFirstOrThrow();
     if (loads.length) await trx.insertInto('loads').values(loads.map((l) => ({ ...l, rig_id: row.id }))).execute();
+    await then?.(trx, row);
     return row;
   });
 }

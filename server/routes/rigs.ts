@@ -5,7 +5,7 @@ import { invitationCreateSchema, invitationParamsSchema, memberParamsSchema, mem
 import { cableRunParamsSchema, cableRunSchema } from '@/shared/schemas/cable-run';
 import { noteCreateSchema, noteEditSchema, noteParamsSchema } from '@/shared/schemas/note';
 import { loadSchema } from '@/shared/schemas/projection';
-import { loadParamsSchema, rigCreateSchema, rigUpdateSchema, tryLoadsSchema } from '@/shared/schemas/rig';
+import { loadParamsSchema, rigCreateSchema, rigUpdateSchema, sheetQuerySchema, tryLoadsSchema } from '@/shared/schemas/rig';
 import type { AppContext } from '../context';
 import { rigAccess, rigOf } from '../middleware/rig-access';
 import { session } from '../middleware/session';
@@ -15,6 +15,7 @@ import * as cableRuns from '../services/cable-runs';
 import * as notes from '../services/notes';
 import * as rigs from '../services/rigs';
 import * as reports from '../services/reports';
+import { budgetSheet } from '../services/sheet';
 import { historyOf } from '../services/history';
 import { noteRecipients } from '../jobs/notes';
 import { HttpError } from '../errors';
@@ -42,7 +43,7 @@ export function rigsRouter({ db, auth, jobs, config, storage }: AppContext) {
   });
 
   router.post('/', validate(rigCreateSchema), async (_req, res) => {
-    const id = await rigs.createRig(db, auth, session(res).user.id, parsed(res, rigCreateSchema));
+    const id = await rigs.createRig(db, auth, actor(res), parsed(res, rigCreateSchema));
     res.status(201).location(`/api/rigs/${id}`).json({ id });
   });
 
@@ -70,6 +71,12 @@ export function rigsRouter({ db, auth, jobs, config, storage }: AppContext) {
     res.send(body.json);
   });
 
+  // The budget sheet: household only, like the Outlook it is made from.
+  router.get('/:rigId/sheet.pdf', rigAccess(db, { rig: ['read'] }), validate(sheetQuerySchema, 'query'), async (_req, res) => {
+    const { pdf, filename } = await budgetSheet(db, rigOf(res), parsed(res, sheetQuerySchema, 'query').size);
+    res.set({ 'Content-Disposition': `attachment; filename="${filename}"`, 'Cache-Control': 'private, no-store' }).type('pdf').send(pdf);
+  });
+
   router.post('/:rigId/try', rigAccess(db, { rig: ['read'] }), validate(tryLoadsSchema), async (_req, res) => {
     res.json(await rigs.tryLoads(db, rigOf(res), parsed(res, tryLoadsSchema).candidates));
   });
@@ -92,15 +99,15 @@ export function rigsRouter({ db, auth, jobs, config, storage }: AppContext) {
   });
 
   router.post('/:rigId/cable-runs', rigAccess(db, { cableRun: ['create'] }), validate(cableRunSchema), async (_req, res) => {
-    res.status(201).json(await cableRuns.addCableRun(db, rigOf(res), session(res).user.id, parsed(res, cableRunSchema)));
+    res.status(201).json(await cableRuns.addCableRun(db, rigOf(res), actor(res), parsed(res, cableRunSchema)));
   });
 
   router.patch('/:rigId/cable-runs/:runId', rigAccess(db, { cableRun: ['update'] }), validate(cableRunParamsSchema, 'params'), validate(cableRunSchema), async (_req, res) => {
-    res.json(await cableRuns.editCableRun(db, rigOf(res), parsed(res, cableRunParamsSchema, 'params').runId, parsed(res, cableRunSchema)));
+    res.json(await cableRuns.editCableRun(db, rigOf(res), actor(res), parsed(res, cableRunParamsSchema, 'params').runId, parsed(res, cableRunSchema)));
   });
 
   router.delete('/:rigId/cable-runs/:runId', rigAccess(db, { cableRun: ['delete'] }), validate(cableRunParamsSchema, 'params'), async (_req, res) => {
-    await cableRuns.removeCableRun(db, rigOf(res), parsed(res, cableRunParamsSchema, 'params').runId);
+    await cableRuns.removeCableRun(db, rigOf(res), actor(res), parsed(res, cableRunParamsSchema, 'params').runId);
     res.status(204).end();
   });
 
@@ -156,6 +163,15 @@ export function rigsRouter({ db, auth, jobs, config, storage }: AppContext) {
       .set('Content-Security-Policy', "default-src 'none'; img-src 'self'; style-src 'unsafe-inline'; frame-ancestors 'self' " + config.TRUSTED_ORIGINS.join(' '))
       .type('html')
       .send((mail.html ?? '').replaceAll('cid:week-ahead', `/api/rigs/${rigId}/emails/${emailId}/chart.png`));
+  });
+
+  // The next weekly report, previewed (nothing is sent): a strict policy like a sent one, its chart inline.
+  router.get('/:rigId/report-preview', rigAccess(db, { rig: ['read'] }), async (_req, res) => {
+    const html = await reports.reportPreview(db, config, rigOf(res), actor(res));
+    res
+      .set({ 'Content-Security-Policy': "default-src 'none'; img-src data:; style-src 'unsafe-inline'; frame-ancestors 'self' " + config.TRUSTED_ORIGINS.join(' '), 'Cache-Control': 'private, no-store' })
+      .type('html')
+      .send(html);
   });
 
   router.get('/:rigId/emails/:emailId/chart.png', rigAccess(db, { rig: ['read'] }), validate(emailParamsSchema, 'params'), async (_req, res) => {

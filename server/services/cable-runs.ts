@@ -1,5 +1,5 @@
 import type { Db } from '@/db/client';
-import type { CableRunTable } from '@/db/schema';
+import type { CableRunTable, HistoryKind } from '@/db/schema';
 import type { Selectable } from 'kysely';
 import { loadRunningCurrentA } from '@/shared/energy/profile';
 import { AWG_SIZES, type Awg, inverterFeedCurrentA, MM2_SIZES, NoConductorError, sizeCableRun } from '@/shared/energy/wiring';
@@ -9,6 +9,9 @@ import { HttpError } from '../errors';
 import { deleteCableRun, insertCableRun, listCableRuns, updateCableRun } from '../repositories/cable-runs';
 import type { RigAccess } from '../middleware/rig-access';
 import { readRig } from './rigs';
+import { stripLoad } from './rigs-model';
+import { type Actor, daysParkedOf, describeCableRun, describeCableRunEdit } from './history';
+import { insertHistory } from '../repositories/history';
 
 type Row = Selectable<CableRunTable>;
 
@@ -108,19 +111,46 @@ async function checkLoad(db: Db, rig: RigAccess, run: CableRunInput) {
   if (!dto.loads.some((l) => l.id === run.loadId)) throw new HttpError(400, 'validation_failed', 'That load is not on this rig.', [{ path: 'loadId', message: 'Choose one of this rig\'s loads.' }]);
 }
 
-export async function addCableRun(db: Db, rig: RigAccess, userId: string, run: CableRunInput) {
+const wordsOf = (row: Row) => ({ label: row.label, from: row.from_point, to: row.to_point, lengthM: row.length_m, currentA: row.current_a ?? undefined, loadId: row.load_id ?? undefined, maxDropPercent: row.max_drop_percent });
+
+/** A History entry for a cable run (the forecast does not move: before and after are the same). */
+async function record(db: Db, rig: RigAccess, actor: Actor, kind: HistoryKind, summary: string) {
+  const dto = await readRig(db, rig);
+  const days = daysParkedOf(dto.power, dto.loads.map(stripLoad));
+  return (trx: Db) => insertHistory(trx, { rigId: rig.id, actor, kind, summary, daysParkedBefore: days, daysParkedAfter: days });
+}
+
+export async function addCableRun(db: Db, rig: RigAccess, actor: Actor, run: CableRunInput) {
   await checkLoad(db, rig, run);
-  const row = await insertCableRun(db, rig.id, { ...toRow(run), created_by: userId });
+  const history = await record(db, rig, actor, 'cable-run-added', `added the cable run ${describeCableRun(run)}`);
+  const row = await db.transaction().execute(async (trx) => {
+    const saved = await insertCableRun(trx, rig.id, { ...toRow(run), created_by: actor.id });
+    await history(trx);
+    return saved;
+  });
   return (await cableRunsOf(db, rig)).find((r) => r.id === row.id)!;
 }
 
-export async function editCableRun(db: Db, rig: RigAccess, runId: string, run: CableRunInput) {
+export async function editCableRun(db: Db, rig: RigAccess, actor: Actor, runId: string, run: CableRunInput) {
   await checkLoad(db, rig, run);
-  const row = await updateCableRun(db, rig.id, runId, toRow(run));
-  if (!row) throw new HttpError(404, 'not_found', 'No such cable run on this rig.');
+  const before = (await listCableRuns(db, rig.id)).find((r) => r.id === runId);
+  if (!before) throw new HttpError(404, 'not_found', 'No such cable run on this rig.');
+  const history = await record(db, rig, actor, 'cable-run-edited', `edited the cable run ${describeCableRunEdit(wordsOf(before), run)}`);
+  const row = await db.transaction().execute(async (trx) => {
+    const updated = await updateCableRun(trx, rig.id, runId, toRow(run));
+    if (!updated) throw new HttpError(404, 'not_found', 'No such cable run on this rig.');
+    await history(trx);
+    return updated;
+  });
   return (await cableRunsOf(db, rig)).find((r) => r.id === row.id)!;
 }
 
-export async function removeCableRun(db: Db, rig: RigAccess, runId: string) {
-  if (!(await deleteCableRun(db, rig.id, runId))) throw new HttpError(404, 'not_found', 'No such cable run on this rig.');
+export async function removeCableRun(db: Db, rig: RigAccess, actor: Actor, runId: string) {
+  const before = (await listCableRuns(db, rig.id)).find((r) => r.id === runId);
+  if (!before) throw new HttpError(404, 'not_found', 'No such cable run on this rig.');
+  const history = await record(db, rig, actor, 'cable-run-removed', `removed the cable run ${describeCableRun(wordsOf(before))}`);
+  await db.transaction().execute(async (trx) => {
+    if (!(await deleteCableRun(trx, rig.id, runId))) throw new HttpError(404, 'not_found', 'No such cable run on this rig.');
+    await history(trx);
+  });
 }

@@ -1,7 +1,9 @@
 import type { Db } from '@/db/client';
 import type { HistoryKind } from '@/db/schema';
 import { project } from '@/shared/energy/project';
+import type { CableRunInput } from '@/shared/schemas/cable-run';
 import type { Load, RigPower } from '@/shared/schemas/projection';
+import { routineOf as namedRoutine } from '@/shared/routines';
 import { insertHistory, listHistory } from '../repositories/history';
 import { loadsOfRigs, rigsOfHousehold } from '../repositories/rigs';
 import { loadFromRow, modelInput } from './rigs-model';
@@ -33,6 +35,28 @@ export function describeLoadEdit(before: Load, after: Load): string {
   if (before.quantity !== after.quantity) parts.push(`quantity ${before.quantity} → ${after.quantity}`);
   if ((before.startHour ?? null) !== (after.startHour ?? null) || JSON.stringify(before.weekdays ?? null) !== JSON.stringify(after.weekdays ?? null)) parts.push('new schedule');
   return `${before.name}: ${parts.length ? parts.join(', ') : 'saved without changes'}`;
+}
+
+/** A new rig in a few words: "Wren (100 Ah AGM, 300 W inverter, 3 loads, routine: On the move)". */
+export function describeNewRig(input: { name: string; power: RigPower; loads: Load[] }): string {
+  const b = input.power.battery;
+  const parts = [`${b.capacityAh} Ah ${b.chemistry === 'lifepo4' ? 'LiFePO4' : b.chemistry.toUpperCase()}`, input.power.inverter ? `${input.power.inverter.ratedW} W inverter` : 'no inverter', `${input.loads.length} load${input.loads.length === 1 ? '' : 's'}`, `routine: ${namedRoutine(input.power.charging).name}`];
+  return `${input.name} (${parts.join(', ')})`;
+}
+
+/** What changed in a cable run, in words: "Fridge feed: 3 m → 4 m, 5 A → 6 A". */
+type RunWords = Pick<CableRunInput, 'label' | 'from' | 'to' | 'lengthM' | 'currentA' | 'loadId' | 'maxDropPercent'>;
+
+export const describeCableRun = (r: RunWords) => `${r.label} (${r.from} → ${r.to || 'device'}, ${r.lengthM} m${r.currentA !== undefined ? `, ${r.currentA} A` : ''})`;
+
+export function describeCableRunEdit(before: RunWords, after: RunWords): string {
+  const parts: string[] = [];
+  if (before.label !== after.label) parts.push(`renamed to ${after.label}`);
+  if (before.lengthM !== after.lengthM) parts.push(`${before.lengthM} m → ${after.lengthM} m`);
+  if ((before.currentA ?? null) !== (after.currentA ?? null) || (before.loadId ?? null) !== (after.loadId ?? null)) parts.push(after.currentA !== undefined ? `now ${after.currentA} A` : 'now follows its load');
+  if (before.to !== after.to || before.from !== after.from) parts.push(`${after.from} → ${after.to}`);
+  if (before.maxDropPercent !== after.maxDropPercent) parts.push(`drop allowed ${before.maxDropPercent} % → ${after.maxDropPercent} %`);
+  return `${before.label}: ${parts.length ? parts.join(', ') : 'saved without size-changing edits'}`;
 }
 
 const same = (a: unknown, b: unknown) => JSON.stringify(a) === JSON.stringify(b);

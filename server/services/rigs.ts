@@ -5,7 +5,7 @@ import { compare, project } from '@/shared/energy/project';
 import { can, type HouseholdRole } from '@/shared/permissions';
 import { type Load, projectionInputSchema, type RigPower, rigPowerSchema } from '@/shared/schemas/projection';
 import { loadFromRow, loadToRow, modelInput, type SavedLoad, stripLoad } from './rigs-model';
-import { type Actor, daysParkedOf, describeLoad, describeLoadEdit, describePowerChange } from './history';
+import { type Actor, daysParkedOf, describeLoad, describeLoadEdit, describeNewRig, describePowerChange } from './history';
 import { insertHistory } from '../repositories/history';
 import type { RigCreateInput, RigHeader, RigPermissions, RigUpdateInput } from '@/shared/schemas/rig';
 import type { Auth } from '../auth';
@@ -67,7 +67,8 @@ export async function listRigs(db: Db, userId: string) {
   });
 }
 
-export async function createRig(db: Db, auth: Auth, userId: string, input: RigCreateInput) {
+export async function createRig(db: Db, auth: Auth, actor: Actor, input: RigCreateInput) {
+  const userId = actor.id;
   let householdId = input.householdId;
   if (householdId) {
     const role = await householdRole(db, householdId, userId);
@@ -87,6 +88,15 @@ export async function createRig(db: Db, auth: Auth, userId: string, input: RigCr
     db,
     { householdId, createdBy: userId, name: input.name, vehicle: input.vehicle, power: input.power },
     input.loads.map((l, i) => loadToRow(l, i, userId)),
+    (trx, rig) =>
+      insertHistory(trx, {
+        rigId: rig.id,
+        actor,
+        kind: 'rig-created',
+        summary: `created the rig ${describeNewRig(input)}`,
+        daysParkedBefore: null,
+        daysParkedAfter: daysParkedOf(input.power, input.loads),
+      }),
   );
   return row.id;
 }

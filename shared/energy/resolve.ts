@@ -116,7 +116,8 @@ export function resolve(input: ProjectionInput): Resolved {
     relayJoinMinutes,
     inverter: inv
       ? {
-          control: inv.control,
+          // A socket live only with the ignition switches the inverter as an ignition relay would.
+          control: inv.connection === 'socket-ignition' ? 'ignition-relay' : inv.control,
           efficiency: inv.efficiencyPercent / 100,
           idleA: inv.idleA,
           ratedW: inv.ratedW,

@@ -9,6 +9,8 @@ const num = (min: number, max: number) =>
 export const chemistrySchema = z.enum(['flooded', 'agm', 'gel', 'lifepo4']);
 export const batteryRoleSchema = z.enum(['house', 'starter']);
 export const inverterControlSchema = z.enum(['always-on', 'manual-switch', 'ignition-relay', 'low-voltage-disconnect']);
+/** Where the inverter takes its power: wired to the battery, or plugged into an accessory socket. */
+export const inverterConnectionSchema = z.enum(['battery', 'socket-ignition', 'socket-always']);
 export const supplySchema = z.enum(['dc', 'ac']);
 export const whenSchema = z.enum(['always', 'parked', 'driving']);
 export const loadStatusSchema = z.enum(['installed', 'candidate']);
@@ -43,6 +45,8 @@ export const inverterSchema = z.object({
   efficiencyPercent: num(50, 100).default(90),
   idleA: num(0, 20).default(0.5),
   control: inverterControlSchema.default('always-on'),
+  /** Absent means wired to the battery. A socket live only with the ignition powers it only while driving. */
+  connection: inverterConnectionSchema.optional(),
   /** Low-voltage disconnect: the state of charge at which the inverter switches itself off. */
   lvdSocPercent: num(0, 100).optional(),
   /** Low-voltage disconnect: points above the threshold at which it switches back on. */
@@ -136,6 +140,7 @@ export type Load = z.infer<typeof loadSchema>;
 export type LoadInput = z.input<typeof loadSchema>;
 export type Chemistry = z.infer<typeof chemistrySchema>;
 export type InverterControl = z.infer<typeof inverterControlSchema>;
+export type InverterConnection = z.infer<typeof inverterConnectionSchema>;
 
 export const compareInputSchema = z.object({
   rig: projectionInputSchema,

@@ -1,7 +1,8 @@
 import { z } from 'zod';
 
 import type { HouseholdRole } from '../permissions';
-import { loadSchema, rigPowerSchema } from './projection';
+import { ROUTINE_KEYS } from '../routines';
+import { batterySchema, loadSchema, rigPowerSchema } from './projection';
 
 /** What the caller may do with a rig, worked out on the server from their household role. */
 export type RigPermissions = { edit: boolean; delete: boolean; manageLoads: boolean; managePeople: boolean; comment: boolean };
@@ -33,6 +34,16 @@ export const rigCreateSchema = z.strictObject({
 export type RigCreateInput = z.infer<typeof rigCreateSchema>;
 export type RigCreateForm = z.input<typeof rigCreateSchema>;
 
+/**
+ * New rig's form: the rig as created, plus the named routine the user started from (never sent: the
+ * routine's minutes are). Nothing about the driving is assumed until the user picks one.
+ */
+export const rigSetupSchema = rigCreateSchema.extend({
+  routine: z.enum([...ROUTINE_KEYS, 'own'], { error: 'Choose how the week\'s driving goes; you can adjust it after.' }),
+});
+export type RigSetupInput = z.infer<typeof rigSetupSchema>;
+export type RigSetupForm = z.input<typeof rigSetupSchema>;
+
 /** A change to a rig: its name, vehicle or power system, against the version the editor saw. */
 export const rigUpdateSchema = z.strictObject({
   version: z.number().int().min(1),
@@ -42,6 +53,13 @@ export const rigUpdateSchema = z.strictObject({
 });
 export type RigUpdateInput = z.infer<typeof rigUpdateSchema>;
 export type RigUpdateForm = z.input<typeof rigUpdateSchema>;
+
+/** The cut-off as set from "How this was worked out" (the rest of the power system is sent as it was). */
+export const cutoffFormSchema = z.object({ cutoffSocPercent: batterySchema.shape.cutoffSocPercent.unwrap() });
+export type CutoffForm = z.input<typeof cutoffFormSchema>;
+
+/** GET /api/rigs/:rigId/sheet.pdf?size=a4|letter: the budget sheet's paper. */
+export const sheetQuerySchema = z.strictObject({ size: z.enum(['a4', 'letter'], { error: 'Choose a4 or letter.' }).default('a4') });
 
 export const loadParamsSchema = z.object({ rigId: z.uuid(), loadId: z.uuid() });
 

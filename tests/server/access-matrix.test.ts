@@ -128,6 +128,7 @@ const MATRIX: Record<string, Entry> = {
     send: (a) => a.post('/api/projections/compare').send({ rig: { battery: { chemistry: 'agm', capacityAh: 100 } }, candidates: [{ name: 'Fan', supply: 'dc', watts: 20, hoursPerDay: 4 }] }),
     expect: all(200),
   },
+  'GET /api/devices/': { send: (a) => a.get('/api/devices?q=fridge'), expect: all(200) },
   'POST /api/cable-runs/size': { send: (a) => a.post('/api/cable-runs/size').send({ currentA: 10, lengthM: 2 }), expect: all(200) },
   'GET /api/me/': { send: (a) => a.get('/api/me'), expect: { ...all(200), anonymous: 401 } },
   'GET /api/rigs/': { send: (a) => a.get('/api/rigs'), expect: { ...all(200), anonymous: 401 } },
@@ -178,6 +179,7 @@ const MATRIX: Record<string, Entry> = {
     expect: ownerOnly(204),
   },
   'GET /api/rigs/:rigId/outlook': { send: (a, c) => a.get(`/api/rigs/${c.rigId}/outlook`), expect: readRig },
+  'GET /api/rigs/:rigId/sheet.pdf': { send: (a, c) => a.get(`/api/rigs/${c.rigId}/sheet.pdf`), expect: readRig },
   'POST /api/rigs/:rigId/try': { send: (a, c) => a.post(`/api/rigs/${c.rigId}/try`).set('Origin', TEST_ORIGIN).send({ candidates: [LOAD] }), expect: readRig },
   'POST /api/rigs/:rigId/loads': { send: (a, c) => a.post(`/api/rigs/${c.rigId}/loads`).set('Origin', TEST_ORIGIN).send(LOAD), expect: editRole(201) },
   'PATCH /api/rigs/:rigId/loads/:loadId': {
@@ -228,6 +230,7 @@ const MATRIX: Record<string, Entry> = {
     expect: { ...all(403), anonymous: 401 },
   },
   'GET /api/rigs/:rigId/history': { send: (a, c) => a.get(`/api/rigs/${c.rigId}/history`), expect: readRig },
+  'GET /api/rigs/:rigId/report-preview': { send: (a, c) => a.get(`/api/rigs/${c.rigId}/report-preview`), expect: readRig },
   'GET /api/rigs/:rigId/emails': { send: (a, c) => a.get(`/api/rigs/${c.rigId}/emails`), expect: readRig },
   'GET /api/rigs/:rigId/emails/:emailId': { send: async (a, c) => a.get(`/api/rigs/${c.rigId}/emails/${await sentEmailId()}`), expect: readRig },
   'GET /api/rigs/:rigId/emails/:emailId/chart.png': { send: async (a, c) => a.get(`/api/rigs/${c.rigId}/emails/${await sentEmailId()}/chart.png`), expect: readRig },

@@ -20,6 +20,30 @@ const daysParked = async () => (await fx.agents.owner.get(`/api/rigs/${fx.rigId}
 const rig = async () => (await fx.agents.owner.get(`/api/rigs/${fx.rigId}`).expect(200)).body;
 
 describe('rig history', () => {
+  it('begins with the rig\'s creation: who made it, what it is, its routine and its Days parked', async () => {
+    const all = await history();
+    const created = all[all.length - 1];
+    expect(created).toMatchObject({ kind: 'rig-created', actor: { name: 'owner' }, summary: 'created the rig Fixture van (100 Ah AGM, 300 W inverter, 1 load, routine: Your own routine)', daysParkedBefore: null });
+    expect(created.daysParkedAfter).toBe(await daysParked());
+  });
+
+  it('records cable runs added, edited and removed, without moving the forecast', async () => {
+    const days = await daysParked();
+    const run = { label: 'Fan feed', to: 'Roof fan', lengthM: 3, currentA: 2, maxDropPercent: 3, insulationC: 105 };
+    const added = await fx.agents.member.post(`/api/rigs/${fx.rigId}/cable-runs`).set('Origin', TEST_ORIGIN).send(run).expect(201);
+    let [top] = await history();
+    expect(top).toMatchObject({ kind: 'cable-run-added', actor: { name: 'member' }, summary: 'added the cable run Fan feed (Battery → Roof fan, 3 m, 2 A)', daysParkedBefore: days, daysParkedAfter: days });
+    await fx.agents.owner.patch(`/api/rigs/${fx.rigId}/cable-runs/${added.body.id}`).set('Origin', TEST_ORIGIN).send({ ...run, lengthM: 4.5 }).expect(200);
+    [top] = await history();
+    expect(top).toMatchObject({ kind: 'cable-run-edited', actor: { name: 'owner' }, summary: 'edited the cable run Fan feed: 3 m → 4.5 m' });
+    await fx.agents.owner.delete(`/api/rigs/${fx.rigId}/cable-runs/${added.body.id}`).set('Origin', TEST_ORIGIN).expect(204);
+    [top] = await history();
+    expect(top).toMatchObject({ kind: 'cable-run-removed', summary: 'removed the cable run Fan feed (Battery → Roof fan, 4.5 m, 2 A)' });
+    // A refused delete of a run that is gone leaves no entry.
+    await fx.agents.owner.delete(`/api/rigs/${fx.rigId}/cable-runs/${added.body.id}`).set('Origin', TEST_ORIGIN).expect(404);
+    expect((await history())[0].kind).toBe('cable-run-removed');
+  });
+
   it('keeps who changed which load, with the Days parked before and after', async () => {
     const d0 = await daysParked();
     const added = await fx.agents.member.post(`/api/rigs/${fx.rigId}/loads`).set('Origin', TEST_ORIGIN).send({ name: 'Laptop', supply: 'dc', watts: 60, hoursPerDay: 3 }).expect(201);

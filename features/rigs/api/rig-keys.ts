@@ -8,4 +8,6 @@ export const rigKeys = {
   cableRuns: (rigId: string) => [...rigKeys.all, 'cable-runs', rigId] as const,
   history: (rigId: string) => [...rigKeys.all, 'history', rigId] as const,
   emails: (rigId: string) => [...rigKeys.all, 'emails', rigId] as const,
+  reportPreview: (rigId: string) => [...rigKeys.all, 'report-preview', rigId] as const,
+  devices: () => ['devices'] as const,
 };

@@ -1,6 +1,6 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 
-import { apiFetch } from '@/lib/api-client';
+import { ApiError, apiFetch } from '@/lib/api-client';
 import type { Comparison, Projection } from '@/shared/energy/project';
 import type { Load, LoadInput, RigPower } from '@/shared/schemas/projection';
 import type { RigHeader, RigUpdateForm } from '@/shared/schemas/rig';
@@ -10,7 +10,9 @@ export type SavedLoad = Load & { id: string; addedBy: { id: string; name: string
 export type Rig = RigHeader & { power: RigPower; loads: SavedLoad[] };
 export type Outlook = Projection & { rigId: string; version: number };
 
-export const rigQueryOptions = (rigId: string) => queryOptions({ queryKey: rigKeys.detail(rigId), queryFn: () => apiFetch<Rig>(`/api/rigs/${rigId}`) });
+// A refusal (404: not there or not shared) is an answer, not a failure worth retrying.
+const retryUnlessRefused = (count: number, err: Error) => !(err instanceof ApiError && err.status < 500) && count < 1;
+export const rigQueryOptions = (rigId: string) => queryOptions({ queryKey: rigKeys.detail(rigId), queryFn: () => apiFetch<Rig>(`/api/rigs/${rigId}`), retry: retryUnlessRefused });
 export const useRigQuery = (rigId: string) => useQuery(rigQueryOptions(rigId));
 
 export const outlookQueryOptions = (rigId: string) =>

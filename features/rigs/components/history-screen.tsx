@@ -16,9 +16,10 @@ export function HistoryScreen({ rigId }: { rigId: string }) {
   return (
     <Card testID="history">
       <Heading>History</Heading>
-      {history.data.length ? null : <Small>No changes yet. Edits to loads, the battery, the inverter, charging and the routine, and people joining or leaving, show here.</Small>}
+      {history.data.length ? null : <Small>No changes yet. The rig&apos;s creation, edits to loads, cable runs, the battery, the inverter, charging and the routine, and people joining or leaving, show here.</Small>}
       {history.data.map((h) => {
-        const moved = h.daysParkedBefore !== h.daysParkedAfter;
+        const created = h.kind === 'rig-created';
+        const moved = !created && h.daysParkedBefore !== h.daysParkedAfter;
         return (
           <View key={h.id} style={styles.row} testID={`history-${h.kind}`}>
             <View style={{ flex: 1, minWidth: 200, gap: 2 }}>
@@ -30,7 +31,7 @@ export function HistoryScreen({ rigId }: { rigId: string }) {
             <View style={styles.days}>
               <Small>Days parked</Small>
               <Text style={[styles.figure, moved && (h.daysParkedAfter ?? Infinity) < (h.daysParkedBefore ?? Infinity) ? { color: colors.short } : null]}>
-                {moved ? `${formatDays(h.daysParkedBefore, horizon)} → ${formatDays(h.daysParkedAfter, horizon)}` : `${formatDays(h.daysParkedAfter, horizon)} (no change)`}
+                {moved ? `${formatDays(h.daysParkedBefore, horizon)} → ${formatDays(h.daysParkedAfter, horizon)}` : `${formatDays(h.daysParkedAfter, horizon)}${created ? '' : ' (no change)'}`}
               </Text>
             </View>
           </View>

@@ -8,6 +8,9 @@ import { loadRunningCurrentA } from '@/shared/energy/profile';
 import type { Load } from '@/shared/schemas/projection';
 import { colors, space, type } from '@/shared/theme';
 import { type SavedLoad, useLoadCreateMutation, useLoadDeleteMutation, useLoadUpdateMutation, useOutlookQuery, useRigQuery } from '../api/rig';
+import type { Device } from '@/shared/devices';
+import { DevicePicker } from './device-picker';
+import { asWatts, fromDevice } from '../utils/load-units';
 import { EMPTY_LOAD, LoadForm } from './load-form';
 
 type SortKey = 'name' | 'member' | 'supply' | 'watts' | 'hours' | 'duty' | 'ah' | 'share';
@@ -32,6 +35,7 @@ export function LoadsScreen({ rigId }: { rigId: string }) {
   const [member, setMember] = useState<string | null>(null);
   const [editing, setEditing] = useState<SavedLoad | 'new' | null>(null);
   const [confirming, setConfirming] = useState<string | null>(null);
+  const [picked, setPicked] = useState<Device | null>(null);
   const create = useLoadCreateMutation(rigId);
   const update = useLoadUpdateMutation(rigId);
   const remove = useLoadDeleteMutation(rigId);
@@ -60,7 +64,7 @@ export function LoadsScreen({ rigId }: { rigId: string }) {
   const members = [...new Map(rig.data.loads.filter((l) => l.addedBy).map((l) => [l.addedBy!.id, l.addedBy!.name])).entries()];
   const maxWatts = rig.data.power.systemVoltage * 400;
   const save = (load: Load) => {
-    if (editing === 'new') create.mutate(load, { onSuccess: () => setEditing(null) });
+    if (editing === 'new') create.mutate(load, { onSuccess: () => { setEditing(null); setPicked(null); } });
     else if (editing) update.mutate({ id: editing.id, load }, { onSuccess: () => setEditing(null) });
   };
   const formError = (editing === 'new' ? create.error : update.error)?.message ?? null;
@@ -144,16 +148,24 @@ export function LoadsScreen({ rigId }: { rigId: string }) {
         ) : null}
       </Card>
       {editing ? (
-        <View style={wide ? { flex: 2 } : undefined}>
+        <View style={[{ gap: space.lg }, wide && { flex: 2 }]}>
+          {editing === 'new' ? (
+            <Card>
+              <DevicePicker onPick={setPicked} disabled={(d) => (d.load.supply === 'ac' && !rig.data.power.inverter ? 'Needs an inverter.' : null)} />
+            </Card>
+          ) : null}
           <LoadForm
-            key={editing === 'new' ? 'new' : editing.id}
-            title={editing === 'new' ? 'Add a load' : `Edit ${editing.name}`}
-            initial={editing === 'new' ? EMPTY_LOAD : asWatts(stripSaved(editing), rig.data.power.systemVoltage)}
+            key={editing === 'new' ? `new-${picked?.id ?? ''}` : editing.id}
+            title={editing === 'new' ? (picked ? `Add ${picked.name}` : 'Add a load') : `Edit ${editing.name}`}
+            initial={editing === 'new' ? (picked ? fromDevice(picked, V) : EMPTY_LOAD) : asWatts(stripSaved(editing), rig.data.power.systemVoltage)}
             submitLabel={editing === 'new' ? 'Add' : 'Save'}
             busy={create.isPending || update.isPending}
             error={formError}
             onSubmit={save}
-            onCancel={() => setEditing(null)}
+            onCancel={() => {
+              setEditing(null);
+              setPicked(null);
+            }}
             maxWatts={maxWatts}
           />
         </View>
@@ -164,13 +176,6 @@ export function LoadsScreen({ rigId }: { rigId: string }) {
 
 function stripSaved({ id: _id, addedBy: _a, ...load }: SavedLoad): Load {
   return load;
-}
-
-/** The form edits watts; a load saved in amps is shown as its watts at the system voltage. */
-function asWatts(load: Load, systemVoltage: number): Load {
-  if (load.amps === undefined) return load;
-  const { amps, ...rest } = load;
-  return { ...rest, watts: Math.round(amps * systemVoltage * 10) / 10 };
 }
 
 const styles = StyleSheet.create({

@@ -10,6 +10,9 @@ import { FIX_WIRING_CAUTION, needsWiringCaution } from '@/shared/safety';
 import { colors, radius, space, type } from '@/shared/theme';
 import { type Outlook, useOutlookQuery } from '../api/rig';
 import { SocChart } from './chart/soc-chart';
+import { OutlookBasis } from './outlook/outlook-basis';
+import { SheetButton } from './outlook/sheet-button';
+import { WorkedOut } from './outlook/worked-out';
 
 const FIX_TITLE: Record<string, string> = {
   'cutoff-switch': 'Cut-off switch on the inverter',
@@ -57,6 +60,7 @@ export function OutlookScreen({ rigId, narrow = false }: { rigId: string; narrow
           </Small>
         </Card>
       </View>
+      <OutlookBasis rigId={rigId} />
       <View style={[{ gap: space.lg }, wide && { flexDirection: 'row', alignItems: 'flex-start' }]}>
         <View style={[{ gap: space.lg }, wide && { flex: 3 }]}>
           <Card>
@@ -82,6 +86,8 @@ export function OutlookScreen({ rigId, narrow = false }: { rigId: string; narrow
           <Drains outlook={o} />
         </View>
       </View>
+      <WorkedOut rigId={rigId} outlook={o} />
+      <SheetButton rigId={rigId} />
     </View>
   );
 }

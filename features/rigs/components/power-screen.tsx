@@ -14,8 +14,7 @@ import { useRouter } from 'expo-router';
 
 import { type Rig, useRigDeleteMutation, useRigQuery, useRigUpdateMutation } from '../api/rig';
 import { SelfHeatingFields } from './self-heating-fields';
-
-const DAYS = ['Mon', 'Tue', 'Wed', 'Thu', 'Fri', 'Sat', 'Sun'];
+import { DrivingFields, SHORE, ShoreFields } from './power-fields';
 const INVERTER = { ratedW: 300, efficiencyPercent: 90, idleA: 0.5, control: 'always-on' } as const;
 
 /** Power: battery bank, inverter and its control, charging, the weekly routine, the stay and the horizon. */
@@ -33,6 +32,11 @@ function PowerForm({ rig }: { rig: Rig }) {
   const readOnly = !rig.permissions.edit;
   const form = useForm<RigPowerInput, unknown, RigPower>({ resolver: zodResolver(rigPowerSchema), defaultValues: rig.power, mode: 'onTouched' });
   const [hasInverter, setHasInverter] = useState(rig.power.inverter !== null);
+  const [hasShore, setHasShore] = useState(!!rig.power.charging.shore);
+  const toggleShore = (on: boolean) => {
+    setHasShore(on);
+    form.setValue('charging.shore', on ? SHORE : undefined);
+  };
   const toggle = (on: boolean) => {
     setHasInverter(on);
     form.setValue('inverter', on ? INVERTER : null);
@@ -75,6 +79,7 @@ function PowerForm({ rig }: { rig: Rig }) {
               <NumberField control={form.control} name="inverter.ratedW" label="Rating" unit="W" />
               <NumberField control={form.control} name="inverter.idleA" label="Idle draw" unit="A" />
               <NumberField control={form.control} name="inverter.efficiencyPercent" label="Efficiency" unit="%" />
+              <ChoiceField control={form.control} name="inverter.connection" label="Connected" options={[{ value: 'battery', label: 'Wired to the battery' }, { value: 'socket-ignition', label: 'Socket live with the ignition' }, { value: 'socket-always', label: 'Socket always live' }]} />
               <ChoiceField
                 control={form.control}
                 name="inverter.control"
@@ -99,18 +104,11 @@ function PowerForm({ rig }: { rig: Rig }) {
           />
           <NumberField control={form.control} name="charging.solarW" label="Solar panels" unit="W" />
           <NumberField control={form.control} name="charging.peakSunHours" label="Peak sun hours" unit="h/day" />
+          <ShoreFields control={form.control} prefix="" on={hasShore} onToggle={toggleShore} disabled={readOnly} />
         </Card>
         <Card style={col}>
           <Heading>Routine and stay</Heading>
-          <Small>Minutes of driving each day.</Small>
-          <View style={{ flexDirection: 'row', flexWrap: 'wrap', gap: space.sm }}>
-            {DAYS.map((d, i) => (
-              <View key={d} style={{ width: 84 }}>
-                <NumberField control={form.control} name={`charging.drivingMinutesPerDay.${i}` as 'charging.drivingMinutesPerDay.0'} label={d} unit="min" />
-              </View>
-            ))}
-          </View>
-          <NumberField control={form.control} name="charging.drivingStartHour" label="Driving starts at" unit="h" />
+          <DrivingFields control={form.control} prefix="" />
           <NumberField control={form.control} name="plannedStayDays" label="Planned stay" unit="days" />
           <NumberField control={form.control} name="horizonDays" label="Horizon" unit="days" hint="1 to 60 days." />
         </Card>

@@ -9,14 +9,15 @@ import { colors, space, type } from '@/shared/theme';
 import { type RigSummary, useRigsQuery } from '../api/get-rigs';
 
 /** Rigs (home): each rig with its Days parked, margin state and last change. */
-export function RigsScreen({ onNewRig }: { onNewRig: () => void }) {
+/** Without `onNewRig` (an admin's home) there is no New rig, only the rigs shared with the account. */
+export function RigsScreen({ onNewRig }: { onNewRig?: () => void }) {
   const rigs = useRigsQuery();
   const wide = useIsWide();
   return (
     <View style={styles.root} testID="home-screen">
       <View style={styles.header}>
         <Title>Your rigs</Title>
-        <Button testID="new-rig" label="New rig" onPress={onNewRig} />
+        {onNewRig ? <Button testID="new-rig" label="New rig" onPress={onNewRig} /> : null}
       </View>
       {rigs.isPending ? (
         <ActivityIndicator color={colors.night} />
@@ -25,6 +26,8 @@ export function RigsScreen({ onNewRig }: { onNewRig: () => void }) {
           <Body style={{ color: colors.short }}>Your rigs could not be loaded.</Body>
           <Button label="Try again" onPress={() => rigs.refetch()} />
         </Card>
+      ) : rigs.data.length === 0 && !onNewRig ? (
+        <Small>No household has shared a rig with you.</Small>
       ) : rigs.data.length === 0 ? (
         <Card testID="rigs-empty">
           <Heading>No rig yet</Heading>

@@ -10,7 +10,10 @@ import type { CompareSide } from '@/shared/energy/project';
 import type { Load } from '@/shared/schemas/projection';
 import { colors, space, type } from '@/shared/theme';
 import { useLoadCreateMutation, useRigQuery, useTryLoadsMutation } from '../api/rig';
+import type { Device } from '@/shared/devices';
+import { DevicePicker } from './device-picker';
 import { EMPTY_LOAD, LoadForm } from './load-form';
+import { fromDevice } from '../utils/load-units';
 
 /** Try a load: the rig with and without a candidate, side by side, then adopt or discard it. */
 export function TryScreen({ rigId }: { rigId: string }) {
@@ -20,16 +23,20 @@ export function TryScreen({ rigId }: { rigId: string }) {
   const tryIt = useTryLoadsMutation(rigId);
   const adopt = useLoadCreateMutation(rigId);
   const [candidate, setCandidate] = useState<Load | null>(null);
+  const [picked, setPicked] = useState<Device | null>(null);
   const horizon = rig.data?.power.horizonDays ?? 14;
   const V = rig.data?.power.systemVoltage ?? 12;
   const result = tryIt.data;
   return (
     <View style={[{ gap: space.lg }, wide && { flexDirection: 'row', alignItems: 'flex-start' }]} testID="try-screen">
-      <View style={wide ? { flex: 2 } : undefined}>
+      <View style={[{ gap: space.lg }, wide && { flex: 2 }]}>
+        <Card>
+          <DevicePicker label="Start from a typical device" onPick={(d) => { setPicked(d); setCandidate(null); tryIt.reset(); }} disabled={(d) => (d.load.supply === 'ac' && rig.data && !rig.data.power.inverter ? 'Needs an inverter.' : null)} />
+        </Card>
         <LoadForm
-          key={candidate ? 'tried' : 'fresh'}
+          key={candidate ? 'tried' : `fresh-${picked?.id ?? ''}`}
           title="A device you are thinking of"
-          initial={candidate ?? { ...EMPTY_LOAD, name: '', status: 'candidate' }}
+          initial={candidate ?? (picked ? { ...fromDevice(picked, V), status: 'candidate' } : { ...EMPTY_LOAD, name: '', status: 'candidate' })}
           submitLabel="Try it"
           busy={tryIt.isPending}
           error={tryIt.error?.message}

@@ -61,6 +61,8 @@ const routes = (): [string, Sender][] => {
     ['PATCH /api/rigs/:rigId/members/:memberId', (b, s) => o.patch(`${r}/members/${id(s)}`).set('Origin', TEST_ORIGIN).type('json').send(JSON.stringify(b))],
     ['PUT /api/me/email-prefs', (b) => o.put('/api/me/email-prefs').set('Origin', TEST_ORIGIN).type('json').send(JSON.stringify(b))],
     ['PUT /api/admin/users/:userId/role', (b, s) => fx.agents.admin.put(`/api/admin/users/${id(s)}/role`).set('Origin', TEST_ORIGIN).type('json').send(JSON.stringify(b))],
+    ['GET /api/devices', (b, s) => o.get('/api/devices').query(typeof b === 'object' && b !== null && !Array.isArray(b) ? (b as Record<string, string>) : { q: s })],
+    ['GET /api/rigs/:rigId/sheet.pdf', (_b, s) => o.get(`${r}/sheet.pdf`).query({ size: s })],
     ['GET /api/email/unsubscribe', (_b, s) => o.get('/api/email/unsubscribe').query({ token: s })],
     ['GET /api/rigs/:rigId/emails/:emailId', (_b, s) => o.get(`${r}/emails/${id(s)}`)],
     ['GET /api/invitations/:invitationId', (_b, s) => o.get(`/api/invitations/${id(s)}`)],

@@ -1,0 +1,51 @@
+import type { Db } from '@/db/client';
+import { explainAssumptions } from '@/shared/energy/assumptions';
+import { project } from '@/shared/energy/project';
+import { routineOf } from '@/shared/routines';
+import type { RigAccess } from '../middleware/rig-access';
+import { svgToPng, weekChartSvg } from '../emails/chart';
+import { renderSheet, type SheetData, type SheetSize } from '../sheet/render';
+import { modelInput, stripLoad } from './rigs-model';
+import { readRig } from './rigs';
+
+/**
+ * The hook-up plan for the sheet. Hook-ups (the drawn inverter circuit) do not exist yet; when they do,
+ * return the rig's plan here as lines of text and the sheet prints it in its own section.
+ */
+function hookUpPlanOf(_rigId: string): string[] | null {
+  return null;
+}
+
+/** The budget sheet of a rig as a PDF: the same model run as the Outlook, laid out for print. */
+export async function budgetSheet(db: Db, rig: RigAccess, size: SheetSize, now = new Date()): Promise<{ pdf: Buffer; filename: string }> {
+  const dto = await readRig(db, rig);
+  const input = modelInput(dto.power, dto.loads);
+  const p = project(input);
+  const first = p.series[0];
+  const chartPng = p.series.length
+    ? svgToPng(
+        weekChartSvg(
+          p.series.map((s) => s.socPercent),
+          p.cutoffSocPercent,
+          first.weekday * 24 + first.hourOfDay,
+          p.series.map((s) => s.parkedSocPercent),
+        ),
+        1400,
+      )
+    : null;
+  const byName = new Map(p.breakdown.map((b) => [b.name, b]));
+  const data: SheetData = {
+    rig: { name: dto.name, vehicle: dto.vehicle, household: dto.householdName, version: dto.version },
+    power: dto.power,
+    routine: routineOf(dto.power.charging),
+    loads: dto.loads.map(stripLoad).map((l) => ({ load: l, ahPerDay: l.status === 'installed' ? (byName.get(l.name)?.ahPerDay ?? 0) : null, share: l.status === 'installed' ? (byName.get(l.name)?.share ?? 0) : null })),
+    projection: p,
+    assumptions: explainAssumptions(dto.power, p.assumptions, p.horizonDays),
+    chartPng,
+    hookUp: hookUpPlanOf(dto.id),
+    madeAt: now,
+  };
+  const pdf = await renderSheet(data, size);
+  const slug = dto.name.toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-|-$/g, '') || 'rig';
+  return { pdf, filename: `${slug}-budget-sheet.pdf` };
+}
