@@ -1,5 +1,6 @@
 import type { CompareInput, Load, ProjectionInput } from '../schemas/projection';
 import { MODEL_DEFAULTS } from './defaults';
+import { socketOverloadWarning } from './hookup/socket';
 import { buildDemandProfile, type DemandProfile, HOURS_PER_WEEK as WEEK } from './profile';
 import { resolve, type Resolved, round as roundTo, run, type RunTotals, type Trace } from './simulate';
 
@@ -237,6 +238,8 @@ function collectWarnings(
       message: `AC loads scheduled together draw up to ${round(maxAcWatts, 0)} W, more than the inverter's ${inv.ratedW} W rating.`,
     });
   }
+  const socket = socketOverloadWarning(input, maxAcWatts);
+  if (socket) warnings.push(socket);
   const charges = r.alternatorA > 0 || r.solarW > 0 || r.shoreByHourOfWeek.some((x) => x > 0);
   if (r.chemistry === 'lifepo4' && r.temperatureC < 0 && charges) {
     warnings.push({

@@ -9,6 +9,7 @@ const num = (min: number, max: number) =>
 export const chemistrySchema = z.enum(['flooded', 'agm', 'gel', 'lifepo4']);
 export const batteryRoleSchema = z.enum(['house', 'starter']);
 export const inverterControlSchema = z.enum(['always-on', 'manual-switch', 'ignition-relay', 'low-voltage-disconnect']);
+export const inverterConnectionSchema = z.enum(['direct', 'socket']);
 export const supplySchema = z.enum(['dc', 'ac']);
 export const whenSchema = z.enum(['always', 'parked', 'driving']);
 export const loadStatusSchema = z.enum(['installed', 'candidate']);
@@ -41,6 +42,12 @@ export const inverterSchema = z.object({
   lvdSocPercent: num(0, 100).optional(),
   /** Low-voltage disconnect: points above the threshold at which it switches back on. */
   lvdReconnectPoints: num(1, 50).optional(),
+  /** Wired to the battery, or plugged into an accessory (lighter) socket (SAE J563). */
+  connection: inverterConnectionSchema.default('direct'),
+  /** The socket's fuse in the vehicle's fuse box: SAE J563 sockets are fused at 10, 15 or 20 A (common practice). */
+  socketFuseA: num(1, 40).default(15),
+  /** True when the socket is live only with the ignition on. */
+  socketSwitched: z.boolean().default(false),
 });
 
 export const loadSchema = z
@@ -125,6 +132,7 @@ export type Load = z.infer<typeof loadSchema>;
 export type LoadInput = z.input<typeof loadSchema>;
 export type Chemistry = z.infer<typeof chemistrySchema>;
 export type InverterControl = z.infer<typeof inverterControlSchema>;
+export type InverterConnection = z.infer<typeof inverterConnectionSchema>;
 
 export const compareInputSchema = z.object({
   rig: projectionInputSchema,
