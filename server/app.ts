@@ -15,6 +15,7 @@ import { cableRunsRouter } from './routes/cable-runs';
 import { clientsRouter } from './routes/clients';
 import { emailRouter } from './routes/email';
 import { healthRouter } from './routes/health';
+import { hookupsRouter } from './routes/hookups';
 import { invitationsRouter } from './routes/invitations';
 import { meRouter } from './routes/me';
 import { projectionsRouter } from './routes/projections';
@@ -61,6 +62,7 @@ export function createApp(ctx: AppContext): Express {
   app.use('/api/health', healthRouter(db, APP_VERSION));
   app.use('/api/projections', rateLimitedOpen(config.RATE_LIMIT_PER_MINUTE), projectionsRouter());
   app.use('/api/cable-runs', rateLimitedOpen(config.RATE_LIMIT_PER_MINUTE), cableRunsRouter());
+  app.use('/api/hookups', rateLimitedOpen(config.RATE_LIMIT_PER_MINUTE), hookupsRouter());
   app.use('/api/email', rateLimitedOpen(config.RATE_LIMIT_PER_MINUTE), express.urlencoded({ extended: false, limit: '10kb' }), emailRouter(ctx));
   app.use('/api/me', requireSession(auth), meRouter(ctx));
   app.use('/api/readings', rateLimitedOpen(config.RATE_LIMIT_PER_MINUTE), readingsAnalyzeRouter());

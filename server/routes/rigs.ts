@@ -12,6 +12,8 @@ import { session } from '../middleware/session';
 import { parsed, validate } from '../middleware/validate';
 import * as people from '../services/people';
 import * as cableRuns from '../services/cable-runs';
+import { rigHookup } from '../services/hookup';
+import { rigHookupQuerySchema } from '@/shared/schemas/hookup';
 import * as notes from '../services/notes';
 import * as rigs from '../services/rigs';
 import * as reports from '../services/reports';
@@ -100,6 +102,10 @@ export function rigsRouter({ db, auth, jobs, config }: AppContext) {
   router.delete('/:rigId/cable-runs/:runId', rigAccess(db, { cableRun: ['delete'] }), validate(cableRunParamsSchema, 'params'), async (_req, res) => {
     await cableRuns.removeCableRun(db, rigOf(res), parsed(res, cableRunParamsSchema, 'params').runId);
     res.status(204).end();
+  });
+
+  router.get('/:rigId/hookup', rigAccess(db, { rig: ['read'] }), validate(rigHookupQuerySchema, 'query'), async (_req, res) => {
+    res.json(await rigHookup(db, rigOf(res), parsed(res, rigHookupQuerySchema, 'query')));
   });
 
   router.get('/:rigId/notes', rigAccess(db, { rig: ['read'] }), async (_req, res) => {

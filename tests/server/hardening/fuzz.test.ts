@@ -45,6 +45,8 @@ const routes = (): [string, Sender][] => {
     ['POST /api/projections', (b) => o.post('/api/projections').type('json').send(JSON.stringify(b))],
     ['POST /api/projections/compare', (b) => o.post('/api/projections/compare').type('json').send(JSON.stringify(b))],
     ['POST /api/cable-runs/size', (b) => o.post('/api/cable-runs/size').type('json').send(JSON.stringify(b))],
+    ['POST /api/hookups', (b) => o.post('/api/hookups').type('json').send(JSON.stringify(b))],
+    ['GET /api/rigs/:rigId/hookup', (_b, s) => o.get(`${r}/hookup`).query({ feedLengthM: s, control: s })],
     ['POST /api/readings/analyze', (b) => o.post('/api/readings/analyze').type('json').send(JSON.stringify(b))],
     ['POST /api/rigs', (b) => o.post('/api/rigs').set('Origin', TEST_ORIGIN).type('json').send(JSON.stringify(b))],
     ['PATCH /api/rigs/:rigId', (b, s) => o.patch(`/api/rigs/${id(s)}`).set('Origin', TEST_ORIGIN).type('json').send(JSON.stringify(b))],
