@@ -133,7 +133,7 @@ const MATRIX: Record<string, Entry> = {
     expect: { ...all(201), anonymous: 401 },
   },
   'GET /api/rigs/:rigId': { send: (a, c) => a.get(`/api/rigs/${c.rigId}`), expect: readRig },
-  'POST /api/hookups': { send: (a) => a.post('/api/hookups').send({ battery: { chemistry: 'agm', capacityAh: 100 }, inverter: { ratedW: 300 } }), expect: all(200) },
+  'POST /api/hookups/': { send: (a) => a.post('/api/hookups').send({ battery: { chemistry: 'agm', capacityAh: 100 }, inverter: { ratedW: 300 } }), expect: all(200) },
   'GET /api/rigs/:rigId/hookup': { send: (a, c) => a.get(`/api/rigs/${c.rigId}/hookup`), expect: readRig },
   'GET /api/rigs/:rigId/cable-runs': { send: (a, c) => a.get(`/api/rigs/${c.rigId}/cable-runs`), expect: readRig },
   'POST /api/rigs/:rigId/cable-runs': { send: (a, c) => a.post(`/api/rigs/${c.rigId}/cable-runs`).set('Origin', TEST_ORIGIN).send(RUN), expect: editRole(201) },
