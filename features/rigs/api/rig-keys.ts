@@ -6,6 +6,8 @@ export const rigKeys = {
   detail: (rigId: string) => [...rigKeys.all, 'detail', rigId] as const,
   outlook: (rigId: string) => [...rigKeys.all, 'outlook', rigId] as const,
   cableRuns: (rigId: string) => [...rigKeys.all, 'cable-runs', rigId] as const,
+  hookups: (rigId: string) => [...rigKeys.all, 'hookup', rigId] as const,
+  hookup: (rigId: string, control: string | null) => [...rigKeys.hookups(rigId), control ?? 'now'] as const,
   history: (rigId: string) => [...rigKeys.all, 'history', rigId] as const,
   emails: (rigId: string) => [...rigKeys.all, 'emails', rigId] as const,
 };
