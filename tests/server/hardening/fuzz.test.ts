@@ -47,6 +47,8 @@ const routes = (): [string, Sender][] => {
     ['POST /api/cable-runs/size', (b) => o.post('/api/cable-runs/size').type('json').send(JSON.stringify(b))],
     ['POST /api/hookups', (b) => o.post('/api/hookups').type('json').send(JSON.stringify(b))],
     ['GET /api/rigs/:rigId/hookup', (_b, s) => o.get(`${r}/hookup`).query({ feedLengthM: s, control: s })],
+    ['POST /api/rigs/:rigId/fixes/preview', (b) => o.post(`${r}/fixes/preview`).set('Origin', TEST_ORIGIN).type('json').send(JSON.stringify(b))],
+    ['POST /api/rigs/:rigId/history/:entryId/undo', (_b, s) => o.post(`${r}/history/${id(s)}/undo`).set('Origin', TEST_ORIGIN)],
     ['POST /api/readings/analyze', (b) => o.post('/api/readings/analyze').type('json').send(JSON.stringify(b))],
     ['POST /api/rigs', (b) => o.post('/api/rigs').set('Origin', TEST_ORIGIN).type('json').send(JSON.stringify(b))],
     ['PATCH /api/rigs/:rigId', (b, s) => o.patch(`/api/rigs/${id(s)}`).set('Origin', TEST_ORIGIN).type('json').send(JSON.stringify(b))],
