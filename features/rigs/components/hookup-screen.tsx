@@ -60,7 +60,7 @@ export function HookupScreen({ rigId, fix }: { rigId: string; fix: FixKind | nul
             const on = kind === chosen;
             return (
               <Link key={kind ?? 'none'} href={fixLink(kind)} asChild>
-                <Pressable role="tab" aria-selected={on} style={[styles.chip, on && styles.chipOn]} testID={`hookup-fix-${kind ?? 'none'}`}>
+                <Pressable role="tab" aria-selected={on} style={StyleSheet.flatten([styles.chip, on && styles.chipOn])} testID={`hookup-fix-${kind ?? 'none'}`}>
                   <Text style={[styles.chipLabel, on && styles.chipLabelOn]}>{kind ? FIX_NAME[kind] : 'None'}</Text>
                 </Pressable>
               </Link>

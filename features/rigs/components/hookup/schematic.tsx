@@ -194,8 +194,9 @@ function Symbol({ part, chassis }: { part: HookupPart; chassis: boolean }) {
 const styles = StyleSheet.create({
   frame: { borderWidth: 1, borderColor: colors.line, borderRadius: radius.md, backgroundColor: colors.paper, paddingVertical: space.sm },
   row: { flexDirection: 'row', minHeight: 66 },
-  symbol: { width: W, alignSelf: 'stretch' },
-  label: { flex: 1, justifyContent: 'center', paddingRight: space.md, paddingVertical: space.xs },
+  // The drawing fills the row's height without setting it: the label decides how tall a row is.
+  symbol: { position: 'absolute', top: 0, bottom: 0, left: 0, width: W },
+  label: { flex: 1, marginLeft: W, justifyContent: 'center', paddingRight: space.md, paddingVertical: space.sm },
   partLabel: { ...type.body, fontFamily: 'Nunito_700Bold', color: colors.ink },
   partDetail: { ...type.small, color: colors.inkSoft },
 });
