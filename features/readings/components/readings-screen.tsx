@@ -399,6 +399,12 @@ function DropTestCard({ rigId, cableRuns }: { rigId: string; cableRuns: { id: st
       <Button label="Check the connection" onPress={submit} busy={test.isPending} testID="run-drop-test" />
       {test.data ? (
         <View role="status" style={{ gap: 2 }}>
+          {test.data.verdict ? (
+            <Text testID="drop-verdict" style={{ ...type.heading, color: test.data.verdict.within ? colors.comfortable : colors.short }}>
+              {test.data.verdict.within ? '✓ Within its limit. ' : '▲ Over its limit. '}
+              {test.data.verdict.message}
+            </Text>
+          ) : null}
           <Body style={test.data.flagged ? { color: colors.short } : undefined}>{test.data.message}</Body>
           <Small>
             {test.data.dropV} V · {test.data.dropPercent} % · {test.data.resistanceOhm} Ω
