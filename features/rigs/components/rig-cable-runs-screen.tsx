@@ -8,6 +8,7 @@ import { TextField } from '@/components/text-field';
 import { Body, Button, Card, Heading, Small } from '@/components/ui';
 import { useUnits } from '@/components/units';
 import { useIsWide } from '@/components/use-layout';
+import { CircuitDrawing } from '@/components/wiring/circuit-drawing';
 import { type CableRunForm, type CableRunInput, cableRunSchema } from '@/shared/schemas/cable-run';
 import { colors, radius, space, type } from '@/shared/theme';
 import { type SavedCableRun, useCableRunCreateMutation, useCableRunDeleteMutation, useCableRunsQuery, useCableRunUpdateMutation } from '../api/cable-runs';
@@ -55,6 +56,18 @@ export function RigCableRunsScreen({ rigId }: { rigId: string }) {
                 <Text style={styles.figures} testID={`run-size-${r.label}`}>
                   {size(r)} · drop {drop(r)} · {r.sizing ? `${r.sizing.fuseA} A fuse or breaker` : 'no size'}
                 </Text>
+                {r.sizing ? (
+                  <CircuitDrawing
+                    testID={`run-drawing-${r.label}`}
+                    size={size(r)}
+                    lengthM={r.lengthM}
+                    dropPercent={units.wire === 'mm2' ? r.sizing.metric.dropPercent : r.sizing.dropPercent}
+                    allowedDropPercent={r.maxDropPercent}
+                    fuseA={r.sizing.fuseA}
+                    device={r.loadName ?? (r.to || 'Device')}
+                    returnPath={r.returnPath}
+                  />
+                ) : null}
                 {r.warnings.map((w) => (
                   <Text key={w} role="alert" style={styles.warning}>
                     ▲ {w}
