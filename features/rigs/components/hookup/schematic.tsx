@@ -91,8 +91,8 @@ function Symbol({ part, chassis }: { part: HookupPart; chassis: boolean }) {
           <Rect x={6} y={14} width={62} height={34} rx={6} fill="#FFF4DC" stroke={stroke} strokeWidth={2} />
           <Rect x={46} y={8} width={12} height={6} fill={stroke} />
           <Rect x={10} y={8} width={12} height={6} fill={retStroke} />
-          <SvgText x={52} y={38} fontSize={16} fontWeight="bold" fill={stroke} textAnchor="middle">+</SvgText>
-          <SvgText x={16} y={38} fontSize={16} fontWeight="bold" fill={retStroke} textAnchor="middle">−</SvgText>
+          <SvgText fontFamily="Nunito_700Bold" x={52} y={38} fontSize={16} fontWeight="bold" fill={stroke} textAnchor="middle">+</SvgText>
+          <SvgText fontFamily="Nunito_700Bold" x={16} y={38} fontSize={16} fontWeight="bold" fill={retStroke} textAnchor="middle">−</SvgText>
         </G>
       );
     case 'protection':
@@ -135,7 +135,7 @@ function Symbol({ part, chassis }: { part: HookupPart; chassis: boolean }) {
           <Line x1={72} x2={90} y1={35} y2={35} stroke={stroke} strokeWidth={1} />
           <Line x1={81} x2={81} y1={40} y2={FULL} stroke={stroke} strokeWidth={1.5} strokeDasharray="3 3" />
           <Line x1={81} x2={81} y1={12} y2={30} stroke={stroke} strokeWidth={1.5} />
-          <SvgText x={81} y={10} fontSize={9} fill={stroke} textAnchor="middle">ACC</SvgText>
+          <SvgText fontFamily="Nunito_700Bold" x={81} y={10} fontSize={9} fill={stroke} textAnchor="middle">ACC</SvgText>
         </G>
       );
     case 'remote-switch':
@@ -143,7 +143,7 @@ function Symbol({ part, chassis }: { part: HookupPart; chassis: boolean }) {
         <G>
           <Rails chassis={chassis} />
           <Rect x={70} y={22} width={18} height={18} fill={colors.card} stroke={stroke} strokeWidth={2} />
-          <SvgText x={79} y={35} fontSize={10} fontWeight="bold" fill={stroke} textAnchor="middle">R</SvgText>
+          <SvgText fontFamily="Nunito_700Bold" x={79} y={35} fontSize={10} fontWeight="bold" fill={stroke} textAnchor="middle">R</SvgText>
           <Line x1={79} x2={79} y1={0} y2={22} stroke={stroke} strokeWidth={1.5} strokeDasharray="3 3" />
           <Line x1={79} x2={79} y1={40} y2={FULL} stroke={stroke} strokeWidth={1.5} strokeDasharray="3 3" />
         </G>
@@ -153,7 +153,7 @@ function Symbol({ part, chassis }: { part: HookupPart; chassis: boolean }) {
         <G>
           <Rails posGap={[18, 54]} chassis={chassis} />
           <Rect x={POS - 16} y={18} width={32} height={36} rx={5} fill={colors.lamp} stroke={stroke} strokeWidth={2} />
-          <SvgText x={POS} y={40} fontSize={10} fontWeight="bold" fill={stroke} textAnchor="middle">LVD</SvgText>
+          <SvgText fontFamily="Nunito_700Bold" x={POS} y={40} fontSize={10} fontWeight="bold" fill={stroke} textAnchor="middle">LVD</SvgText>
         </G>
       );
     case 'socket':
