@@ -21,6 +21,30 @@ export const CABLE_TYPES = {
   welding: { label: 'Welding cable', insulationC: 90 },
 } as const;
 
+/** The words both circuit forms use (Wire a circuit and a rig's saved runs), so their labels cannot drift. */
+export const CIRCUIT_LABELS = {
+  end: 'At the end of the wire',
+  current: 'Current the device draws',
+  length: 'Length, battery to device',
+  lengthHint: 'One way; the return is counted for you.',
+  route: 'Where it runs',
+  routeHint: 'The engine bay\'s heat lowers what a cable may carry.',
+  engineBay: 'Runs through the engine bay',
+  cableType: 'Cable type',
+  return: 'Return',
+  continuous: 'Runs 3 hours or more at a time',
+} as const;
+export const RETURN_OPTIONS = [
+  { value: 'cable' as const, label: 'Its own negative cable' },
+  { value: 'chassis' as const, label: 'Through the chassis' },
+];
+/** Cable types as choices of an insulation rating, with Table 5's other columns for runs saved before. */
+export const INSULATION_OPTIONS = [
+  ...Object.values(CABLE_TYPES).map((c) => ({ value: c.insulationC as number, label: `${c.label}, ${c.insulationC} °C` })),
+  { value: 60, label: 'Other cable, 60 °C' },
+  { value: 75, label: 'Other cable, 75 °C' },
+];
+
 const number = () => z.number({ error: 'Enter a number.' }).finite('Enter a number.');
 
 export const circuitSchema = z

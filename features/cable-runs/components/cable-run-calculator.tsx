@@ -8,7 +8,7 @@ import { Body, Button, Card, Heading, Small, Title } from '@/components/ui';
 import { useIsWide } from '@/components/use-layout';
 import { CircuitDrawing } from '@/components/wiring/circuit-drawing';
 import type { CableRunResult } from '@/shared/energy/wiring';
-import { CABLE_TYPES, CIRCUIT_ROUTES, type CircuitForm, type CircuitInput, circuitSchema, circuitToRun } from '@/shared/schemas/circuit';
+import { CABLE_TYPES, CIRCUIT_LABELS as L, CIRCUIT_ROUTES, RETURN_OPTIONS, type CircuitForm, type CircuitInput, circuitSchema, circuitToRun } from '@/shared/schemas/circuit';
 import { colors, radius, space, type } from '@/shared/theme';
 import { useCableRunSizeMutation } from '../api/size-cable-run';
 
@@ -44,20 +44,20 @@ export function CableRunCalculator() {
       <Body>Start from what is at the end of the wire; Keyoff sizes the cable and the fuse at the battery and draws the circuit.</Body>
       <View style={[styles.columns, wide && styles.columnsWide]}>
         <Card style={wide ? styles.col : undefined}>
-          <ChoiceField control={form.control} name="end" label="At the end of the wire" options={[{ value: 'device', label: 'A device (its current)' }, { value: 'inverter', label: 'An inverter (its watts)' }]} />
+          <ChoiceField control={form.control} name="end" label={L.end} options={[{ value: 'device', label: 'A device (its current)' }, { value: 'inverter', label: 'An inverter (its watts)' }]} />
           {end === 'inverter' ? (
             <NumberField control={form.control} name="inverterW" label="Inverter's rated output" unit="W" hint="Its feed is sized at full output near the 10.5 V cut-out, as a continuous load." />
           ) : (
-            <NumberField control={form.control} name="currentA" label="Current the device draws" unit="A" hint="The most it draws from the battery." />
+            <NumberField control={form.control} name="currentA" label={L.current} unit="A" hint="The most it draws from the battery." />
           )}
-          <ChoiceField control={form.control} name="route" label="Where it runs" options={Object.entries(CIRCUIT_ROUTES).map(([value, r]) => ({ value: value as CircuitInput['route'], label: r.label }))} hint="The engine bay's heat lowers what a cable may carry." />
-          <ChoiceField control={form.control} name="cableType" label="Cable type" options={Object.entries(CABLE_TYPES).map(([value, c]) => ({ value: value as CircuitInput['cableType'], label: `${c.label}, ${c.insulationC} °C` }))} />
-          <NumberField control={form.control} name="lengthM" label="Length, battery to device" unit="m" hint="One way; the return is counted for you." />
-          <ChoiceField control={form.control} name="returnPath" label="Return" options={[{ value: 'cable', label: 'Its own negative cable' }, { value: 'chassis', label: 'Through the chassis' }]} />
+          <ChoiceField control={form.control} name="route" label={L.route} options={Object.entries(CIRCUIT_ROUTES).map(([value, r]) => ({ value: value as CircuitInput['route'], label: r.label }))} hint={L.routeHint} />
+          <ChoiceField control={form.control} name="cableType" label={L.cableType} options={Object.entries(CABLE_TYPES).map(([value, c]) => ({ value: value as CircuitInput['cableType'], label: `${c.label}, ${c.insulationC} °C` }))} />
+          <NumberField control={form.control} name="lengthM" label={L.length} unit="m" hint={L.lengthHint} />
+          <ChoiceField control={form.control} name="returnPath" label={L.return} options={RETURN_OPTIONS} />
           {end === 'inverter' ? null : (
             <>
               <SwitchField control={form.control} name="critical" label="Electronics or a feed: keep the drop within 3 % (else 10 %)" />
-              <SwitchField control={form.control} name="continuous" label="Runs 3 hours or more at a time" />
+              <SwitchField control={form.control} name="continuous" label={L.continuous} />
             </>
           )}
           <ChoiceField control={form.control} name="systemVoltage" label="System voltage" options={[{ value: 12, label: '12 V' }, { value: 24, label: '24 V' }]} />

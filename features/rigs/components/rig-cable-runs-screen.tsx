@@ -10,6 +10,7 @@ import { useUnits } from '@/components/units';
 import { useIsWide } from '@/components/use-layout';
 import { CircuitDrawing } from '@/components/wiring/circuit-drawing';
 import { type CableRunForm, type CableRunInput, cableRunSchema } from '@/shared/schemas/cable-run';
+import { CIRCUIT_LABELS as L, INSULATION_OPTIONS, RETURN_OPTIONS } from '@/shared/schemas/circuit';
 import { colors, radius, space, type } from '@/shared/theme';
 import { type SavedCableRun, useCableRunCreateMutation, useCableRunDeleteMutation, useCableRunsQuery, useCableRunUpdateMutation } from '../api/cable-runs';
 import { useRigQuery } from '../api/rig';
@@ -143,24 +144,24 @@ function RunForm(props: { initial: CableRunForm; loads: { value: string; label: 
       <Heading>{props.initial.label ? `Edit ${props.initial.label}` : 'Add a cable run'}</Heading>
       <TextField control={form.control} name="label" label="Name" placeholder="Inverter feed" />
       <TextField control={form.control} name="to" label="To" placeholder="Inverter" />
-      <NumberField control={form.control} name="lengthM" label="Length, one way" unit="m" />
+      <ChoiceField control={form.control} name="purpose" label={L.end} options={[{ value: 'general', label: 'A device' }, { value: 'inverter', label: 'The inverter' }]} />
       {props.loads.length ? (
         <View style={{ flexDirection: 'row', gap: space.sm }}>
           <Pressable role="radio" aria-checked={!fromLoad} onPress={() => chooseSource(false)} style={[styles.chip, !fromLoad && styles.chipOn]}>
-            <Text style={[styles.chipText, !fromLoad && styles.chipTextOn]}>Enter the current</Text>
+            <Text style={[styles.chipText, !fromLoad && styles.chipTextOn]}>Its current</Text>
           </Pressable>
           <Pressable role="radio" aria-checked={fromLoad} onPress={() => chooseSource(true)} style={[styles.chip, fromLoad && styles.chipOn]} testID="run-from-load">
-            <Text style={[styles.chipText, fromLoad && styles.chipTextOn]}>Take a load&apos;s current</Text>
+            <Text style={[styles.chipText, fromLoad && styles.chipTextOn]}>A load of the rig</Text>
           </Pressable>
         </View>
       ) : null}
-      {fromLoad ? <ChoiceField control={form.control} name="loadId" label="Load" options={props.loads} /> : <NumberField control={form.control} name="currentA" label="Current" unit="A" />}
+      {fromLoad ? <ChoiceField control={form.control} name="loadId" label="Load" options={props.loads} /> : <NumberField control={form.control} name="currentA" label={L.current} unit="A" />}
+      <NumberField control={form.control} name="lengthM" label={L.length} unit="m" hint={L.lengthHint} />
+      <SwitchField control={form.control} name="engineSpace" label={L.engineBay} hint={L.routeHint} />
+      <ChoiceField control={form.control} name="insulationC" label={L.cableType} options={INSULATION_OPTIONS as { value: 105; label: string }[]} />
+      <ChoiceField control={form.control} name="returnPath" label={L.return} options={RETURN_OPTIONS} />
       <NumberField control={form.control} name="maxDropPercent" label="Allowed drop" unit="%" hint="3 % for electronics and feeds, 10 % for other loads (ABYC E-11)." />
-      <ChoiceField control={form.control} name="insulationC" label="Insulation rating" options={[60, 75, 90, 105, 125].map((t) => ({ value: t, label: `${t} °C` }))} />
-      <ChoiceField control={form.control} name="returnPath" label="Return" options={[{ value: 'cable', label: 'Negative cable' }, { value: 'chassis', label: 'Chassis' }]} />
-      <ChoiceField control={form.control} name="purpose" label="Feeds" options={[{ value: 'general', label: 'A device' }, { value: 'inverter', label: 'An inverter' }]} />
-      <SwitchField control={form.control} name="engineSpace" label="Through the engine space" />
-      <SwitchField control={form.control} name="continuous" label="Continuous (3 hours or more)" />
+      <SwitchField control={form.control} name="continuous" label={L.continuous} />
       <ChoiceField
         control={form.control}
         name="existingAwg"
