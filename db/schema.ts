@@ -132,8 +132,11 @@ export interface RigHistoryTable {
   days_parked_before: number | null;
   days_parked_after: number | null;
   created_at: Timestamp;
+  /** A Fix's entry: the power system before and after it (jsonb), for History's undo. */
+  undo: ColumnType<{ before: unknown; after: unknown } | null, string | null | undefined, string | null>;
+  undone_at: ColumnType<Date | null, Date | null | undefined, Date | null>;
 }
-export type HistoryKind = 'rig-created' | 'cable-run-added' | 'cable-run-edited' | 'cable-run-removed' | 'load-added' | 'load-edited' | 'load-removed' | 'reading-added' | 'reading-removed' | 'battery' | 'inverter' | 'charging' | 'routine' | 'stay' | 'rig' | 'member-joined' | 'member-left' | 'member-removed' | 'role-changed';
+export type HistoryKind = 'rig-created' | 'fix' | 'cable-run-added' | 'cable-run-edited' | 'cable-run-removed' | 'load-added' | 'load-edited' | 'load-removed' | 'reading-added' | 'reading-removed' | 'battery' | 'inverter' | 'charging' | 'routine' | 'stay' | 'rig' | 'member-joined' | 'member-left' | 'member-removed' | 'role-changed';
 
 export interface EmailPrefsTable {
   user_id: string;

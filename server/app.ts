@@ -17,6 +17,7 @@ import { devicesRouter } from './routes/devices';
 import { clientsRouter } from './routes/clients';
 import { emailRouter } from './routes/email';
 import { healthRouter } from './routes/health';
+import { hookupsRouter } from './routes/hookups';
 import { invitationsRouter } from './routes/invitations';
 import { meRouter } from './routes/me';
 import { projectionsRouter } from './routes/projections';
@@ -80,6 +81,7 @@ export function createApp(ctx: AppContext): Express {
   const openLimit = rateLimitedOpen(config.RATE_LIMIT_PER_MINUTE);
   app.use('/api/projections', openLimit, projectionsRouter());
   app.use('/api/cable-runs', openLimit, cableRunsRouter());
+  app.use('/api/hookups', openLimit, hookupsRouter());
   app.use('/api/devices', openLimit, devicesRouter());
   app.use('/api/email', openLimit, express.urlencoded({ extended: false, limit: '10kb' }), emailRouter(ctx));
   app.use('/api/me', requireSession(auth), meRouter(ctx));

@@ -16,3 +16,11 @@ export const GENERAL_CAUTIONS: readonly string[] = [
   'Disconnect the battery before work, use proper terminals and strain relief, and follow local codes and a qualified auto electrician.',
   'These figures are estimates from the model and its assumptions, not a guarantee.',
 ];
+
+/** On every hook-up plan and every drawing of one (PRODUCT.md, Safety). */
+export const HOOKUP_CAUTIONS = [
+  'Fit the fuse or breaker as close to the battery as possible: within 7 in (178 mm) of the terminal, or 40 in (1 m) if the cable is sheathed (33 CFR 183.455).',
+  'Use crimped terminals of the right size, support the cable and give it strain relief; protect it where it passes through metal.',
+  'Disconnect the battery before any work. A lead-acid battery can vent explosive gas; a lithium battery needs its protection system; an inverter\'s AC output can kill.',
+  'These figures are estimates, not a guarantee. Follow local codes and have a qualified auto electrician check the installation.',
+];

@@ -7,6 +7,7 @@ import * as m004 from './2026-12-01-004-history-mail';
 import * as m005 from './2026-12-01-005-readings';
 import * as m015 from './2026-12-02-015-invitation-sends';
 import * as m016 from './2026-12-02-016-essential-inverter-link';
+import * as m019 from './2026-12-02-019-history-undo';
 
 // A static provider: file discovery fails under vitest, an explicit list works everywhere.
 export const migrations: Record<string, Migration> = {
@@ -17,4 +18,5 @@ export const migrations: Record<string, Migration> = {
   '2026-12-01-005-readings': m005,
   '2026-12-02-015-invitation-sends': m015,
   '2026-12-02-016-essential-inverter-link': m016,
+  '2026-12-02-019-history-undo': m019,
 };

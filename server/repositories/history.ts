@@ -12,6 +12,7 @@ export type HistoryEntry = {
   summary: string;
   daysParkedBefore: number | null;
   daysParkedAfter: number | null;
+  undo?: { before: unknown; after: unknown };
 };
 
 export async function insertHistory(db: Exec, e: HistoryEntry) {
@@ -25,6 +26,7 @@ export async function insertHistory(db: Exec, e: HistoryEntry) {
       summary: e.summary,
       days_parked_before: e.daysParkedBefore,
       days_parked_after: e.daysParkedAfter,
+      undo: e.undo ? JSON.stringify(e.undo) : null,
       created_at: new Date(),
     })
     .execute();
@@ -34,4 +36,13 @@ export async function listHistory(db: Exec, rigId: string, opts: { since?: Date;
   let q = db.selectFrom('rig_history').selectAll().where('rig_id', '=', rigId);
   if (opts.since) q = q.where('created_at', '>', opts.since);
   return q.orderBy('created_at', 'desc').limit(opts.limit ?? 200).execute();
+}
+
+export const findHistoryEntry = (db: Exec, rigId: string, entryId: string) =>
+  db.selectFrom('rig_history').selectAll().where('rig_id', '=', rigId).where('id', '=', entryId).executeTakeFirst();
+
+/** Marks a Fix's entry undone; false when it already was (two undos racing). */
+export async function markUndone(db: Exec, entryId: string) {
+  const r = await db.updateTable('rig_history').set({ undone_at: new Date() }).where('id', '=', entryId).where('undone_at', 'is', null).executeTakeFirst();
+  return Number(r.numUpdatedRows) === 1;
 }

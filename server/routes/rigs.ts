@@ -12,6 +12,10 @@ import { session } from '../middleware/session';
 import { parsed, validate } from '../middleware/validate';
 import * as people from '../services/people';
 import * as cableRuns from '../services/cable-runs';
+import { rigHookup } from '../services/hookup';
+import { applyFix, previewFix, undoFix } from '../services/fixes';
+import { fixApplySchema, fixPreviewSchema, historyEntryParamsSchema } from '@/shared/schemas/fix';
+import { rigHookupQuerySchema } from '@/shared/schemas/hookup';
 import * as notes from '../services/notes';
 import * as rigs from '../services/rigs';
 import * as reports from '../services/reports';
@@ -28,7 +32,7 @@ export function rigsRouter({ db, auth, jobs, config, storage }: AppContext) {
 
   // After a change that can move the forecast, the rig's margin is checked (low-margin warnings).
   router.use('/:rigId', (req, res, next) => {
-    if (req.method !== 'GET' && !/\/(notes|try)(\/|$)/.test(req.path)) {
+    if (req.method !== 'GET' && !/\/(notes|try|fixes\/preview)(\/|$)/.test(req.path)) {
       res.on('finish', () => {
         if (res.statusCode < 300 && typeof req.params.rigId === 'string') void jobs.rigChanged(req.params.rigId);
       });
@@ -109,6 +113,23 @@ export function rigsRouter({ db, auth, jobs, config, storage }: AppContext) {
   router.delete('/:rigId/cable-runs/:runId', rigAccess(db, { cableRun: ['delete'] }), validate(cableRunParamsSchema, 'params'), async (_req, res) => {
     await cableRuns.removeCableRun(db, rigOf(res), actor(res), parsed(res, cableRunParamsSchema, 'params').runId);
     res.status(204).end();
+  });
+
+  router.get('/:rigId/hookup', rigAccess(db, { rig: ['read'] }), validate(rigHookupQuerySchema, 'query'), async (_req, res) => {
+    res.json(await rigHookup(db, rigOf(res), parsed(res, rigHookupQuerySchema, 'query')));
+  });
+
+  router.post('/:rigId/fixes/preview', rigAccess(db, { rig: ['read'] }), validate(fixPreviewSchema), async (_req, res) => {
+    res.json(await previewFix(db, rigOf(res), parsed(res, fixPreviewSchema).kind));
+  });
+
+  router.post('/:rigId/fixes/apply', rigAccess(db, { rig: ['update'] }), validate(fixApplySchema), async (_req, res) => {
+    const { kind, version } = parsed(res, fixApplySchema);
+    res.json(await applyFix(db, rigOf(res), actor(res), kind, version));
+  });
+
+  router.post('/:rigId/history/:entryId/undo', rigAccess(db, { rig: ['update'] }), validate(historyEntryParamsSchema, 'params'), async (_req, res) => {
+    res.json(await undoFix(db, rigOf(res), actor(res), parsed(res, historyEntryParamsSchema, 'params').entryId));
   });
 
   router.get('/:rigId/notes', rigAccess(db, { rig: ['read'] }), async (_req, res) => {

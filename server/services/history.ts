@@ -114,5 +114,6 @@ export async function historyOf(db: Db, rigId: string) {
     summary: r.summary,
     daysParkedBefore: r.days_parked_before,
     daysParkedAfter: r.days_parked_after,
+    undoable: r.undo !== null && r.undone_at === null,
   }));
 }

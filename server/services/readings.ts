@@ -7,6 +7,7 @@ import type { HistoryKind } from '@/db/schema';
 import { trickleA, twoFigures, voltageDropTest } from '@/shared/energy/readings';
 import { rigPowerSchema } from '@/shared/schemas/projection';
 import { type ColumnMapping, LOG_LIMITS, type ReadingInputParsed } from '@/shared/schemas/reading';
+import { dropVerdict } from '@/shared/energy/drop-verdict';
 import { HttpError } from '../errors';
 import type { RigAccess } from '../middleware/rig-access';
 import { insertHistory } from '../repositories/history';
@@ -189,12 +190,15 @@ export async function removeUpload(db: Db, storage: Storage, rig: RigAccess, act
 export async function dropTestOn(db: Db, rig: RigAccess, input: { batteryV: number; pointV: number; currentA: number; cableRunId?: string }) {
   let expectedOhm: number | null = null;
   let label: string | null = null;
+  let allowedPercent: number | null = null;
   if (input.cableRunId) {
     const runs = await cableRunsOf(db, rig);
     const run = runs.find((r) => r.id === input.cableRunId);
     if (!run) throw new HttpError(400, 'validation_failed', 'That cable run is not on this rig.', [{ path: 'cableRunId', message: 'No such cable run on this rig.' }]);
     label = run.label;
+    allowedPercent = run.maxDropPercent;
     if (run.sizing && run.currentA > 0) expectedOhm = run.sizing.dropV / run.currentA;
   }
-  return { ...voltageDropTest({ ...input, expectedOhm }), cableRun: label };
+  const test = voltageDropTest({ ...input, expectedOhm });
+  return { ...test, cableRun: label, verdict: allowedPercent === null ? null : dropVerdict(test.dropPercent, allowedPercent) };
 }

@@ -126,7 +126,7 @@ export function renderSheet(data: SheetData, size: SheetSize): Promise<Buffer> {
     ],
     [
       ['Battery', `${b.capacityAh} Ah ${b.chemistry === 'lifepo4' ? 'LiFePO4' : b.chemistry.toUpperCase()} ${b.role === 'starter' ? 'starting battery' : 'house battery'} at ${pw.systemVoltage} V, health ${b.healthPercent} %, ${b.temperatureC} °C`],
-      ['Inverter', inv ? `${inv.ratedW} W, ${inv.idleA} A idle, ${inv.efficiencyPercent} % efficient, ${inv.control.replace(/-/g, ' ')}${inv.connection && inv.connection !== 'battery' ? `, in a socket ${inv.connection === 'socket-ignition' ? 'live with the ignition' : 'always live'}` : ''}` : 'None'],
+      ['Inverter', inv ? `${inv.ratedW} W, ${inv.idleA} A idle, ${inv.efficiencyPercent} % efficient, ${inv.control.replace(/-/g, ' ')}${inv.connection === 'socket' ? `, in a socket (${inv.socketFuseA} A fuse) ${inv.socketSwitched ? 'live with the ignition' : 'always live'}` : ''}` : 'None'],
       ['Key-off draw', `${pw.keyOffDrawA} A`],
       ['Charging', `${pw.charging.alternatorA} A from the alternator through ${pw.charging.charger === 'dc-dc' ? 'a DC-DC charger' : 'a relay'}${pw.charging.solarW ? `; ${pw.charging.solarW} W of solar` : ''}${pw.charging.shore?.amps ? `; shore power ${pw.charging.shore.amps} A` : ''}`],
     ],

@@ -51,7 +51,7 @@ export const STOAT_LOADS: LoadInput[] = [
 export const STOAT: ProjectionInputRaw = {
   systemVoltage: 12,
   battery: { chemistry: 'flooded', capacityAh: 45, healthPercent: 90, temperatureC: 10, startSocPercent: 95, role: 'starter' },
-  inverter: { ratedW: 150, efficiencyPercent: 88, idleA: 0.3, control: 'always-on' },
+  inverter: { ratedW: 150, efficiencyPercent: 88, idleA: 0.3, control: 'always-on', connection: 'socket', socketFuseA: 15, socketSwitched: false },
   keyOffDrawA: 0.04,
   loads: STOAT_LOADS,
   charging: { alternatorA: 30, charger: 'relay', drivingMinutesPerDay: [30, 30, 30, 30, 30, 0, 0], drivingStartHour: 8, solarW: 0, peakSunHours: 0 },

@@ -117,7 +117,7 @@ export function resolve(input: ProjectionInput): Resolved {
     inverter: inv
       ? {
           // A socket live only with the ignition switches the inverter as an ignition relay would.
-          control: inv.connection === 'socket-ignition' ? 'ignition-relay' : inv.control,
+          control: inv.connection === 'socket' && inv.socketSwitched ? 'ignition-relay' : inv.control,
           efficiency: inv.efficiencyPercent / 100,
           idleA: inv.idleA,
           ratedW: inv.ratedW,

@@ -1,6 +1,7 @@
 import type { ProjectionInput } from '../schemas/projection';
 import { LEAD_ACID_FREEZING_CURVE, MODEL_DEFAULTS, temperatureFactor } from './defaults';
 import { listNames } from './fixes';
+import { socketOverloadWarning } from './hookup/socket';
 import type { DemandProfile } from './profile';
 import type { Resolved } from './resolve';
 import { round } from './simulate';
@@ -27,7 +28,7 @@ export function collectWarnings(input: ProjectionInput, r: Resolved, demand: Dem
       const ahPerDay = round(f.acNotServedAhPerDay, 1);
       warnings.push({
         code: 'ac-loads-cut-while-parked',
-        message: `On an ignition relay the inverter is off while parked, so ${listNames(cut)} cannot run then (${ahPerDay} Ah a day not served).`,
+        message: `${input.inverter?.connection === 'socket' ? 'On a socket live only with the ignition' : 'On an ignition relay'} the inverter is off while parked, so ${listNames(cut)} cannot run then (${ahPerDay} Ah a day not served).`,
         figures: { ahPerDayNotServed: ahPerDay, loads: cut.join(', ') },
       });
     }
@@ -47,6 +48,8 @@ export function collectWarnings(input: ProjectionInput, r: Resolved, demand: Dem
       figures: { watts: round(f.maxAcWatts, 0), ratedW: inv.ratedW },
     });
   }
+  const socket = socketOverloadWarning(input, f.maxAcWatts);
+  if (socket) warnings.push(socket);
   const charges = r.alternatorA > 0 || r.solarW > 0 || r.shoreByHourOfWeek.some((x) => x > 0);
   if (r.frozen && charges) {
     warnings.push(

@@ -9,8 +9,8 @@ const num = (min: number, max: number) =>
 export const chemistrySchema = z.enum(['flooded', 'agm', 'gel', 'lifepo4']);
 export const batteryRoleSchema = z.enum(['house', 'starter']);
 export const inverterControlSchema = z.enum(['always-on', 'manual-switch', 'ignition-relay', 'low-voltage-disconnect']);
-/** Where the inverter takes its power: wired to the battery, or plugged into an accessory socket. */
-export const inverterConnectionSchema = z.enum(['battery', 'socket-ignition', 'socket-always']);
+/** Where the inverter takes its power: wired to the battery, or plugged into an accessory (lighter) socket. */
+export const inverterConnectionSchema = z.enum(['direct', 'socket']);
 export const supplySchema = z.enum(['dc', 'ac']);
 export const whenSchema = z.enum(['always', 'parked', 'driving']);
 export const loadStatusSchema = z.enum(['installed', 'candidate']);
@@ -45,12 +45,16 @@ export const inverterSchema = z.object({
   efficiencyPercent: num(50, 100).default(90),
   idleA: num(0, 20).default(0.5),
   control: inverterControlSchema.default('always-on'),
-  /** Absent means wired to the battery. A socket live only with the ignition powers it only while driving. */
-  connection: inverterConnectionSchema.optional(),
   /** Low-voltage disconnect: the state of charge at which the inverter switches itself off. */
   lvdSocPercent: num(0, 100).optional(),
   /** Low-voltage disconnect: points above the threshold at which it switches back on. */
   lvdReconnectPoints: num(1, 50).optional(),
+  /** Wired to the battery, or plugged into an accessory (lighter) socket (SAE J563). */
+  connection: inverterConnectionSchema.default('direct'),
+  /** The socket's fuse in the vehicle's fuse box: SAE J563 sockets are fused at 10, 15 or 20 A (common practice). */
+  socketFuseA: num(1, 40).default(15),
+  /** True when the socket is live only with the ignition on. */
+  socketSwitched: z.boolean().default(false),
 });
 
 export const loadSchema = z

@@ -18,7 +18,7 @@ async function fill(page: Page, testId: string, value: string) {
   await input.blur();
 }
 
-describe('the cable-run calculator', () => {
+describe('Wire a circuit, the stand-alone calculator', () => {
   it('sizes 20 A over 7.62 m at 3 % as 4 AWG with the cautions beside it (wide)', async () => {
     const page = await browser.newPage({ viewport: WIDE });
     await signInAs(page, 'tobi@example.org');
@@ -30,7 +30,10 @@ describe('the cable-run calculator', () => {
     // REFERENCES.md (NEC Table 8, 75 °C): 20 A over 25 ft one way: 4 AWG drops 0.308 V (2.57 %).
     await expect.poll(() => page.getByTestId('result-awg').textContent()).toBe('4');
     expect(await page.getByTestId('cautions').textContent()).toMatch(/auto electrician/);
+    // The answer drawn: battery, the fuse at the battery, the cable with its size and drop, the device.
+    expect(await page.getByTestId('circuit-drawing').getAttribute('aria-label')).toMatch(/20 A fuse at the battery, 4 AWG .* over 7\.62 m dropping 2\.57 %/);
     await page.screenshot({ path: path.join(SHOTS, 'cable-runs-wide.png'), fullPage: true });
+    await page.getByTestId('circuit-drawing').screenshot({ path: path.join(SHOTS, 'wire-a-circuit-drawing-wide.png') });
     await page.close();
   });
 

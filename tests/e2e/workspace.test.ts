@@ -176,6 +176,8 @@ describe('cable runs on a rig', () => {
     await expect.poll(() => page.getByTestId('run-size-Inverter feed').textContent()).toMatch(/^4 AWG/);
     expect(await page.getByTestId('run-Inverter feed').textContent()).toMatch(/fitted 10 AWG is smaller/);
     expect(await page.getByTestId('run-cautions').textContent()).toMatch(/auto electrician/);
+    // Drawn as Wire a circuit draws it: battery, fuse at the battery, cable with size and drop, device.
+    expect(await page.getByTestId('run-drawing-Inverter feed').getAttribute('aria-label')).toMatch(/20 A fuse at the battery, 4 AWG over 7\.62 m dropping 2\.57 %, to Inverter/);
     await page.screenshot({ path: path.join(SHOTS, 'rig-cable-runs-wide.png'), fullPage: true });
     await page.goto(BASE + '/settings');
     await page.getByTestId('unit-wire-mm2').click();

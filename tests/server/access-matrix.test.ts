@@ -119,6 +119,17 @@ async function throwawayPhoto(agent?: unknown) {
 }
 let photo: string | null = null;
 
+/** The owner applies the cut-off switch Fix to the fixture rig; the history entry's id undoes it. */
+async function appliedFix() {
+  const { version } = (await fx.agents.owner.get(`/api/rigs/${fx.rigId}`)).body;
+  await fx.agents.owner.post(`/api/rigs/${fx.rigId}/fixes/apply`).set('Origin', TEST_ORIGIN).send({ kind: 'cutoff-switch', version });
+  return (await fx.agents.owner.get(`/api/rigs/${fx.rigId}/history`)).body.history[0].id as string;
+}
+async function undoLatestFix() {
+  const entry = (await fx.agents.owner.get(`/api/rigs/${fx.rigId}/history`)).body.history.find((h: { undoable: boolean }) => h.undoable);
+  if (entry) await fx.agents.owner.post(`/api/rigs/${fx.rigId}/history/${entry.id}/undo`).set('Origin', TEST_ORIGIN).expect(200);
+}
+
 const PREFS = { reportsOn: true, reportWeekday: 6, reportHour: 18, timeZone: 'UTC', warningsOn: true, warnAt: 'tight', noteEmailsOn: true };
 
 const MATRIX: Record<string, Entry> = {
@@ -137,6 +148,8 @@ const MATRIX: Record<string, Entry> = {
     expect: { ...all(201), anonymous: 401 },
   },
   'GET /api/rigs/:rigId': { send: (a, c) => a.get(`/api/rigs/${c.rigId}`), expect: readRig },
+  'POST /api/hookups/': { send: (a) => a.post('/api/hookups').send({ battery: { chemistry: 'agm', capacityAh: 100 }, inverter: { ratedW: 300 } }), expect: all(200) },
+  'GET /api/rigs/:rigId/hookup': { send: (a, c) => a.get(`/api/rigs/${c.rigId}/hookup`), expect: readRig },
   'GET /api/rigs/:rigId/cable-runs': { send: (a, c) => a.get(`/api/rigs/${c.rigId}/cable-runs`), expect: readRig },
   'POST /api/rigs/:rigId/cable-runs': { send: (a, c) => a.post(`/api/rigs/${c.rigId}/cable-runs`).set('Origin', TEST_ORIGIN).send(RUN), expect: editRole(201) },
   'PATCH /api/rigs/:rigId/cable-runs/:runId': {
@@ -231,6 +244,20 @@ const MATRIX: Record<string, Entry> = {
   },
   'GET /api/rigs/:rigId/history': { send: (a, c) => a.get(`/api/rigs/${c.rigId}/history`), expect: readRig },
   'GET /api/rigs/:rigId/report-preview': { send: (a, c) => a.get(`/api/rigs/${c.rigId}/report-preview`), expect: readRig },
+  'POST /api/rigs/:rigId/fixes/preview': { send: (a, c) => a.post(`/api/rigs/${c.rigId}/fixes/preview`).set('Origin', TEST_ORIGIN).send({ kind: 'cutoff-switch' }), expect: readRig },
+  'POST /api/rigs/:rigId/fixes/apply': {
+    send: async (a, c) => {
+      const { version } = (await fx.agents.owner.get(`/api/rigs/${c.rigId}`)).body;
+      return a.post(`/api/rigs/${c.rigId}/fixes/apply`).set('Origin', TEST_ORIGIN).send({ kind: 'cutoff-switch', version });
+    },
+    expect: ownerOnly(200),
+    restore: async (_role, status) => (status === 200 ? undoLatestFix() : undefined),
+  },
+  'POST /api/rigs/:rigId/history/:entryId/undo': {
+    send: async (a, c) => a.post(`/api/rigs/${c.rigId}/history/${await appliedFix()}/undo`).set('Origin', TEST_ORIGIN),
+    expect: ownerOnly(200),
+    restore: async (_role, status) => (status === 200 ? undefined : undoLatestFix()),
+  },
   'GET /api/rigs/:rigId/emails': { send: (a, c) => a.get(`/api/rigs/${c.rigId}/emails`), expect: readRig },
   'GET /api/rigs/:rigId/emails/:emailId': { send: async (a, c) => a.get(`/api/rigs/${c.rigId}/emails/${await sentEmailId()}`), expect: readRig },
   'GET /api/rigs/:rigId/emails/:emailId/chart.png': { send: async (a, c) => a.get(`/api/rigs/${c.rigId}/emails/${await sentEmailId()}/chart.png`), expect: readRig },

@@ -1,56 +1,67 @@
 import { zodResolver } from '@hookform/resolvers/zod';
-import { useForm } from 'react-hook-form';
+import { useState } from 'react';
+import { useForm, useWatch } from 'react-hook-form';
 import { StyleSheet, Text, View } from 'react-native';
 
 import { ChoiceField, NumberField, SwitchField } from '@/components/form';
 import { Body, Button, Card, Heading, Small, Title } from '@/components/ui';
 import { useIsWide } from '@/components/use-layout';
+import { CircuitDrawing } from '@/components/wiring/circuit-drawing';
 import type { CableRunResult } from '@/shared/energy/wiring';
-import { type CableRunSizeForm, type CableRunSizeInput, cableRunSizeSchema } from '@/shared/schemas/cable-run';
+import { CABLE_TYPES, CIRCUIT_LABELS as L, CIRCUIT_ROUTES, RETURN_OPTIONS, type CircuitForm, type CircuitInput, circuitSchema, circuitToRun } from '@/shared/schemas/circuit';
 import { colors, radius, space, type } from '@/shared/theme';
 import { useCableRunSizeMutation } from '../api/size-cable-run';
-import { CurrentOrInverterFields } from './current-or-inverter-fields';
 
-const defaults: CableRunSizeForm = {
+const defaults: CircuitForm = {
   systemVoltage: 12,
+  end: 'device',
   currentA: 25,
+  inverterW: 300,
+  efficiencyPercent: 90,
+  route: 'cabin',
+  cableType: 'xlpe',
   lengthM: 2.5,
-  maxDropPercent: 3,
-  insulationC: 105,
-  engineSpace: false,
+  critical: true,
   returnPath: 'cable',
   continuous: false,
-  purpose: 'inverter',
 };
 
-/** The standalone cable-run calculator: one run from the battery to a device. */
+/** Wire a circuit: start from what is at the end of the wire, say where it runs and in what cable, get it drawn. */
 export function CableRunCalculator() {
   const wide = useIsWide();
   const mutation = useCableRunSizeMutation();
-  const form = useForm<CableRunSizeForm, unknown, CableRunSizeInput>({ resolver: zodResolver(cableRunSizeSchema), defaultValues: defaults, mode: 'onTouched' });
-  const onSubmit = form.handleSubmit((values) => mutation.mutate(values));
+  const [sized, setSized] = useState<CircuitInput | null>(null);
+  const form = useForm<CircuitForm, unknown, CircuitInput>({ resolver: zodResolver(circuitSchema), defaultValues: defaults, mode: 'onTouched' });
+  const end = useWatch({ control: form.control, name: 'end' });
+  const onSubmit = form.handleSubmit((values) => {
+    setSized(values);
+    mutation.mutate(circuitToRun(values));
+  });
 
   return (
     <View style={styles.root} testID="cable-run-calculator">
-      <Title>Cable run</Title>
-      <Body>Size the wire and the fuse or breaker for one circuit from the battery to a device.</Body>
+      <Title>Wire a circuit</Title>
+      <Body>Start from what is at the end of the wire; Keyoff sizes the cable and the fuse at the battery and draws the circuit.</Body>
       <View style={[styles.columns, wide && styles.columnsWide]}>
         <Card style={wide ? styles.col : undefined}>
+          <ChoiceField control={form.control} name="end" label={L.end} options={[{ value: 'device', label: 'A device (its current)' }, { value: 'inverter', label: 'An inverter (its watts)' }]} />
+          {end === 'inverter' ? (
+            <NumberField control={form.control} name="inverterW" label="Inverter's rated output" unit="W" hint="Its feed is sized at full output near the 10.5 V cut-out, as a continuous load." />
+          ) : (
+            <NumberField control={form.control} name="currentA" label={L.current} unit="A" hint="The most it draws from the battery." />
+          )}
+          <ChoiceField control={form.control} name="route" label={L.route} options={Object.entries(CIRCUIT_ROUTES).map(([value, r]) => ({ value: value as CircuitInput['route'], label: r.label }))} hint={L.routeHint} />
+          <ChoiceField control={form.control} name="cableType" label={L.cableType} options={Object.entries(CABLE_TYPES).map(([value, c]) => ({ value: value as CircuitInput['cableType'], label: `${c.label}, ${c.insulationC} °C` }))} />
+          <NumberField control={form.control} name="lengthM" label={L.length} unit="m" hint={L.lengthHint} />
+          <ChoiceField control={form.control} name="returnPath" label={L.return} options={RETURN_OPTIONS} />
+          {end === 'inverter' ? null : (
+            <>
+              <SwitchField control={form.control} name="critical" label="Electronics or a feed: keep the drop within 3 % (else 10 %)" />
+              <SwitchField control={form.control} name="continuous" label={L.continuous} />
+            </>
+          )}
           <ChoiceField control={form.control} name="systemVoltage" label="System voltage" options={[{ value: 12, label: '12 V' }, { value: 24, label: '24 V' }]} />
-          <ChoiceField control={form.control} name="purpose" label="What it feeds" options={[{ value: 'general', label: 'A device' }, { value: 'inverter', label: 'An inverter' }]} />
-          <CurrentOrInverterFields control={form.control} setValue={form.setValue} />
-          <NumberField control={form.control} name="lengthM" label="Length, one way" unit="m" hint="From the battery to the device." />
-          <NumberField control={form.control} name="maxDropPercent" label="Allowed voltage drop" unit="%" hint="3 % for electronics and feeds, 10 % for non-critical loads (ABYC E-11)." />
-          <ChoiceField
-            control={form.control}
-            name="insulationC"
-            label="Insulation rating"
-            options={[60, 75, 90, 105, 125].map((t) => ({ value: t, label: `${t} °C` }))}
-          />
-          <ChoiceField control={form.control} name="returnPath" label="Return path" options={[{ value: 'cable', label: 'Negative cable' }, { value: 'chassis', label: 'Through the chassis' }]} />
-          <SwitchField control={form.control} name="engineSpace" label="Runs through the engine space" />
-          <SwitchField control={form.control} name="continuous" label="Continuous load (3 hours or more)" />
-          <Button testID="size-run" label="Size this run" onPress={onSubmit} busy={mutation.isPending} />
+          <Button testID="size-run" label="Wire it" onPress={onSubmit} busy={mutation.isPending} />
           {mutation.isError ? (
             <Text role="alert" style={styles.error}>
               {mutation.error.message}
@@ -58,28 +69,34 @@ export function CableRunCalculator() {
           ) : null}
         </Card>
         <View style={[styles.col, { gap: space.lg }]}>
-          {mutation.data ? <Result result={mutation.data} /> : <Card><Small>Enter the run and press “Size this run”.</Small></Card>}
+          {mutation.data && sized ? <Result result={mutation.data} circuit={sized} /> : <Card><Small>Describe the circuit and press “Wire it”.</Small></Card>}
         </View>
       </View>
     </View>
   );
 }
 
-function Result({ result }: { result: CableRunResult }) {
+function Result({ result, circuit }: { result: CableRunResult; circuit: CircuitInput }) {
+  const run = circuitToRun(circuit);
   return (
     <>
       <Card>
-        <Heading>Conductor</Heading>
+        <Heading>The circuit</Heading>
+        <CircuitDrawing
+          testID="circuit-drawing"
+          size={`${result.awg} AWG (${result.mm2} mm²)`}
+          lengthM={circuit.lengthM}
+          dropPercent={result.dropPercent}
+          allowedDropPercent={run.maxDropPercent}
+          fuseA={result.fuseA}
+          device={circuit.end === 'inverter' ? `${circuit.inverterW} W inverter` : `${run.currentA} A device`}
+          returnPath={circuit.returnPath}
+        />
         <View style={styles.figures}>
           <Figure label="AWG" value={result.awg} testID="result-awg" />
           <Figure label="mm²" value={String(result.mm2)} testID="result-mm2" />
           <Figure label="Fuse or breaker" value={`${result.fuseA} A`} testID="result-fuse" />
         </View>
-        {result.basis ? (
-          <Small testID="result-basis">
-            Sized for {result.currentA.toFixed(1)} A: the inverter&apos;s {result.basis.inverterW} W at its {result.basis.cutoutV} V cut-out and {result.basis.efficiencyPercent} %, a continuous load. The inverter maker&apos;s fuse instructions come first.
-          </Small>
-        ) : null}
         <Body>
           Drop {result.dropV.toFixed(2)} V ({result.dropPercent.toFixed(1)} %) over {result.conductorLengthM} m of conductor; the wire carries up to {Math.round(result.ampacityA)} A.
         </Body>

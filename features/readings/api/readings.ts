@@ -1,5 +1,6 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 
+import type { DropVerdict } from '@/shared/energy/drop-verdict';
 import { apiFetch } from '@/lib/api-client';
 import type { ColumnMapping, ReadingForm, VoltageDropForm } from '@/shared/schemas/reading';
 
@@ -32,7 +33,7 @@ export type Readings = {
 };
 export type LogPreview = { columns: string[]; sample: string[][]; rows: number; delimiter: string; decimalComma: boolean; mapping: Partial<ColumnMapping>; remembered: boolean };
 export type UploadResult = { upload: { id: string; fileName: string; rowCount: number; errorCount: number }; errors: { line: number; reason: string }[]; notes: string[] };
-export type DropResult = { dropV: number; dropPercent: number; resistanceOhm: number; expectedDropV: number | null; flagged: boolean; message: string; cableRun: string | null };
+export type DropResult = { dropV: number; dropPercent: number; resistanceOhm: number; expectedDropV: number | null; flagged: boolean; message: string; cableRun: string | null; verdict: DropVerdict | null };
 
 export const readingKeys = {
   all: ['readings'] as const,

@@ -6,7 +6,7 @@ import { z } from 'zod';
 import { ChoiceField, NumberField } from '@/components/form';
 import { Body, Button, Card, Heading, Small } from '@/components/ui';
 import { voltageDropSchema, type VoltageDropForm } from '@/shared/schemas/reading';
-import { colors } from '@/shared/theme';
+import { colors, type } from '@/shared/theme';
 import { useVoltageDropMutation } from '../api/readings';
 import { styles } from './styles';
 
@@ -28,6 +28,12 @@ export function DropTestCard({ rigId, cableRuns }: { rigId: string; cableRuns: {
       <Button label="Check the connection" onPress={submit} busy={test.isPending} testID="run-drop-test" />
       {test.data ? (
         <View role="status" style={{ gap: 2 }}>
+          {test.data.verdict ? (
+            <Text testID="drop-verdict" style={{ ...type.heading, color: test.data.verdict.within ? colors.comfortable : colors.short }}>
+              {test.data.verdict.within ? '✓ Within its limit. ' : '▲ Over its limit. '}
+              {test.data.verdict.message}
+            </Text>
+          ) : null}
           <Body style={test.data.flagged ? { color: colors.short } : undefined}>{test.data.message}</Body>
           <Small>
             {test.data.dropV} V · {test.data.dropPercent} % · {test.data.resistanceOhm} Ω

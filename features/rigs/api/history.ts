@@ -11,6 +11,8 @@ export type HistoryEntry = {
   summary: string;
   daysParkedBefore: number | null;
   daysParkedAfter: number | null;
+  /** An applied Fix the owner can still undo. */
+  undoable: boolean;
 };
 
 export const useHistoryQuery = (rigId: string) =>

@@ -29,6 +29,7 @@ function useRigMutation<V, R>(rigId: string, fn: (v: V) => Promise<R>) {
         client.invalidateQueries({ queryKey: rigKeys.detail(rigId) }),
         client.invalidateQueries({ queryKey: rigKeys.outlook(rigId) }),
         client.invalidateQueries({ queryKey: rigKeys.history(rigId) }),
+        client.invalidateQueries({ queryKey: rigKeys.hookups(rigId) }),
         client.invalidateQueries({ queryKey: rigKeys.list() }),
       ]),
   });

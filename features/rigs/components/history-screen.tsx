@@ -1,21 +1,25 @@
 import { ActivityIndicator, StyleSheet, Text, View } from 'react-native';
 
 import { formatDays, formatWhen } from '@/components/format';
-import { Body, Card, Heading, Small } from '@/components/ui';
+import { Body, Button, Card, Heading, Small } from '@/components/ui';
 import { colors, space, type } from '@/shared/theme';
 import { useHistoryQuery } from '../api/history';
-import { useOutlookQuery } from '../api/rig';
+import { useFixUndoMutation } from '../api/fixes';
+import { useOutlookQuery, useRigQuery } from '../api/rig';
 
 /** History: who changed what on the rig and when, with the Days parked before and after each change. */
 export function HistoryScreen({ rigId }: { rigId: string }) {
   const history = useHistoryQuery(rigId);
   const outlook = useOutlookQuery(rigId);
+  const rig = useRigQuery(rigId);
+  const undo = useFixUndoMutation(rigId);
   const horizon = outlook.data?.horizonDays ?? 14;
   if (history.isPending) return <ActivityIndicator color={colors.night} />;
   if (history.isError) return <Body style={{ color: colors.short }}>{history.error.message}</Body>;
   return (
     <Card testID="history">
       <Heading>History</Heading>
+      {undo.isError ? <Text role="alert" style={{ ...type.body, color: colors.short }}>{undo.error.message}</Text> : null}
       {history.data.length ? null : <Small>No changes yet. The rig&apos;s creation, edits to loads, cable runs, the battery, the inverter, charging and the routine, and people joining or leaving, show here.</Small>}
       {history.data.map((h) => {
         const created = h.kind === 'rig-created';
@@ -27,6 +31,9 @@ export function HistoryScreen({ rigId }: { rigId: string }) {
                 {h.actor.name} {h.summary}
               </Text>
               <Small>{formatWhen(h.at)}</Small>
+              {h.undoable && rig.data?.permissions.edit ? (
+                <Button testID="history-undo" label="Undo this Fix" busy={undo.isPending && undo.variables === h.id} onPress={() => undo.mutate(h.id)} />
+              ) : null}
             </View>
             <View style={styles.days}>
               <Small>Days parked</Small>

@@ -13,9 +13,10 @@ import { type RigSetupForm, type RigSetupInput, rigSetupSchema } from '@/shared/
 import { colors, space, type } from '@/shared/theme';
 import { useRigCreateMutation } from '../api/create-rig';
 import { DevicePicker, deviceSummary } from './device-picker';
+import { InverterConnectionFields } from './inverter-connection-fields';
 import { DrivingFields, SHORE, ShoreFields } from './power-fields';
 
-const INVERTER = { ratedW: 300, idleA: 0.5, efficiencyPercent: 90, control: 'always-on', connection: 'battery' } as const;
+const INVERTER = { ratedW: 300, idleA: 0.5, efficiencyPercent: 90, control: 'always-on', connection: 'direct', socketFuseA: 15, socketSwitched: false } as const;
 
 // Every figure here is on the page for the user to see and change; the routine has no default at all.
 const defaults: RigSetupForm = {
@@ -89,7 +90,7 @@ export function NewRigScreen({ onCreated }: { onCreated: (rigId: string) => void
             <>
               <NumberField control={form.control} name="power.inverter.ratedW" label="Rating" unit="W" />
               <NumberField control={form.control} name="power.inverter.idleA" label="Idle draw" unit="A" hint="With nothing plugged in; small inverters draw 0.2 to 0.8 A (common practice)." />
-              <ChoiceField control={form.control} name="power.inverter.connection" label="Connected" options={[{ value: 'battery', label: 'Wired to the battery' }, { value: 'socket-ignition', label: 'Socket live with the ignition' }, { value: 'socket-always', label: 'Socket always live' }]} />
+              <InverterConnectionFields control={form.control} prefix="power." />
               <ChoiceField control={form.control} name="power.inverter.control" label="Switched" options={[{ value: 'always-on', label: 'Left on' }, { value: 'manual-switch', label: 'By hand when needed' }, { value: 'ignition-relay', label: 'Ignition relay' }, { value: 'low-voltage-disconnect', label: 'Low-voltage disconnect' }]} />
             </>
           ) : (

@@ -1,3 +1,4 @@
+import { Link } from 'expo-router';
 import { ActivityIndicator, StyleSheet, Text, View } from 'react-native';
 
 import { formatDays } from '@/components/format';
@@ -140,6 +141,8 @@ function Drains({ outlook }: { outlook: Outlook }) {
   );
 }
 
+const INVERTER_FIXES = new Set(['cutoff-switch', 'ignition-relay', 'low-voltage-disconnect']);
+
 function Fixes({ outlook }: { outlook: Outlook }) {
   const { units } = useUnits();
   const V = outlook.assumptions.systemVoltage as number | undefined;
@@ -161,6 +164,13 @@ function Fixes({ outlook }: { outlook: Outlook }) {
             </Small>
           ) : null}
           <Small>Cost in convenience: {f.convenience}</Small>
+          <Link
+            href={{ pathname: '/rigs/[rigId]/hookup', params: { rigId: outlook.rigId, fix: f.kind } }}
+            style={styles.fixLink}
+            testID={`fix-hookup-${f.kind}`}
+          >
+            {INVERTER_FIXES.has(f.kind) ? 'See its hook-up, preview or apply it' : 'Preview or apply it'}
+          </Link>
         </View>
       ))}
       {needsWiringCaution(outlook.fixes) ? (
@@ -183,6 +193,7 @@ const styles = StyleSheet.create({
   barTrack: { height: 8, backgroundColor: colors.paper, borderRadius: 4 },
   bar: { height: 8, borderRadius: 4 },
   fix: { gap: 2, paddingVertical: space.sm, borderBottomWidth: 1, borderBottomColor: colors.line },
+  fixLink: { ...type.body, fontFamily: 'Nunito_700Bold', color: colors.focus, textDecorationLine: 'underline', paddingVertical: space.sm },
   fixTitle: { ...type.heading, fontSize: 15, color: colors.ink },
   caution: { backgroundColor: '#FFF4DC', borderColor: colors.lampDeep, borderWidth: 1, borderRadius: radius.md, padding: space.md },
 });

@@ -14,6 +14,7 @@ import { useRouter } from 'expo-router';
 
 import { type Rig, useRigDeleteMutation, useRigQuery, useRigUpdateMutation } from '../api/rig';
 import { SelfHeatingFields } from './self-heating-fields';
+import { InverterConnectionFields } from './inverter-connection-fields';
 import { DrivingFields, SHORE, ShoreFields } from './power-fields';
 const INVERTER = { ratedW: 300, efficiencyPercent: 90, idleA: 0.5, control: 'always-on' } as const;
 
@@ -79,7 +80,7 @@ function PowerForm({ rig }: { rig: Rig }) {
               <NumberField control={form.control} name="inverter.ratedW" label="Rating" unit="W" />
               <NumberField control={form.control} name="inverter.idleA" label="Idle draw" unit="A" />
               <NumberField control={form.control} name="inverter.efficiencyPercent" label="Efficiency" unit="%" />
-              <ChoiceField control={form.control} name="inverter.connection" label="Connected" options={[{ value: 'battery', label: 'Wired to the battery' }, { value: 'socket-ignition', label: 'Socket live with the ignition' }, { value: 'socket-always', label: 'Socket always live' }]} />
+              <InverterConnectionFields control={form.control} prefix="" />
               <ChoiceField
                 control={form.control}
                 name="inverter.control"

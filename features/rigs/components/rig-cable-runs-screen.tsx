@@ -8,7 +8,9 @@ import { TextField } from '@/components/text-field';
 import { Body, Button, Card, Heading, Small } from '@/components/ui';
 import { useUnits } from '@/components/units';
 import { useIsWide } from '@/components/use-layout';
+import { CircuitDrawing } from '@/components/wiring/circuit-drawing';
 import { type CableRunForm, type CableRunInput, cableRunSchema } from '@/shared/schemas/cable-run';
+import { CIRCUIT_LABELS as L, INSULATION_OPTIONS, RETURN_OPTIONS } from '@/shared/schemas/circuit';
 import { colors, radius, space, type } from '@/shared/theme';
 import { type SavedCableRun, useCableRunCreateMutation, useCableRunDeleteMutation, useCableRunsQuery, useCableRunUpdateMutation } from '../api/cable-runs';
 import { useRigQuery } from '../api/rig';
@@ -57,6 +59,18 @@ export function RigCableRunsScreen({ rigId }: { rigId: string }) {
                 <Text style={styles.figures} testID={`run-size-${r.label}`}>
                   {size(r)} · drop {drop(r)} · {r.sizing ? `${r.sizing.fuseA} A fuse or breaker` : 'no size'}
                 </Text>
+                {r.sizing ? (
+                  <CircuitDrawing
+                    testID={`run-drawing-${r.label}`}
+                    size={size(r)}
+                    lengthM={r.lengthM}
+                    dropPercent={units.wire === 'mm2' ? r.sizing.metric.dropPercent : r.sizing.dropPercent}
+                    allowedDropPercent={r.maxDropPercent}
+                    fuseA={r.sizing.fuseA}
+                    device={r.loadName ?? (r.to || 'Device')}
+                    returnPath={r.returnPath}
+                  />
+                ) : null}
                 {r.warnings.map((w) => (
                   <Text key={w} role="alert" style={styles.warning}>
                     ▲ {w}
@@ -138,17 +152,16 @@ function RunForm(props: {
       <Heading>{props.initial.label ? `Edit ${props.initial.label}` : 'Add a cable run'}</Heading>
       <TextField control={form.control} name="label" label="Name" placeholder="Inverter feed" />
       <TextField control={form.control} name="to" label="To" placeholder="Inverter" />
-      <NumberField control={form.control} name="lengthM" label="Length, one way" unit="m" />
       <RunSourceChips value={source} onChange={chooseSource} hasLoads={props.loads.length > 0} hasInverter={props.hasInverter} />
       {source === 'load' ? <ChoiceField control={form.control} name="loadId" label="Load" options={props.loads} hint="DC loads only: an AC load's own circuit is mains wiring, outside these tables." /> : null}
-      {source === 'current' ? <NumberField control={form.control} name="currentA" label="Current" unit="A" /> : null}
+      {source === 'current' ? <NumberField control={form.control} name="currentA" label={L.current} unit="A" /> : null}
       {source === 'inverter' ? <Small>Sized from the inverter&apos;s rating at its 10.5 V cut-out and its efficiency, as a continuous load.</Small> : null}
+      <NumberField control={form.control} name="lengthM" label={L.length} unit="m" hint={L.lengthHint} />
+      <SwitchField control={form.control} name="engineSpace" label={L.engineBay} hint={L.routeHint} />
+      <ChoiceField control={form.control} name="insulationC" label={L.cableType} options={INSULATION_OPTIONS as { value: 105; label: string }[]} />
+      <ChoiceField control={form.control} name="returnPath" label={L.return} options={RETURN_OPTIONS} />
       <NumberField control={form.control} name="maxDropPercent" label="Allowed drop" unit="%" hint="3 % for electronics and feeds, 10 % for other loads (ABYC E-11)." />
-      <ChoiceField control={form.control} name="insulationC" label="Insulation rating" options={[60, 75, 90, 105, 125].map((t) => ({ value: t, label: `${t} °C` }))} />
-      <ChoiceField control={form.control} name="returnPath" label="Return" options={[{ value: 'cable', label: 'Negative cable' }, { value: 'chassis', label: 'Chassis' }]} />
-      <ChoiceField control={form.control} name="purpose" label="Feeds" options={[{ value: 'general', label: 'A device' }, { value: 'inverter', label: 'An inverter' }]} />
-      <SwitchField control={form.control} name="engineSpace" label="Through the engine space" />
-      <SwitchField control={form.control} name="continuous" label="Continuous (3 hours or more)" />
+      <SwitchField control={form.control} name="continuous" label={L.continuous} />
       <ChoiceField
         control={form.control}
         name="existingAwg"

@@ -13,6 +13,7 @@ export function RigTabs({ rigId, unreadNotes = 0 }: { rigId: string; unreadNotes
     { href: { pathname: '/rigs/[rigId]', params: { rigId } }, label: 'Outlook', path: `/rigs/${rigId}` },
     { href: { pathname: '/rigs/[rigId]/loads', params: { rigId } }, label: 'Loads', path: `/rigs/${rigId}/loads` },
     { href: { pathname: '/rigs/[rigId]/power', params: { rigId } }, label: 'Power', path: `/rigs/${rigId}/power` },
+    { href: { pathname: '/rigs/[rigId]/hookup', params: { rigId } }, label: 'Hook-up', path: `/rigs/${rigId}/hookup` },
     { href: { pathname: '/rigs/[rigId]/try', params: { rigId } }, label: 'Try a load', path: `/rigs/${rigId}/try` },
     { href: { pathname: '/rigs/[rigId]/cable-runs', params: { rigId } }, label: 'Cable runs', path: `/rigs/${rigId}/cable-runs` },
     { href: { pathname: '/rigs/[rigId]/readings', params: { rigId } }, label: 'Readings', path: `/rigs/${rigId}/readings` },

@@ -11,7 +11,7 @@ const mark = require('@/assets/images/mark.png');
 const destinations: { href: Href; label: string; advisorOnly?: boolean }[] = [
   { href: '/', label: 'Rigs' },
   { href: '/clients', label: 'Clients', advisorOnly: true },
-  { href: '/cable-runs', label: 'Cable runs' },
+  { href: '/cable-runs', label: 'Wire a circuit' },
   { href: '/settings', label: 'Settings' },
 ];
 

@@ -1,0 +1,64 @@
+import path from 'node:path';
+import type { Browser } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+
+import { launchChromium, PHONE, SHOTS, signInAs, WIDE } from './browser';
+
+let browser: Browser;
+beforeAll(async () => {
+  browser = await launchChromium();
+});
+afterAll(async () => {
+  await browser?.close();
+});
+
+describe('the Hook-up tab', () => {
+  it('draws Wren\'s inverter circuit with every part rated, readable on a phone', async () => {
+    const page = await browser.newPage({ viewport: PHONE });
+    await signInAs(page, 'tobi@example.org');
+    await page.getByTestId('open-Wren').click();
+    await page.getByTestId('tab-Hook-up').click();
+    await page.getByTestId('hookup-now-drawing').waitFor();
+    // 300 W / (10.5 V × 0.9) = 31.75 A; × 1.25 = 39.7 A (NEC 210.20(A)): a 40 A fuse (NEC 240.6(A)).
+    expect(await page.getByTestId('hookup-part-protection').textContent()).toMatch(/^40 A fuse/);
+    // 1.5 m one way: 8 AWG drops 31.75 × 0.778 × 3 / 304.8 = 0.243 V, 2.03 % (NEC Chapter 9 Table 8).
+    expect(await page.getByTestId('hookup-part-conductor').textContent()).toMatch(/8 AWG.*drop 2\.03 %/);
+    expect(await page.getByTestId('hookup-cautions').textContent()).toMatch(/qualified auto electrician/);
+    // The drawing itself is drawn: an SVG per part, inside the phone's width.
+    const box = await page.getByTestId('hookup-now-drawing').boundingBox();
+    expect(box!.width).toBeLessThanOrEqual(390);
+    expect(await page.locator('[data-testid="hookup-now-drawing"] svg').count()).toBeGreaterThanOrEqual(5);
+    await page.getByTestId('hookup-fix-ignition-relay').click();
+    await page.getByTestId('hookup-fix-drawing').waitFor();
+    expect(await page.locator('[data-testid="hookup-fix-drawing"] [data-testid="hookup-part-relay"]').textContent()).toMatch(/40 A contacts/);
+    await page.screenshot({ path: path.join(SHOTS, 'hookup-phone.png'), fullPage: true });
+    // The screen scrolls inside the app's frame: each drawing is also taken whole.
+    await page.getByTestId('hookup-now').screenshot({ path: path.join(SHOTS, 'hookup-phone-now.png') });
+    await page.getByTestId('hookup-fix-drawing').screenshot({ path: path.join(SHOTS, 'hookup-phone-fix-drawing.png') });
+    await page.close();
+  });
+
+  it('puts now and the Fix side by side, previews it, applies it and undoes it from History (owner, wide)', async () => {
+    const page = await browser.newPage({ viewport: WIDE });
+    await signInAs(page, 'ines@example.org');
+    await page.getByTestId('open-Wren').click();
+    await page.getByTestId('fix-hookup-ignition-relay').click();
+    await page.getByTestId('hookup-fix-drawing').waitFor();
+    const now = await page.getByTestId('hookup-now').boundingBox();
+    const fix = await page.getByTestId('hookup-fix').boundingBox();
+    expect(fix!.x).toBeGreaterThan(now!.x + now!.width - 1);
+    await page.getByTestId('fix-preview').click();
+    await page.getByTestId('fix-preview-result').waitFor();
+    await page.screenshot({ path: path.join(SHOTS, 'hookup-wide.png'), fullPage: true });
+    await page.getByTestId('hookup-fix').screenshot({ path: path.join(SHOTS, 'hookup-wide-fix.png') });
+    await page.getByTestId('fix-apply').click();
+    await page.getByTestId('fix-applied').waitFor();
+    await expect.poll(() => page.getByTestId('hookup-now').locator('[role="heading"]').first().textContent()).toMatch(/ignition-keyed relay/);
+    await page.getByTestId('tab-History').click();
+    await page.getByTestId('history-undo').click();
+    await expect.poll(() => page.getByTestId('history-undo').count()).toBe(0);
+    await page.getByTestId('tab-Hook-up').click();
+    await expect.poll(() => page.getByTestId('hookup-now').locator('[role="heading"]').first().textContent()).toMatch(/always on/);
+    await page.close();
+  });
+});
