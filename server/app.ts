@@ -20,6 +20,7 @@ import { meRouter } from './routes/me';
 import { projectionsRouter } from './routes/projections';
 import { readingsAnalyzeRouter, rigReadingsRouter } from './routes/readings';
 import { rigsRouter } from './routes/rigs';
+import { solarRouter } from './routes/solar';
 import { serveWeb } from './web';
 
 export const APP_VERSION = '0.1.0';
@@ -60,6 +61,7 @@ export function createApp(ctx: AppContext): Express {
   app.use('/api', express.json({ limit: '1mb' }));
   app.use('/api/health', healthRouter(db, APP_VERSION));
   app.use('/api/projections', rateLimitedOpen(config.RATE_LIMIT_PER_MINUTE), projectionsRouter());
+  app.use('/api/solar', rateLimitedOpen(config.RATE_LIMIT_PER_MINUTE), solarRouter());
   app.use('/api/cable-runs', rateLimitedOpen(config.RATE_LIMIT_PER_MINUTE), cableRunsRouter());
   app.use('/api/email', rateLimitedOpen(config.RATE_LIMIT_PER_MINUTE), express.urlencoded({ extended: false, limit: '10kb' }), emailRouter(ctx));
   app.use('/api/me', requireSession(auth), meRouter(ctx));
