@@ -125,6 +125,7 @@ const MATRIX: Record<string, Entry> = {
     send: (a) => a.post('/api/projections/compare').send({ rig: { battery: { chemistry: 'agm', capacityAh: 100 } }, candidates: [{ name: 'Fan', supply: 'dc', watts: 20, hoursPerDay: 4 }] }),
     expect: all(200),
   },
+  'POST /api/solar/daily': { send: (a) => a.post('/api/solar/daily').send({ latitudeDeg: -20, date: '2026-09-03' }), expect: all(200) },
   'POST /api/cable-runs/size': { send: (a) => a.post('/api/cable-runs/size').send({ currentA: 10, lengthM: 2 }), expect: all(200) },
   'GET /api/me/': { send: (a) => a.get('/api/me'), expect: { ...all(200), anonymous: 401 } },
   'GET /api/rigs/': { send: (a) => a.get('/api/rigs'), expect: { ...all(200), anonymous: 401 } },

@@ -44,6 +44,7 @@ const routes = (): [string, Sender][] => {
   return [
     ['POST /api/projections', (b) => o.post('/api/projections').type('json').send(JSON.stringify(b))],
     ['POST /api/projections/compare', (b) => o.post('/api/projections/compare').type('json').send(JSON.stringify(b))],
+    ['POST /api/solar/daily', (b) => o.post('/api/solar/daily').type('json').send(JSON.stringify(b))],
     ['POST /api/cable-runs/size', (b) => o.post('/api/cable-runs/size').type('json').send(JSON.stringify(b))],
     ['POST /api/readings/analyze', (b) => o.post('/api/readings/analyze').type('json').send(JSON.stringify(b))],
     ['POST /api/rigs', (b) => o.post('/api/rigs').set('Origin', TEST_ORIGIN).type('json').send(JSON.stringify(b))],
