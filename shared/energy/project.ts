@@ -1,5 +1,6 @@
 import type { CompareInput, Load, ProjectionInput } from '../schemas/projection';
 import { MODEL_DEFAULTS } from './defaults';
+import { solarReport } from './calendar';
 import { buildDemandProfile, type DemandProfile, HOURS_PER_WEEK as WEEK } from './profile';
 import { resolve, type Resolved, round as roundTo, run, type RunTotals, type Trace } from './simulate';
 
@@ -46,6 +47,8 @@ export type Projection = {
   }[];
   warnings: Warning[];
   fixes: Fix[];
+  /** The solar amp-hours of each day of the horizon, and whether they come from the place and date. */
+  solar: ReturnType<typeof solarReport>;
   assumptions: Record<string, number | string | null>;
   horizonDays: number;
   cutoffSocPercent: number;
@@ -126,6 +129,7 @@ export function project(input: ProjectionInput, options: { fixes?: boolean } = {
     series,
     warnings,
     fixes,
+    solar: solarReport(r),
     horizonDays: input.horizonDays,
     cutoffSocPercent: r.cutoffSoc,
     assumptions: {
@@ -197,7 +201,7 @@ function seriesOf(r: Resolved, trace: Trace, parkedAh: number[]): Projection['se
       parkedSocPercent: Math.round(((parkedAh[i] / full) * 100) * 100) / 100,
       ah: Math.round(now * 100) / 100,
       netA: Math.round((now - before) * 1000) / 1000,
-      drivingMinutes: Math.round(r.driving[(r.startHourOfWeek + i) % HOURS_PER_WEEK] * 60),
+      drivingMinutes: Math.round((r.drivingByHour !== null ? r.drivingByHour[i] : r.driving[(r.startHourOfWeek + i) % HOURS_PER_WEEK]) * 60),
       inverterOn: inverterOn[i] === 1,
     };
     before = now;
@@ -385,7 +389,9 @@ function findFixes(
   }
 
   if (routineFalls) {
-    const psh = input.charging.peakSunHours > 0 ? input.charging.peakSunHours : MODEL_DEFAULTS.fixPeakSunHours;
+    // With a place and dates, the panels get that place's sun (peak sun hours left at 0), not a fixed figure.
+    const bySun = r.solarByHour !== null;
+    const psh = bySun ? 0 : input.charging.peakSunHours > 0 ? input.charging.peakSunHours : MODEL_DEFAULTS.fixPeakSunHours;
     const withSolar = (w: number): ProjectionInput => ({ ...input, charging: { ...input.charging, solarW: w, peakSunHours: psh } });
     const watts = searchMin(input.charging.solarW, 3000, 10, (w) => routineDays(resolve(withSolar(w)), demand) === null);
     if (watts !== null && watts > input.charging.solarW) {
@@ -393,7 +399,7 @@ function findFixes(
       push(
         {
           kind: 'solar',
-          summary: `About ${watts} W of solar${input.charging.solarW ? ` (${watts - input.charging.solarW} W more)` : ''} at ${psh} peak sun hours balances the week.`,
+          summary: `About ${watts} W of solar${input.charging.solarW ? ` (${watts - input.charging.solarW} W more)` : ''} ${bySun ? 'in the sun of this place and season' : `at ${psh} peak sun hours`} balances the week.`,
           convenience: 'Roof space and a charge controller; less in cloud and in winter.',
           change: { charging: { solarW: watts, peakSunHours: psh } },
         },

@@ -1,7 +1,9 @@
 import type { InverterControl, ProjectionInput } from '../schemas/projection';
 import { CHEMISTRY_DEFAULTS, MODEL_DEFAULTS, peukertEffectiveCurrent, temperatureFactor } from './defaults';
+import { type CalendarInputs, calendarOf } from './calendar';
 import * as layout from './profile';
 import { type DemandProfile, drivingFractions, solarCurrents, zeros } from './profile';
+import { weekdayOf } from './solar';
 
 // Module-level copies: imported bindings are getters once compiled, too slow for the hot loop.
 const { HOURS_PER_WEEK, HOUR_STRIDE, PARKED, DRIVING, DC_A, AC_A, AC_ACTIVE, AC_FLOOR_A, AC_WATTS } = layout;
@@ -47,7 +49,7 @@ export type Resolved = {
   shoreByHourOfWeek: number[];
   horizonHours: number;
   startHourOfWeek: number;
-};
+} & CalendarInputs;
 
 export function resolve(input: ProjectionInput): Resolved {
   const b = input.battery;
@@ -122,7 +124,8 @@ export function resolve(input: ProjectionInput): Resolved {
     ),
     shoreByHourOfWeek: shore,
     horizonHours: input.horizonDays * 24,
-    startHourOfWeek: input.start.weekday * 24 + input.start.hour,
+    startHourOfWeek: (input.start.date ? weekdayOf(input.start.date) : input.start.weekday) * 24 + input.start.hour,
+    ...calendarOf(input, derate),
   };
 }
 
@@ -230,6 +233,10 @@ export function run(r: Resolved, demand: DemandProfile, opts: RunOptions): RunRe
   const taperSlope = Math.max(0, bulkA - floorA) / Math.max(1e-9, full - taperStartAh);
   const taperStiffness = (efficiency * taperSlope) / 0.5;
   const startHow = r.startHourOfWeek;
+  // Calendar inputs (calendar.ts), per hour of the run, where the input follows dates instead of the week.
+  const solarAt = r.solarByHour;
+  const shoreAt = r.shoreByHour;
+  const drivingAt = r.drivingByHour;
 
   let minAh = Infinity;
   for (let t = 0, how = startHow % HOURS_PER_WEEK, hod = how % 24; t < hours; t++) {
@@ -237,10 +244,10 @@ export function run(r: Resolved, demand: DemandProfile, opts: RunOptions): RunRe
       how = how === HOURS_PER_WEEK - 1 ? 0 : how + 1;
       hod = hod === 23 ? 0 : hod + 1;
     }
-    const f = withDriving ? drivingByHour[how] : 0;
+    const f = withDriving ? (drivingAt !== null ? drivingAt[t] : drivingByHour[how]) : 0;
     const inWeek = trackWeek && t < HOURS_PER_WEEK;
     let inverterOnAny = false;
-    const sources = solar[hod] + shore[how];
+    const sources = (solarAt !== null ? solarAt[t] : solar[hod]) + (shoreAt !== null ? shoreAt[t] : shore[how]);
 
     // Driving part first, then parked.
     for (let part = 0; part < 2; part++) {
