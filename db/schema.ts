@@ -207,6 +207,20 @@ export interface ReadingTable {
   created_at: Timestamp;
 }
 
+export interface TripTable {
+  id: Generated<string>;
+  rig_id: string;
+  created_by: string | null;
+  name: string;
+  /** ISO date (YYYY-MM-DD), kept as text so no time zone moves it. */
+  start_date: string;
+  active: Generated<boolean>;
+  /** arrivalHour, batteryInCabin and legs (shared/schemas/trip.ts). */
+  plan: ColumnType<unknown, string, string>;
+  created_at: Generated<Date>;
+  updated_at: Generated<Date>;
+}
+
 export interface Database {
   user: UserTable;
   organization: OrganizationTable;
@@ -223,6 +237,7 @@ export interface Database {
   email_log: EmailLogTable;
   uploads: UploadTable;
   readings: ReadingTable;
+  trips: TripTable;
 }
 
 export type RigRow = Selectable<RigTable>;

@@ -21,6 +21,7 @@ import { projectionsRouter } from './routes/projections';
 import { readingsAnalyzeRouter, rigReadingsRouter } from './routes/readings';
 import { rigsRouter } from './routes/rigs';
 import { solarRouter } from './routes/solar';
+import { rigTripsRouter } from './routes/trips';
 import { serveWeb } from './web';
 
 export const APP_VERSION = '0.1.0';
@@ -66,7 +67,7 @@ export function createApp(ctx: AppContext): Express {
   app.use('/api/email', rateLimitedOpen(config.RATE_LIMIT_PER_MINUTE), express.urlencoded({ extended: false, limit: '10kb' }), emailRouter(ctx));
   app.use('/api/me', requireSession(auth), meRouter(ctx));
   app.use('/api/readings', rateLimitedOpen(config.RATE_LIMIT_PER_MINUTE), readingsAnalyzeRouter());
-  app.use('/api/rigs', requireSession(auth), rigsRouter(ctx), rigReadingsRouter(ctx));
+  app.use('/api/rigs', requireSession(auth), rigsRouter(ctx), rigReadingsRouter(ctx), rigTripsRouter(ctx));
   app.use('/api/invitations', requireSession(auth), invitationsRouter(ctx));
   app.use('/api/clients', requireSession(auth), clientsRouter(ctx));
   app.use('/api/admin', requireSession(auth), adminRouter(ctx));

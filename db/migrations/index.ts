@@ -5,6 +5,7 @@ import * as m002 from './2026-12-01-002-cable-runs';
 import * as m003 from './2026-12-01-003-notes';
 import * as m004 from './2026-12-01-004-history-mail';
 import * as m005 from './2026-12-01-005-readings';
+import * as m006 from './2026-12-02-001-trips';
 
 // A static provider: file discovery fails under vitest, an explicit list works everywhere.
 export const migrations: Record<string, Migration> = {
@@ -13,4 +14,5 @@ export const migrations: Record<string, Migration> = {
   '2026-12-01-003-notes': m003,
   '2026-12-01-004-history-mail': m004,
   '2026-12-01-005-readings': m005,
+  '2026-12-02-001-trips': m006,
 };

@@ -5,7 +5,7 @@ import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 
 import { unsubscribeToken } from '@/server/emails/unsubscribe';
-import { householdFixture, uniqueEmail, WREN_POWER } from './helpers';
+import { householdFixture, TRIP_PLAN, uniqueEmail, WREN_POWER } from './helpers';
 import { makeTestApp, TEST_ORIGIN } from './test-app';
 
 type Role = 'anonymous' | 'outsider' | 'advisor' | 'member' | 'owner' | 'admin';
@@ -72,6 +72,10 @@ async function throwawayRun() {
   const res = await fx.agents.owner.post(`/api/rigs/${fx.rigId}/cable-runs`).set('Origin', TEST_ORIGIN).send(RUN);
   return res.body.id as string;
 }
+async function throwawayTrip() {
+  const res = await fx.agents.owner.post(`/api/rigs/${fx.rigId}/trips`).set('Origin', TEST_ORIGIN).send({ ...TRIP_PLAN, active: false });
+  return res.body.id as string;
+}
 const RUN = { label: 'Fridge feed', to: 'Fridge', lengthM: 3, currentA: 5, maxDropPercent: 3, insulationC: 105 };
 async function throwawayNote(agent: ReturnType<typeof request.agent> | ReturnType<typeof request>, own: boolean) {
   const household = [fx.agents.owner, fx.agents.member, fx.agents.advisor] as unknown[];
@@ -135,6 +139,14 @@ const MATRIX: Record<string, Entry> = {
   },
   'GET /api/rigs/:rigId': { send: (a, c) => a.get(`/api/rigs/${c.rigId}`), expect: readRig },
   'GET /api/rigs/:rigId/cable-runs': { send: (a, c) => a.get(`/api/rigs/${c.rigId}/cable-runs`), expect: readRig },
+  'GET /api/rigs/:rigId/trips': { send: (a, c) => a.get(`/api/rigs/${c.rigId}/trips`), expect: readRig },
+  'POST /api/rigs/:rigId/trips': { send: (a, c) => a.post(`/api/rigs/${c.rigId}/trips`).set('Origin', TEST_ORIGIN).send({ ...TRIP_PLAN, active: false }), expect: editRole(201) },
+  'GET /api/rigs/:rigId/trips/:tripId/outlook': { send: async (a, c) => a.get(`/api/rigs/${c.rigId}/trips/${await throwawayTrip()}/outlook`), expect: readRig },
+  'PUT /api/rigs/:rigId/trips/:tripId': {
+    send: async (a, c) => a.put(`/api/rigs/${c.rigId}/trips/${await throwawayTrip()}`).set('Origin', TEST_ORIGIN).send({ ...TRIP_PLAN, active: false, name: 'Renamed' }),
+    expect: editRole(200),
+  },
+  'DELETE /api/rigs/:rigId/trips/:tripId': { send: async (a, c) => a.delete(`/api/rigs/${c.rigId}/trips/${await throwawayTrip()}`).set('Origin', TEST_ORIGIN), expect: editRole(204) },
   'POST /api/rigs/:rigId/cable-runs': { send: (a, c) => a.post(`/api/rigs/${c.rigId}/cable-runs`).set('Origin', TEST_ORIGIN).send(RUN), expect: editRole(201) },
   'PATCH /api/rigs/:rigId/cable-runs/:runId': {
     send: async (a, c) => a.patch(`/api/rigs/${c.rigId}/cable-runs/${await throwawayRun()}`).set('Origin', TEST_ORIGIN).send({ ...RUN, lengthM: 4 }),

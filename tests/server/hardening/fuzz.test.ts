@@ -54,6 +54,8 @@ const routes = (): [string, Sender][] => {
     ['POST /api/rigs/:rigId/loads', (b) => o.post(`${r}/loads`).set('Origin', TEST_ORIGIN).type('json').send(JSON.stringify(b))],
     ['PATCH /api/rigs/:rigId/loads/:loadId', (b, s) => o.patch(`${r}/loads/${id(s)}`).set('Origin', TEST_ORIGIN).type('json').send(JSON.stringify(b))],
     ['POST /api/rigs/:rigId/cable-runs', (b) => o.post(`${r}/cable-runs`).set('Origin', TEST_ORIGIN).type('json').send(JSON.stringify(b))],
+    ['POST /api/rigs/:rigId/trips', (b) => o.post(`${r}/trips`).set('Origin', TEST_ORIGIN).type('json').send(JSON.stringify(b))],
+    ['PUT /api/rigs/:rigId/trips/:tripId', (b, s) => o.put(`${r}/trips/${id(s)}`).set('Origin', TEST_ORIGIN).type('json').send(JSON.stringify(b))],
     ['POST /api/rigs/:rigId/notes', (b) => o.post(`${r}/notes`).set('Origin', TEST_ORIGIN).type('json').send(JSON.stringify(b))],
     ['PATCH /api/rigs/:rigId/notes/:noteId', (b, s) => o.patch(`${r}/notes/${id(s)}`).set('Origin', TEST_ORIGIN).type('json').send(JSON.stringify(b))],
     ['POST /api/rigs/:rigId/readings', (b) => o.post(`${r}/readings`).set('Origin', TEST_ORIGIN).type('json').send(JSON.stringify(b))],
