@@ -33,6 +33,8 @@ export type StayOutlook = {
   daysToCutoff: number | null;
   marginDays: number | null;
   marginState: MarginState;
+  /** Arrived at or below the cut-off (an earlier leg ran it down): Tight if the stay lifts it back, else Short. */
+  arrivesBelowCutoff: boolean;
 };
 
 export type TripOutlook = {
@@ -159,6 +161,7 @@ export function projectTrip(input: ProjectionInput, trip: Trip, options: { fixes
     for (const w of p.warnings) if (w.code !== 'stay-beyond-horizon') warnings.set(w.code, w);
     let sunAh = 0;
     for (const x of p.solar.dailyAh.slice(0, leg.nights)) sunAh += x;
+    const below = arrival <= r.cutoffSoc + 1e-9;
     const stay: StayOutlook = {
       leg: seg.leg,
       name: leg.name,
@@ -172,9 +175,10 @@ export function projectTrip(input: ProjectionInput, trip: Trip, options: { fixes
       socOnArrivalPercent: round(arrival, 1),
       socOnLeavingPercent: round(soc, 1),
       lowestSocPercent: round(lowest, 1),
-      daysToCutoff: p.routine.daysToCutoff,
-      marginDays: p.margin.days,
-      marginState: p.margin.state,
+      daysToCutoff: below ? 0 : p.routine.daysToCutoff,
+      marginDays: below ? null : p.margin.days,
+      marginState: below ? (soc > r.cutoffSoc ? 'tight' : 'short') : p.margin.state,
+      arrivesBelowCutoff: below,
     };
     stays.push(stay);
     if (!tightestInput || marginKey(stay) > marginKey(stays[tightest])) {
