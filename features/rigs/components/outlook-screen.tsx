@@ -9,6 +9,7 @@ import { FIX_WIRING_CAUTION, needsWiringCaution } from '@/shared/safety';
 import { colors, radius, space, type } from '@/shared/theme';
 import { type Outlook, useOutlookQuery } from '../api/rig';
 import { SocChart } from './chart/soc-chart';
+import { TripStays } from './trip-stays';
 
 const FIX_TITLE: Record<string, string> = {
   'cutoff-switch': 'Cut-off switch on the inverter',
@@ -53,6 +54,13 @@ export function OutlookScreen({ rigId, narrow = false }: { rigId: string; narrow
               Dark line: on your routine. Grey: parked. Red line: cut-off at {o.cutoffSocPercent} %. Amber bands: driving.
             </Small>
           </Card>
+          {o.trip ? (
+            <Card testID="outlook-trip">
+              <Heading>On the trip: {o.trip.name}</Heading>
+              <Small>The trip is followed instead of the weekly routine until you set it aside on the Trips tab.</Small>
+              <TripStays trip={o.trip} />
+            </Card>
+          ) : null}
           {o.warnings.length ? (
             <Card testID="warnings">
               <Heading>Warnings</Heading>
