@@ -23,7 +23,8 @@ export function TripStays({ trip }: { trip: TripOutlookAnswer }) {
           </View>
           <Small>
             {when(s.arriveAt)} → {when(s.leaveAt)} · {s.nights} {s.nights === 1 ? 'night' : 'nights'} · battery about {s.batteryTemperatureC.toFixed(0)} °C
-            {s.shore ? ' · shore power' : ''} · sun {s.sunAhPerDay.toFixed(0)} Ah a day
+            {s.shore ? ' · shore power' : ''}
+            {s.sunAhPerDay > 0 ? ` · sun ${s.sunAhPerDay.toFixed(0)} Ah a day` : ''}
           </Small>
           <Text style={styles.figures} testID={`stay-figures-${s.name}`}>
             {s.socOnArrivalPercent.toFixed(0)} % on arrival → {s.socOnLeavingPercent.toFixed(0)} % on leaving

@@ -46,7 +46,7 @@ export function TripsScreen({ rigId }: { rigId: string }) {
                   {t.active ? ' · followed' : ''}
                 </Text>
                 <Small>
-                  From {t.startDate} · {t.legs.filter((l) => l.kind === 'stay').length} stays · {t.legs.filter((l) => l.kind === 'drive').length} drives
+                  From {t.startDate} · {count(t.legs.filter((l) => l.kind === 'stay').length, 'stay')} · {count(t.legs.filter((l) => l.kind === 'drive').length, 'drive')}
                 </Small>
               </Pressable>
               {canEdit ? (
@@ -80,6 +80,7 @@ export function TripsScreen({ rigId }: { rigId: string }) {
   );
 }
 
+const count = (n: number, word: string) => `${n} ${word}${n === 1 ? '' : 's'}`;
 const toForm = ({ id: _id, ...trip }: SavedTrip): TripInput => trip;
 
 function TripOutlookCard({ rigId, tripId }: { rigId: string; tripId: string }) {
