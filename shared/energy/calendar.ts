@@ -73,6 +73,10 @@ export function solarReport(r: {
 }): { source: 'place-and-date' | 'peak-sun-hours'; dailyAh: number[] } {
   const startHour = r.startHourOfWeek % 24;
   if (r.solarByHour !== null) return { source: 'place-and-date', dailyAh: solarDailyAh(r.solarByHour, startHour, r.horizonHours) };
+  let any = false;
+  for (let h = 0; h < 24; h++) if (r.solarByHourOfDay[h] !== 0) any = true;
+  // No panels: zeros without walking the horizon (every projection reports this).
+  if (!any) return { source: 'peak-sun-hours', dailyAh: zeros(Math.ceil((startHour + r.horizonHours) / 24)) };
   const pattern = zeros(r.horizonHours);
   for (let t = 0; t < r.horizonHours; t++) pattern[t] = r.solarByHourOfDay[(startHour + t) % 24];
   return { source: 'peak-sun-hours', dailyAh: solarDailyAh(pattern, startHour, r.horizonHours) };
