@@ -213,6 +213,20 @@ export interface ReadingTable {
   created_at: Timestamp;
 }
 
+export interface TripTable {
+  id: Generated<string>;
+  rig_id: string;
+  created_by: string | null;
+  name: string;
+  /** ISO date (YYYY-MM-DD), kept as text so no time zone moves it. */
+  start_date: string;
+  active: Generated<boolean>;
+  /** arrivalHour, batteryInCabin and legs (shared/schemas/trip.ts). */
+  plan: ColumnType<unknown, string, string>;
+  created_at: Generated<Date>;
+  updated_at: Generated<Date>;
+}
+
 export interface Database {
   user: UserTable;
   organization: OrganizationTable;
@@ -230,6 +244,7 @@ export interface Database {
   uploads: UploadTable;
   readings: ReadingTable;
   invitation_sends: InvitationSendTable;
+  trips: TripTable;
 }
 
 /** One invitation e-mail sent, for the limits per inviter and per household. */

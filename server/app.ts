@@ -23,6 +23,8 @@ import { meRouter } from './routes/me';
 import { projectionsRouter } from './routes/projections';
 import { readingsAnalyzeRouter, rigReadingsRouter } from './routes/readings';
 import { rigsRouter } from './routes/rigs';
+import { solarRouter } from './routes/solar';
+import { rigTripsRouter } from './routes/trips';
 import { serveWeb } from './web';
 
 export const APP_VERSION = '0.1.0';
@@ -80,13 +82,14 @@ export function createApp(ctx: AppContext): Express {
   // One budget per client across every open route (not one each).
   const openLimit = rateLimitedOpen(config.RATE_LIMIT_PER_MINUTE);
   app.use('/api/projections', openLimit, projectionsRouter());
+  app.use('/api/solar', openLimit, solarRouter());
   app.use('/api/cable-runs', openLimit, cableRunsRouter());
   app.use('/api/hookups', openLimit, hookupsRouter());
   app.use('/api/devices', openLimit, devicesRouter());
   app.use('/api/email', openLimit, express.urlencoded({ extended: false, limit: '10kb' }), emailRouter(ctx));
   app.use('/api/me', requireSession(auth), meRouter(ctx));
   app.use('/api/readings', openLimit, readingsAnalyzeRouter());
-  app.use('/api/rigs', requireSession(auth), rigsRouter(ctx), rigReadingsRouter(ctx));
+  app.use('/api/rigs', requireSession(auth), rigsRouter(ctx), rigReadingsRouter(ctx), rigTripsRouter(ctx));
   app.use('/api/invitations', requireSession(auth), invitationsRouter(ctx));
   app.use('/api/clients', requireSession(auth), clientsRouter(ctx));
   app.use('/api/admin', requireSession(auth), adminRouter(ctx));

@@ -13,6 +13,7 @@ export const householdStatements = {
   load: ['create', 'update', 'delete'],
   reading: ['create', 'update', 'delete'],
   cableRun: ['create', 'update', 'delete'],
+  trip: ['create', 'update', 'delete'],
   note: ['create'],
   people: ['read', 'manage'],
 } as const;
@@ -26,6 +27,7 @@ export const householdRoles = {
     load: ['create', 'update', 'delete'],
     reading: ['create', 'update', 'delete'],
     cableRun: ['create', 'update', 'delete'],
+    trip: ['create', 'update', 'delete'],
     note: ['create'],
     people: ['read', 'manage'],
   }),
@@ -35,6 +37,7 @@ export const householdRoles = {
     load: ['create', 'update', 'delete'],
     reading: ['create', 'update', 'delete'],
     cableRun: ['create', 'update', 'delete'],
+    trip: ['create', 'update', 'delete'],
     note: ['create'],
     people: ['read'],
   }),

@@ -6,7 +6,7 @@ import { listHistory } from '../repositories/history';
 import { lockMargin, saveMargin } from '../repositories/margin';
 import { allRigIds, findRigForModel } from '../repositories/rigs';
 import { deliver, SendInFlight } from './deliver';
-import { daysText, figuresOfRigs, STATE_WORD } from './figures';
+import { daysText, figuresOfRigs, STATE_WORD, tripLines } from './figures';
 import type { Jobs } from './queue';
 import { type JobDeps, QUEUES } from './types';
 
@@ -50,10 +50,13 @@ export async function checkMargin(deps: JobDeps, rigId: string) {
         preview: `${f.rigName}'s margin is now ${STATE_WORD[f.marginState]}`,
         heading: `${f.rigName}'s margin is ${STATE_WORD[f.marginState]}`,
         intro: [
-          `Hello ${person.name}, ${f.rigName} now reaches its cut-off ${f.marginDays === null ? 'after' : f.marginDays < 0 ? `${Math.abs(f.marginDays).toFixed(1)} days before` : `only ${f.marginDays.toFixed(1)} days after`} the end of the planned ${f.plannedStayDays}-day stay.`,
+          f.trip
+            ? `Hello ${person.name}, on the trip “${f.trip.name}” ${f.rigName}'s tightest stay now ends ${STATE_WORD[f.marginState]}.`
+            : `Hello ${person.name}, ${f.rigName} now reaches its cut-off ${f.marginDays === null ? 'after' : f.marginDays < 0 ? `${Math.abs(f.marginDays).toFixed(1)} days before` : `only ${f.marginDays.toFixed(1)} days after`} the end of the planned ${f.plannedStayDays}-day stay.`,
           `Days parked: ${daysText(f.daysParked, f.horizonDays)}. Days on your routine: ${f.holds ? 'holds' : daysText(f.daysOnRoutine, f.horizonDays)}.`,
         ],
         sections: [
+          ...(f.trip ? [{ heading: `The trip: ${f.trip.name}`, lines: tripLines(f.trip) }] : []),
           { heading: 'What changed', lines: what },
           ...(top ? [{ heading: 'The top Fix', lines: [`${top.summary} (${top.gain})`], caution: needsWiringCaution([top]) ? FIX_WIRING_CAUTION : undefined }] : []),
         ],

@@ -6,7 +6,7 @@ import { knownEmailKeys, lastSentMeta, markEmailsQueued, recipient, reportSubscr
 import { openAdvisorThreads } from '../repositories/notes';
 import { rigOfMember } from '../repositories/rigs';
 import { deliver } from './deliver';
-import { daysText, figuresOfRigs, type RigFigures, STATE_WORD } from './figures';
+import { daysText, figuresOfRigs, type RigFigures, STATE_WORD, tripLines } from './figures';
 import type { Jobs } from './queue';
 import { reportDue } from './schedule';
 import { type JobDeps, QUEUES } from './types';
@@ -93,9 +93,10 @@ export async function reportLetter(
           ['Days parked', daysText(f.daysParked, f.horizonDays)],
           ['Days on your routine', f.holds ? 'holds (the week balances)' : daysText(f.daysOnRoutine, f.horizonDays)],
           ['Margin', `${STATE_WORD[f.marginState]} (${change})`],
-          ['Planned stay', `${f.plannedStayDays} days`],
+          f.trip ? ['Trip', `${f.trip.name}: ${f.trip.stays.length} ${f.trip.stays.length === 1 ? 'stay' : 'stays'}`] : ['Planned stay', `${f.plannedStayDays} days`],
         ],
       },
+      ...(f.trip ? [{ heading: `Your trip: ${f.trip.name}`, lines: tripLines(f.trip) }] : []),
       { heading: 'The week ahead', image: { cid: 'week-ahead', alt: `State of charge over the next 7 days; cut-off at ${f.cutoffSocPercent} %` } },
       {
         heading: 'Biggest drains',

@@ -5,6 +5,7 @@ import { compare, project } from '@/shared/energy/project';
 import { can, type HouseholdRole } from '@/shared/permissions';
 import { type Load, projectionInputSchema, type RigPower, rigPowerSchema } from '@/shared/schemas/projection';
 import { loadFromRow, loadToRow, modelInput, type SavedLoad, stripLoad } from './rigs-model';
+import { activeTripOutlook, activeTrips } from './trip-model';
 import { type Actor, daysParkedOf, describeLoad, describeLoadEdit, describeNewRig, describePowerChange } from './history';
 import { insertHistory } from '../repositories/history';
 import type { RigCreateInput, RigHeader, RigPermissions, RigUpdateInput } from '@/shared/schemas/rig';
@@ -20,6 +21,7 @@ export function permissionsOf(role: string): RigPermissions {
     edit: can(role, { rig: ['update'] }),
     delete: can(role, { rig: ['delete'] }),
     manageLoads: can(role, { load: ['create'] }),
+    manageTrips: can(role, { trip: ['create'] }),
     managePeople: can(role, { people: ['manage'] }),
     comment: can(role, { note: ['create'] }),
   };
@@ -132,7 +134,10 @@ export async function rigOutlook(db: Db, rig: RigRowWithRole): Promise<OutlookBo
   const hit = outlookCache.get(key);
   if (hit) return hit;
   const dto = await readRig(db, rig);
-  const json = JSON.stringify({ rigId: dto.id, version: dto.version, ...project(modelInput(dto.power, dto.loads)) });
+  const input = modelInput(dto.power, dto.loads);
+  // With an active trip the Outlook also follows its legs (the weekly routine stays for when none is).
+  const trip = activeTripOutlook(input, (await activeTrips(db, [rig.id])).get(rig.id));
+  const json = JSON.stringify({ rigId: dto.id, version: dto.version, ...project(input), trip });
   const body = { json, gzip: gzipSync(json), etag: `"outlook-${rig.id}-${rig.version}-${PROCESS_TAG}"` };
   outlookCache.set(key, body);
   if (outlookCache.size > OUTLOOK_CACHE_SIZE) outlookCache.delete(outlookCache.keys().next().value!);

@@ -221,14 +221,16 @@ export function findFixes(input: ProjectionInput, r: Resolved, demand: DemandPro
   }
 
   if (!base.balance.holds) {
-    const psh = input.charging.peakSunHours > 0 ? input.charging.peakSunHours : MODEL_DEFAULTS.fixPeakSunHours;
+    // With a place and dates, the panels get that place's sun (peak sun hours left at 0), not a fixed figure.
+    const bySun = r.solarByHour !== null;
+    const psh = bySun ? 0 : input.charging.peakSunHours > 0 ? input.charging.peakSunHours : MODEL_DEFAULTS.fixPeakSunHours;
     const withSolar = (w: number): ProjectionInput => ({ ...input, charging: { ...input.charging, solarW: w, peakSunHours: psh } });
     const watts = searchMin(input.charging.solarW, 3000, 10, (w) => holdsWith(withSolar(w)));
     if (watts !== null && watts > input.charging.solarW) {
       push(
         {
           kind: 'solar',
-          summary: `About ${watts} W of solar${input.charging.solarW ? ` (${watts - input.charging.solarW} W more)` : ''} at ${psh} peak sun hours balances the week.`,
+          summary: `About ${watts} W of solar${input.charging.solarW ? ` (${watts - input.charging.solarW} W more)` : ''} ${bySun ? 'in the sun of this place and season' : `at ${psh} peak sun hours`} balances the week.`,
           convenience: 'Roof space and a charge controller; less in cloud and in winter.',
           change: { charging: { solarW: watts, peakSunHours: psh } },
           figures: { solarW: watts, moreW: watts - input.charging.solarW, peakSunHours: psh },

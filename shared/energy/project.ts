@@ -1,6 +1,7 @@
 import type { CompareInput, Load, ProjectionInput } from '../schemas/projection';
 import { MODEL_DEFAULTS } from './defaults';
 import { type Fix, findFixes, toDays } from './fixes';
+import { solarReport } from './calendar';
 import { buildDemandProfile, type DemandProfile, HOURS_PER_WEEK as WEEK } from './profile';
 import { type Balance, repeatingWeek } from './repeating-week';
 import { resolve, type Resolved } from './resolve';
@@ -47,6 +48,8 @@ export type Projection = {
   }[];
   warnings: Warning[];
   fixes: Fix[];
+  /** The solar amp-hours of each day of the horizon, and whether they come from the place and date. */
+  solar: ReturnType<typeof solarReport>;
   assumptions: Record<string, number | string | boolean | null>;
   horizonDays: number;
   cutoffSocPercent: number;
@@ -137,6 +140,7 @@ export function project(input: ProjectionInput, options: { fixes?: boolean; subs
     series,
     warnings,
     fixes,
+    solar: solarReport(r),
     horizonDays: input.horizonDays,
     cutoffSocPercent: round(r.cutoffSoc, 2),
     assumptions: {
@@ -230,7 +234,7 @@ function seriesOf(r: Resolved, trace: Trace, parkedAh: number[]): Projection['se
       parkedSocPercent: Math.round(((parkedAh[i] / full) * 100) * 100) / 100,
       ah: Math.round(now * 100) / 100,
       netA: Math.round((now - before) * 1000) / 1000,
-      drivingMinutes: Math.round(r.driving[(r.startHourOfWeek + i) % HOURS_PER_WEEK] * 60),
+      drivingMinutes: Math.round((r.drivingByHour !== null ? r.drivingByHour[i] : r.driving[(r.startHourOfWeek + i) % HOURS_PER_WEEK]) * 60),
       inverterOn: inverterOn[i] === 1,
     };
     before = now;

@@ -1,6 +1,8 @@
 import type { InverterControl, ProjectionInput } from '../schemas/projection';
 import { CHEMISTRY_DEFAULTS, MODEL_DEFAULTS, starterCutoffSoc, temperatureFactor } from './defaults';
+import { type CalendarInputs, calendarOf } from './calendar';
 import { drivingFractions, HOURS_PER_WEEK, solarCurrents, zeros } from './profile';
+import { weekdayOf } from './solar';
 
 /** The input with every default filled in: what one run of the model needs, besides the demand profile. */
 export type Resolved = {
@@ -53,7 +55,7 @@ export type Resolved = {
   shoreByHourOfWeek: number[];
   horizonHours: number;
   startHourOfWeek: number;
-};
+} & CalendarInputs;
 
 const LEAD_ACID = new Set(['flooded', 'agm', 'gel']);
 
@@ -144,6 +146,7 @@ export function resolve(input: ProjectionInput): Resolved {
     ),
     shoreByHourOfWeek: shore,
     horizonHours: input.horizonDays * 24,
-    startHourOfWeek: input.start.weekday * 24 + input.start.hour,
+    startHourOfWeek: (input.start.date ? weekdayOf(input.start.date) : input.start.weekday) * 24 + input.start.hour,
+    ...calendarOf(input, derate),
   };
 }

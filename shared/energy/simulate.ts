@@ -146,6 +146,10 @@ export function run(r: Resolved, demand: DemandProfile, opts: RunOptions): RunRe
   const warmupH = r.heaterWarmupHours;
   let warmH = 0;
   const startHow = opts.startHow ?? r.startHourOfWeek;
+  // Calendar inputs (calendar.ts), per hour of the run, where the input follows dates instead of the week.
+  const solarAt = r.solarByHour;
+  const shoreAt = r.shoreByHour;
+  const drivingAt = r.drivingByHour;
 
   let minAh = Infinity;
   let maxAh = ah;
@@ -154,11 +158,12 @@ export function run(r: Resolved, demand: DemandProfile, opts: RunOptions): RunRe
       how = how === HOURS_PER_WEEK - 1 ? 0 : how + 1;
       hod = hod === 23 ? 0 : hod + 1;
     }
-    const f = withDriving ? drivingByHour[how] : 0;
-    const j = withDriving ? joinedByHour[how] : 0;
+    // A dated drive (a trip's) charges from its start: the relay's join delay is left to the weekly routine.
+    const f = withDriving ? (drivingAt !== null ? drivingAt[t] : drivingByHour[how]) : 0;
+    const j = withDriving ? (drivingAt !== null ? drivingAt[t] : joinedByHour[how]) : 0;
     const inWeek = trackWeek && t < HOURS_PER_WEEK;
     let inverterOnAny = false;
-    const sources = solar[hod] + shore[how];
+    const sources = (solarAt !== null ? solarAt[t] : solar[hod]) + (shoreAt !== null ? shoreAt[t] : shore[how]);
 
     // The drive before the alternator joins, the drive with it, then parked.
     for (let part = 0, partStart = 0; part < 3; part++) {

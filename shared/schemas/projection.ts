@@ -1,5 +1,7 @@
 import { z } from 'zod';
 
+import { isoDateSchema, locationSchema, skySchema } from './solar';
+
 // The energy model's input: a public contract (POST /api/projections). Fields may be added; the names stay.
 // Optional fields take the defaults in shared/energy/defaults.ts (documented in docs/model.md).
 
@@ -120,8 +122,15 @@ export const projectionBaseSchema = z.object({
     plannedStayDays: num(0, 60).default(0),
     horizonDays: z.number().int().min(1).max(60).default(14),
     start: z
-      .object({ weekday: weekdaySchema.default(0), hour: z.number().int().min(0).max(23).default(18) })
+      .object({
+        weekday: weekdaySchema.default(0),
+        hour: z.number().int().min(0).max(23).default(18),
+        /** A calendar date: the run then follows it (its weekday wins over `weekday`). */
+        date: isoDateSchema.optional(),
+      })
       .default({ weekday: 0, hour: 18 }),
+    /** Where the rig stands: with start.date and no peakSunHours, each day's sun comes from FAO-56 (solar.ts). */
+    location: locationSchema.extend({ sky: skySchema.optional() }).optional(),
 });
 
 export const rigPowerSchema = projectionBaseSchema.omit({ loads: true });

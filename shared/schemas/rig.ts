@@ -5,7 +5,7 @@ import { ROUTINE_KEYS } from '../routines';
 import { batterySchema, loadSchema, rigPowerSchema } from './projection';
 
 /** What the caller may do with a rig, worked out on the server from their household role. */
-export type RigPermissions = { edit: boolean; delete: boolean; manageLoads: boolean; managePeople: boolean; comment: boolean };
+export type RigPermissions = { edit: boolean; delete: boolean; manageLoads: boolean; manageTrips: boolean; managePeople: boolean; comment: boolean };
 
 /** What every answer about a rig carries (the rig, the Rigs list): which rig, whose, and what the caller may do. */
 export type RigHeader = {

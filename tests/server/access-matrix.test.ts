@@ -6,7 +6,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 
 import { unsubscribeToken } from '@/server/emails/unsubscribe';
 import { authMatrix } from './auth-matrix';
-import { householdFixture, uniqueEmail, WREN_POWER } from './helpers';
+import { householdFixture, TRIP_PLAN, uniqueEmail, WREN_POWER } from './helpers';
 import { makeTestApp, TEST_ORIGIN } from './test-app';
 
 type Role = 'anonymous' | 'outsider' | 'advisor' | 'member' | 'owner' | 'admin';
@@ -71,6 +71,10 @@ async function throwawayLoad() {
 }
 async function throwawayRun() {
   const res = await fx.agents.owner.post(`/api/rigs/${fx.rigId}/cable-runs`).set('Origin', TEST_ORIGIN).send(RUN);
+  return res.body.id as string;
+}
+async function throwawayTrip() {
+  const res = await fx.agents.owner.post(`/api/rigs/${fx.rigId}/trips`).set('Origin', TEST_ORIGIN).send({ ...TRIP_PLAN, active: false });
   return res.body.id as string;
 }
 const RUN = { label: 'Fridge feed', to: 'Fridge', lengthM: 3, currentA: 5, maxDropPercent: 3, insulationC: 105 };
@@ -140,6 +144,7 @@ const MATRIX: Record<string, Entry> = {
     expect: all(200),
   },
   'GET /api/devices/': { send: (a) => a.get('/api/devices?q=fridge'), expect: all(200) },
+  'POST /api/solar/daily': { send: (a) => a.post('/api/solar/daily').send({ latitudeDeg: -20, date: '2026-09-03' }), expect: all(200) },
   'POST /api/cable-runs/size': { send: (a) => a.post('/api/cable-runs/size').send({ currentA: 10, lengthM: 2 }), expect: all(200) },
   'GET /api/me/': { send: (a) => a.get('/api/me'), expect: { ...all(200), anonymous: 401 } },
   'GET /api/rigs/': { send: (a) => a.get('/api/rigs'), expect: { ...all(200), anonymous: 401 } },
@@ -151,6 +156,14 @@ const MATRIX: Record<string, Entry> = {
   'POST /api/hookups/': { send: (a) => a.post('/api/hookups').send({ battery: { chemistry: 'agm', capacityAh: 100 }, inverter: { ratedW: 300 } }), expect: all(200) },
   'GET /api/rigs/:rigId/hookup': { send: (a, c) => a.get(`/api/rigs/${c.rigId}/hookup`), expect: readRig },
   'GET /api/rigs/:rigId/cable-runs': { send: (a, c) => a.get(`/api/rigs/${c.rigId}/cable-runs`), expect: readRig },
+  'GET /api/rigs/:rigId/trips': { send: (a, c) => a.get(`/api/rigs/${c.rigId}/trips`), expect: readRig },
+  'POST /api/rigs/:rigId/trips': { send: (a, c) => a.post(`/api/rigs/${c.rigId}/trips`).set('Origin', TEST_ORIGIN).send({ ...TRIP_PLAN, active: false }), expect: editRole(201) },
+  'GET /api/rigs/:rigId/trips/:tripId/outlook': { send: async (a, c) => a.get(`/api/rigs/${c.rigId}/trips/${await throwawayTrip()}/outlook`), expect: readRig },
+  'PUT /api/rigs/:rigId/trips/:tripId': {
+    send: async (a, c) => a.put(`/api/rigs/${c.rigId}/trips/${await throwawayTrip()}`).set('Origin', TEST_ORIGIN).send({ ...TRIP_PLAN, active: false, name: 'Renamed' }),
+    expect: editRole(200),
+  },
+  'DELETE /api/rigs/:rigId/trips/:tripId': { send: async (a, c) => a.delete(`/api/rigs/${c.rigId}/trips/${await throwawayTrip()}`).set('Origin', TEST_ORIGIN), expect: editRole(204) },
   'POST /api/rigs/:rigId/cable-runs': { send: (a, c) => a.post(`/api/rigs/${c.rigId}/cable-runs`).set('Origin', TEST_ORIGIN).send(RUN), expect: editRole(201) },
   'PATCH /api/rigs/:rigId/cable-runs/:runId': {
     send: async (a, c) => a.patch(`/api/rigs/${c.rigId}/cable-runs/${await throwawayRun()}`).set('Origin', TEST_ORIGIN).send({ ...RUN, lengthM: 4 }),

@@ -50,6 +50,19 @@ export async function verifiedUser(ctx: AppContext, label: string, role?: string
   return { id: user.id, email };
 }
 
+/** A trip of two stays and two drives (the demo's lake week). */
+export const TRIP_PLAN = {
+  name: 'Lake week',
+  startDate: '2026-06-05',
+  active: true,
+  legs: [
+    { kind: 'drive', date: '2026-06-05', startHour: 10, minutes: 180 },
+    { kind: 'stay', name: 'Lake', latitudeDeg: 47.5, nights: 5, lowC: 9, highC: 24 },
+    { kind: 'drive', date: '2026-06-10', minutes: 40 },
+    { kind: 'stay', name: 'Farm', latitudeDeg: 47.1, nights: 2, lowC: 8, highC: 22, shore: true },
+  ],
+};
+
 export const WREN_POWER = {
   systemVoltage: 12,
   battery: { chemistry: 'agm', capacityAh: 100 },

@@ -184,3 +184,24 @@ describe('rate limit', () => {
     await limited.db.destroy();
   });
 });
+
+describe('POST /api/projections on the calendar', () => {
+  const rig = { battery: { chemistry: 'agm', capacityAh: 100 }, charging: { solarW: 200 }, start: { hour: 0, date: '2026-06-21' }, location: { latitudeDeg: 50 } };
+
+  it('takes the sun of the place and date and reports the amp-hours a day it used', async () => {
+    const res = await post(rig).expect(200);
+    expect(res.body.solar.source).toBe('place-and-date');
+    // FAO-56 eqs. 21 and 37 by hand: 8.71 peak sun hours at 50° N on 21 June; 200 W × 8.71 × 0.75 / 12 V = 109 Ah.
+    expect(res.body.solar.dailyAh[0]).toBeCloseTo(109, -1);
+  });
+
+  it('answers as before without a date', async () => {
+    const res = await post({ ...rig, start: { hour: 0 } }).expect(200);
+    expect(res.body.solar.source).toBe('peak-sun-hours');
+  });
+
+  it('names a date that does not exist and a latitude beyond the pole', async () => {
+    const res = await post({ ...rig, start: { hour: 0, date: '2026-13-01' }, location: { latitudeDeg: -91 } }).expect(400);
+    expect(fieldPaths(res)).toEqual(expect.arrayContaining(['start.date', 'location.latitudeDeg']));
+  });
+});

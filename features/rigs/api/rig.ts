@@ -2,13 +2,15 @@ import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/r
 
 import { ApiError, apiFetch } from '@/lib/api-client';
 import type { Comparison, Projection } from '@/shared/energy/project';
+import type { TripOutlook } from '@/shared/energy/trip';
 import type { Load, LoadInput, RigPower } from '@/shared/schemas/projection';
 import type { RigHeader, RigUpdateForm } from '@/shared/schemas/rig';
 import { rigKeys } from './rig-keys';
 
 export type SavedLoad = Load & { id: string; addedBy: { id: string; name: string } | null };
 export type Rig = RigHeader & { power: RigPower; loads: SavedLoad[] };
-export type Outlook = Projection & { rigId: string; version: number };
+export type Outlook = Projection & { rigId: string; version: number; trip: TripOutlookAnswer | null };
+export type TripOutlookAnswer = TripOutlook & { tripId: string; name: string };
 
 // A refusal (404: not there or not shared) is an answer, not a failure worth retrying.
 const retryUnlessRefused = (count: number, err: Error) => !(err instanceof ApiError && err.status < 500) && count < 1;

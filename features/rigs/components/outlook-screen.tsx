@@ -14,6 +14,7 @@ import { SocChart } from './chart/soc-chart';
 import { OutlookBasis } from './outlook/outlook-basis';
 import { SheetButton } from './outlook/sheet-button';
 import { WorkedOut } from './outlook/worked-out';
+import { TripStays } from './trip-stays';
 
 const FIX_TITLE: Record<string, string> = {
   'cutoff-switch': 'Cut-off switch on the inverter',
@@ -71,6 +72,13 @@ export function OutlookScreen({ rigId, narrow = false }: { rigId: string; narrow
               Dark line: on your routine. Grey: parked. Red line: cut-off at {o.cutoffSocPercent} %. Amber bands: driving.
             </Small>
           </Card>
+          {o.trip ? (
+            <Card testID="outlook-trip">
+              <Heading>On the trip: {o.trip.name}</Heading>
+              <Small>The trip is followed instead of the weekly routine until you set it aside on the Trips tab.</Small>
+              <TripStays trip={o.trip} />
+            </Card>
+          ) : null}
           {o.warnings.length ? (
             <Card testID="warnings">
               <Heading>Warnings</Heading>

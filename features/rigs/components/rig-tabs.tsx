@@ -15,6 +15,7 @@ export function RigTabs({ rigId, unreadNotes = 0 }: { rigId: string; unreadNotes
     { href: { pathname: '/rigs/[rigId]/power', params: { rigId } }, label: 'Power', path: `/rigs/${rigId}/power` },
     { href: { pathname: '/rigs/[rigId]/hookup', params: { rigId } }, label: 'Hook-up', path: `/rigs/${rigId}/hookup` },
     { href: { pathname: '/rigs/[rigId]/try', params: { rigId } }, label: 'Try a load', path: `/rigs/${rigId}/try` },
+    { href: { pathname: '/rigs/[rigId]/trips', params: { rigId } }, label: 'Trips', path: `/rigs/${rigId}/trips` },
     { href: { pathname: '/rigs/[rigId]/cable-runs', params: { rigId } }, label: 'Cable runs', path: `/rigs/${rigId}/cable-runs` },
     { href: { pathname: '/rigs/[rigId]/readings', params: { rigId } }, label: 'Readings', path: `/rigs/${rigId}/readings` },
     { href: { pathname: '/rigs/[rigId]/notes', params: { rigId } }, label: unreadNotes ? `Notes (${unreadNotes} new)` : 'Notes', path: `/rigs/${rigId}/notes` },

@@ -44,6 +44,7 @@ const routes = (): [string, Sender][] => {
   return [
     ['POST /api/projections', (b) => o.post('/api/projections').type('json').send(JSON.stringify(b))],
     ['POST /api/projections/compare', (b) => o.post('/api/projections/compare').type('json').send(JSON.stringify(b))],
+    ['POST /api/solar/daily', (b) => o.post('/api/solar/daily').type('json').send(JSON.stringify(b))],
     ['POST /api/cable-runs/size', (b) => o.post('/api/cable-runs/size').type('json').send(JSON.stringify(b))],
     ['POST /api/hookups', (b) => o.post('/api/hookups').type('json').send(JSON.stringify(b))],
     ['GET /api/rigs/:rigId/hookup', (_b, s) => o.get(`${r}/hookup`).query({ feedLengthM: s, control: s })],
@@ -57,6 +58,8 @@ const routes = (): [string, Sender][] => {
     ['POST /api/rigs/:rigId/loads', (b) => o.post(`${r}/loads`).set('Origin', TEST_ORIGIN).type('json').send(JSON.stringify(b))],
     ['PATCH /api/rigs/:rigId/loads/:loadId', (b, s) => o.patch(`${r}/loads/${id(s)}`).set('Origin', TEST_ORIGIN).type('json').send(JSON.stringify(b))],
     ['POST /api/rigs/:rigId/cable-runs', (b) => o.post(`${r}/cable-runs`).set('Origin', TEST_ORIGIN).type('json').send(JSON.stringify(b))],
+    ['POST /api/rigs/:rigId/trips', (b) => o.post(`${r}/trips`).set('Origin', TEST_ORIGIN).type('json').send(JSON.stringify(b))],
+    ['PUT /api/rigs/:rigId/trips/:tripId', (b, s) => o.put(`${r}/trips/${id(s)}`).set('Origin', TEST_ORIGIN).type('json').send(JSON.stringify(b))],
     ['POST /api/rigs/:rigId/notes', (b) => o.post(`${r}/notes`).set('Origin', TEST_ORIGIN).type('json').send(JSON.stringify(b))],
     ['PATCH /api/rigs/:rigId/notes/:noteId', (b, s) => o.patch(`${r}/notes/${id(s)}`).set('Origin', TEST_ORIGIN).type('json').send(JSON.stringify(b))],
     ['POST /api/rigs/:rigId/readings', (b) => o.post(`${r}/readings`).set('Origin', TEST_ORIGIN).type('json').send(JSON.stringify(b))],

@@ -1,0 +1,38 @@
+import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+
+import { apiFetch } from '@/lib/api-client';
+import type { Trip, TripInput } from '@/shared/schemas/trip';
+import type { TripOutlookAnswer } from './rig';
+import { rigKeys } from './rig-keys';
+
+export type SavedTrip = Trip & { id: string };
+export type RecentPlace = { name: string; latitudeDeg: number; elevationM?: number };
+
+export const useTripsQuery = (rigId: string) =>
+  useQuery({ queryKey: rigKeys.trips(rigId), queryFn: () => apiFetch<{ trips: SavedTrip[]; recentPlaces: RecentPlace[] }>(`/api/rigs/${rigId}/trips`) });
+
+export const useTripOutlookQuery = (rigId: string, tripId: string | null) =>
+  useQuery({
+    queryKey: rigKeys.tripOutlook(rigId, tripId ?? ''),
+    queryFn: () => apiFetch<TripOutlookAnswer>(`/api/rigs/${rigId}/trips/${tripId}/outlook`),
+    enabled: tripId !== null,
+  });
+
+/** A trip change moves the rig's Outlook (the active trip) and the trips' own outlooks. */
+function useTripMutation<V, R>(rigId: string, fn: (v: V) => Promise<R>) {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: fn,
+    onSuccess: () =>
+      Promise.all([
+        client.invalidateQueries({ queryKey: rigKeys.trips(rigId) }),
+        client.invalidateQueries({ queryKey: rigKeys.outlook(rigId) }),
+        client.invalidateQueries({ queryKey: rigKeys.detail(rigId) }),
+      ]),
+  });
+}
+
+export const useTripCreateMutation = (rigId: string) => useTripMutation(rigId, (trip: TripInput) => apiFetch<SavedTrip>(`/api/rigs/${rigId}/trips`, { method: 'POST', json: trip }));
+export const useTripUpdateMutation = (rigId: string) =>
+  useTripMutation(rigId, ({ id, trip }: { id: string; trip: TripInput }) => apiFetch<SavedTrip>(`/api/rigs/${rigId}/trips/${id}`, { method: 'PUT', json: trip }));
+export const useTripDeleteMutation = (rigId: string) => useTripMutation(rigId, (id: string) => apiFetch(`/api/rigs/${rigId}/trips/${id}`, { method: 'DELETE' }));

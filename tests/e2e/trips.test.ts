@@ -1,0 +1,80 @@
+import path from 'node:path';
+import type { Browser, Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+
+import { BASE, launchChromium, PHONE, SHOTS, signInAs } from './browser';
+
+let browser: Browser;
+beforeAll(async () => {
+  browser = await launchChromium();
+});
+afterAll(async () => {
+  await browser?.close();
+});
+
+async function fill(page: Page, testId: string, value: string) {
+  const input = page.getByTestId(testId);
+  await input.fill(value);
+  await input.blur();
+}
+
+type StayAnswer = { name: string; socOnArrivalPercent: number; socOnLeavingPercent: number; marginState: string };
+
+describe('trips', () => {
+  it('plans a trip of two stays and a drive on a phone and reads the margin at each stay', async () => {
+    const page = await browser.newPage({ viewport: PHONE });
+    await signInAs(page, 'tobi@example.org');
+    await page.getByTestId('open-Wren').click();
+    await page.getByTestId('tab-Trips').click();
+    await page.getByTestId('trips-screen').waitFor();
+    await page.getByTestId('add-trip').click();
+
+    const name = `Lake week ${Date.now()}`;
+    await fill(page, 'trip-name', name);
+    await fill(page, 'trip-start', '2026-06-05');
+    await fill(page, 'leg-0-name', 'Lake');
+    await fill(page, 'field-legs.0.latitudeDeg', '47.5');
+    await fill(page, 'field-legs.0.nights', '5');
+    await fill(page, 'field-legs.0.lowC', '9');
+    await fill(page, 'field-legs.0.highC', '24');
+    await page.getByTestId('add-drive').click();
+    await fill(page, 'leg-1-date', '2026-06-10');
+    await fill(page, 'field-legs.1.minutes', '40');
+    await page.getByTestId('add-stay').click();
+    await fill(page, 'leg-2-name', 'Farm');
+    await fill(page, 'field-legs.2.latitudeDeg', '47.1');
+    await fill(page, 'field-legs.2.nights', '2');
+    await page.getByTestId('field-legs.2.shore').click();
+    await page.getByTestId('trip-submit').click();
+
+    await page.getByTestId('trip-outlook').waitFor();
+    await page.getByTestId('stay-Farm').waitFor();
+    const trips = (await (await page.request.get(`${BASE}/api/rigs/${page.url().split('/rigs/')[1].split('/')[0]}/trips`)).json()) as { trips: { id: string; name: string }[] };
+    const trip = trips.trips.find((t) => t.name === name)!;
+    const rigId = page.url().split('/rigs/')[1].split('/')[0];
+    const answer = (await (await page.request.get(`${BASE}/api/rigs/${rigId}/trips/${trip.id}/outlook`)).json()) as { stays: StayAnswer[] };
+    // The screen shows each stay's charge on arrival and on leaving and its margin, as the model answers them.
+    for (const stay of answer.stays) {
+      const figures = await page.getByTestId(`stay-figures-${stay.name}`).textContent();
+      expect(figures).toBe(`${stay.socOnArrivalPercent.toFixed(0)} % on arrival → ${stay.socOnLeavingPercent.toFixed(0)} % on leaving`);
+      await page.getByTestId(`stay-${stay.name}`).getByTestId(`margin-${stay.marginState}`).waitFor();
+    }
+    // The farm has shore power all day: Wren leaves it full.
+    expect(answer.stays.map((s) => s.name)).toEqual(['Lake', 'Farm']);
+    expect(answer.stays[1].socOnLeavingPercent).toBe(100);
+    expect(await page.getByTestId('stay-margin-Lake').textContent()).toMatch(/Days to cut-off here|Arrives below the cut-off/);
+    await page.screenshot({ path: path.join(SHOTS, 'trips-phone.png'), fullPage: true });
+
+    // The Outlook follows the active trip.
+    await page.getByTestId('tab-Outlook').click();
+    await page.getByTestId('outlook-trip').waitFor();
+    await page.getByTestId('outlook-trip').getByTestId('stay-Lake').waitFor();
+    await page.screenshot({ path: path.join(SHOTS, 'outlook-trip-phone.png'), fullPage: true });
+
+    // Put Wren back as it was for the other browser tests.
+    await page.getByTestId('tab-Trips').click();
+    await page.getByRole('button', { name: `Delete ${name}` }).click();
+    await expect.poll(async () => (await (await page.request.get(`${BASE}/api/rigs/${rigId}/trips`)).json()).trips.some((t: { id: string }) => t.id === trip.id)).toBe(false);
+    await page.close();
+  });
+});
