@@ -6,7 +6,7 @@
 // Files with a content hash in their name are cached for good by browsers (server/web.ts); every other
 // file is revalidated, so nothing here may keep a fixed name and change its content without a new build.
 import { createHash } from 'node:crypto';
-import { copyFileSync, mkdirSync, readdirSync, readFileSync, renameSync, rmSync, statSync, writeFileSync } from 'node:fs';
+import { copyFileSync, existsSync, mkdirSync, readdirSync, readFileSync, renameSync, rmSync, statSync, writeFileSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import { brotliCompressSync, constants, gzipSync } from 'node:zlib';
@@ -33,8 +33,10 @@ function files(dir: string): string[] {
 /** 1. The chart's CanvasKit, named by content. The loader's name came from the same hash before the export. */
 function hashCanvasKit() {
   const plain = path.join(dist, 'canvaskit.wasm');
-  const named = hashedName('canvaskit.wasm', readFileSync(plain));
   const expected = process.env.EXPO_PUBLIC_CANVASKIT_WASM;
+  // Run again on a finished export (after changing this script): already done.
+  if (!existsSync(plain) && expected && existsSync(path.join(dist, expected))) return;
+  const named = hashedName('canvaskit.wasm', readFileSync(plain));
   if (expected !== named) throw new Error(`canvaskit.wasm hashes to ${named}, but the bundle was built with ${expected ?? 'no name'}`);
   const js = files(path.join(dist, '_expo')).filter((f) => f.endsWith('.js'));
   if (!js.some((f) => readFileSync(f, 'utf8').includes(named))) throw new Error(`no script loads ${named}: is the Metro cache stale?`);
@@ -82,9 +84,28 @@ function workboxRuntime(): string[] {
   });
 }
 
+/**
+ * The route table for the worker, each route pointing at a page to precache. Expo renders every signed-in
+ * route to the same shell (the session is checked in the browser), so identical pages are precached once.
+ */
+function pagesToPrecache() {
+  // Expo's own route list (_sitemap) is not part of the app.
+  const routes = webRoutes(dist).filter((r) => !r.file.startsWith('_'));
+  const rank = (f: string) => (f.includes('[') ? 2 : f === 'index.html' ? 0 : 1);
+  const canonical = new Map<string, string>();
+  const digest = (file: string) => createHash('sha256').update(readFileSync(path.join(dist, file))).digest('hex');
+  for (const r of [...routes].sort((a, b) => rank(a.file) - rank(b.file))) {
+    if (!canonical.has(digest(r.file))) canonical.set(digest(r.file), r.file);
+  }
+  return {
+    routes: routes.map((r) => ({ pattern: r.pattern.source, page: `/${canonical.get(digest(r.file))}` })),
+    globs: [...canonical.values()].map((f) => f.replace(/[[\]]/g, '\\$&')),
+  };
+}
+
 /** 3. The service worker: the template with the route table and Workbox's precache list filled in. */
 async function serviceWorker() {
-  const routes = webRoutes(dist).map((r) => ({ pattern: r.pattern.source, page: `/${r.file}` }));
+  const { routes, globs } = pagesToPrecache();
   const template = readFileSync('web/service-worker.js', 'utf8')
     .replace('self.__KEYOFF_WORKBOX', JSON.stringify(workboxRuntime()))
     .replace('self.__KEYOFF_ROUTES', JSON.stringify(routes));
@@ -96,9 +117,7 @@ async function serviceWorker() {
       swDest: path.join(dist, 'sw.js'),
       globDirectory: dist,
       globPatterns: [
-        '*.html',
-        'rigs/**/*.html',
-        'invitations/**/*.html',
+        ...globs,
         '_expo/static/**/*.{js,css}',
         'canvaskit.*.wasm',
         'assets/assets/**/*',
@@ -107,7 +126,7 @@ async function serviceWorker() {
         'manifest.webmanifest',
         'favicon.ico',
       ],
-      globIgnores: ['_sitemap.html', '+not-found.html', '**/*.{br,gz}'],
+      globIgnores: ['**/*.{br,gz}'],
       // Hashed names change with their content: no revision, so the browser's HTTP cache can serve them.
       dontCacheBustURLsMatching: /[.-][0-9a-f]{12,}(@\dx)?\.[a-z0-9]+$/,
       maximumFileSizeToCacheInBytes: 16 * 1024 * 1024,
@@ -124,7 +143,9 @@ function precompress() {
   let raw = 0;
   let br = 0;
   for (const file of files(dist)) {
-    if (/\.(br|gz|png|jpe?g|webp|woff2|ico)$/.test(file) || path.basename(file).startsWith('.')) continue;
+    if (/\.(br|gz|png|jpe?g|webp|woff2)$/.test(file) || path.basename(file).startsWith('.')) continue;
+    // Already done on an earlier run over the same export.
+    if (existsSync(`${file}.br`) && statSync(`${file}.br`).mtimeMs >= statSync(file).mtimeMs) continue;
     const content = readFileSync(file);
     if (content.length < 256) continue;
     const brotli = brotliCompressSync(content, { params: { [constants.BROTLI_PARAM_QUALITY]: 11, [constants.BROTLI_PARAM_SIZE_HINT]: content.length } });

@@ -46,7 +46,12 @@ export function serveWeb(app: Express, dist: string) {
   app.use((req, res, next) => {
     if (req.method !== 'GET' && req.method !== 'HEAD') return next();
     res.status(404).setHeader('Cache-Control', 'no-cache');
-    if (existsSync(notFound)) res.sendFile(notFound);
-    else res.type('text').send('Not found');
+    if (!existsSync(notFound)) return res.type('text').send('Not found');
+    res.setHeader('Vary', 'Accept-Encoding');
+    const encoding = req.acceptsEncodings('br', 'gzip', 'identity');
+    const ext = encoding === 'br' ? '.br' : encoding === 'gzip' ? '.gz' : '';
+    if (!ext || !existsSync(notFound + ext)) return res.sendFile(notFound);
+    res.setHeader('Content-Encoding', encoding as string);
+    res.type('html').sendFile(notFound + ext);
   });
 }
