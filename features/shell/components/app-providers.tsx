@@ -1,11 +1,10 @@
-import { type ReactNode, useEffect, useState } from 'react';
+import { type ReactNode, useState } from 'react';
 import { Platform } from 'react-native';
 import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
 import { useFonts } from 'expo-font';
 import { SafeAreaProvider } from 'react-native-safe-area-context';
 
 import { PageTitle } from '@/components/page-title';
-import { registerServiceWorker } from '@/lib/service-worker';
 import { fontFiles } from './font-files';
 
 export function AppProviders({ children }: { children: ReactNode }) {
@@ -21,7 +20,6 @@ export function AppProviders({ children }: { children: ReactNode }) {
       }),
   );
   const [loaded, error] = useFonts(fontFiles);
-  useEffect(registerServiceWorker, []);
   // On the web the static page renders at once and the font swaps in; on a device we wait for it.
   if (!loaded && !error && Platform.OS !== 'web') return null;
   return (
