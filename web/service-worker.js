@@ -4,7 +4,7 @@
 //
 // - Precached (app shell): the route pages, the JavaScript (the chart's chunk too), canvaskit.wasm, the
 //   fonts and icons. Files with a hash in their name come from the HTTP cache when the page already loaded them.
-// - Pages: the network first (a short wait), else the precached page of that route, so a reload offline works.
+// - Pages: the precached page of the route (a reload offline works; a new build's worker brings new pages).
 // - Rig lists, rigs, Outlooks and the signed-in account: the network first, else the last answer, marked
 //   with a header the page shows as "Offline: figures from <time>". Signing out deletes that cache.
 // - Everything else (writes, other API reads) goes to the network only: a save offline fails at once.
@@ -14,7 +14,6 @@ workbox.core.setCacheNameDetails({ prefix: 'keyoff' });
 const ROUTES = self.__KEYOFF_ROUTES.map((r) => ({ pattern: new RegExp(r.pattern), page: r.page }));
 const API_CACHE = 'keyoff-api';
 const FROM_CACHE_HEADER = 'x-keyoff-from-cache';
-const PAGE_TIMEOUT_S = 4;
 const API_TIMEOUT_S = 8;
 
 workbox.precaching.precacheAndRoute(self.__WB_MANIFEST, { cleanURLs: false, directoryIndex: null });
@@ -29,17 +28,14 @@ function pageFor(pathname) {
   return hit ? hit.page : null;
 }
 
+// Pages come from the precache at once: they hold no figures (the screen asks the API for those), and a
+// new build brings a new worker with new pages, which takes over at the next visit.
 workbox.routing.registerRoute(
   ({ request, url }) => request.mode === 'navigate' && url.origin === self.location.origin && !url.pathname.startsWith('/api/'),
   async ({ request, url }) => {
-    try {
-      const timeout = new Promise((_, reject) => setTimeout(() => reject(new Error('slow')), PAGE_TIMEOUT_S * 1000));
-      return await Promise.race([fetch(request), timeout]);
-    } catch {
-      const page = pageFor(url.pathname);
-      const cached = page ? await workbox.precaching.matchPrecache(page) : undefined;
-      return cached || Response.error();
-    }
+    const page = pageFor(url.pathname);
+    const cached = page ? await workbox.precaching.matchPrecache(page) : undefined;
+    return cached || fetch(request);
   },
 );
 
