@@ -4,7 +4,7 @@ import { ApiError, apiFetch } from '@/lib/api-client';
 import type { Comparison, Projection } from '@/shared/energy/project';
 import type { Load, LoadInput, RigPower } from '@/shared/schemas/projection';
 import type { RigHeader, RigUpdateForm } from '@/shared/schemas/rig';
-import { tryOnDevice, type TryResult } from '../utils/try-on-device';
+import type { TryResult } from '../utils/try-on-device';
 import { rigKeys } from './rig-keys';
 
 export type SavedLoad = Load & { id: string; addedBy: { id: string; name: string } | null };
@@ -53,6 +53,8 @@ export const useTryLoadsMutation = (rigId: string) => {
       } catch (err) {
         if (!(err instanceof ApiError && err.code === 'offline')) throw err;
         const rig = await client.ensureQueryData(rigQueryOptions(rigId));
+        // The model loads only when needed (its own chunk, which the service worker keeps for offline).
+        const { tryOnDevice } = await import('../utils/try-on-device');
         return { ...tryOnDevice(rig, candidates), onDevice: true };
       }
     },
