@@ -8,6 +8,10 @@
 //   worker adds in the background until the network is quiet;
 // - the same Outlook warm (a second visit): time to the headline and the chart, bytes (target 100 KB;
 //   headline within 1.5 s); and the layout shift the chart causes when it arrives (target none).
+// The page's emulated conditions do not reach the requests its service worker makes itself (Chrome 156;
+// attaching to the worker's target and emulating there did not slow them either): the warm visit's API
+// requests go through the worker, so its times are optimistic by up to about two round trips. Bytes are
+// counted at the server and are exact either way.
 import type { AddressInfo, Socket } from 'node:net';
 import type { BrowserContext, Page } from 'playwright-core';
 import { pino } from 'pino';
@@ -105,8 +109,9 @@ async function main() {
     const steps = (await page.evaluate(`(() => {
       const entries = performance.getEntriesByType('resource');
       const find = (re, k) => Math.round((entries.find((e) => re.test(e.name)) || {})[k] ?? -1);
-      return { sessionAskedMs: find(/\\/api\\/me$/, 'startTime'), outlookAnsweredMs: find(/\\/outlook$/, 'responseEnd') };
-    })()`)) as { sessionAskedMs: number; outlookAnsweredMs: number };
+      const o = entries.find((e) => /\\/outlook$/.test(e.name));
+      return { sessionAskedMs: find(/\\/api\\/me$/, 'startTime'), outlookAnsweredMs: find(/\\/outlook$/, 'responseEnd'), outlookRequestMs: o ? Math.round(o.responseEnd - o.startTime) : -1 };
+    })()`)) as { sessionAskedMs: number; outlookAnsweredMs: number; outlookRequestMs: number };
     return { headlineMs: Math.round(headlineMs), chartMs: Math.round(chartMs), ...steps, bytesToChart: since(w0).down, upToChart: since(w0).up, chartLayoutShift: +chartShift.toFixed(4), w0 };
   };
 
@@ -143,7 +148,7 @@ async function main() {
     await quiet();
     const warmAll = since(warm.w0).down;
     console.log(
-      `Outlook warm (second visit), throttled: headline figures ${s(warm.headlineMs)} (target 1.5 s: ${warm.headlineMs <= 1500 ? 'met' : 'missed'}; scripts ran by ${s(warm.sessionAskedMs)}, Outlook answered by ${s(warm.outlookAnsweredMs)}), chart drawn ${s(warm.chartMs)}; ` +
+      `Outlook warm (second visit), throttled: headline figures ${s(warm.headlineMs)} (target 1.5 s: ${warm.headlineMs <= 1500 ? 'met' : 'missed'}; scripts ran by ${s(warm.sessionAskedMs)}, Outlook answered by ${s(warm.outlookAnsweredMs)}, its request through the service worker ${warm.outlookRequestMs} ms), chart drawn ${s(warm.chartMs)}; ` +
         `${kb(warmAll)} on the wire (target 100 KB: ${warmAll <= 100 * 1024 ? 'met' : 'missed'})`,
     );
     await profile.close();
