@@ -60,6 +60,26 @@ describe('the web build over HTTP', () => {
     expect(sw).toContain(font.slice(1));
   });
 
+  it('gives every page a title, a description, the theme colour and the manifest, whose icons are served', async () => {
+    for (const url of ['/', '/sign-in', '/rigs/some-rig', '/settings', '/forgot-password']) {
+      const html = await (await fetch(BASE + url)).text();
+      expect(html, url).toMatch(/<title[^>]*>([^<]+ · )?Keyoff<\/title>/);
+      expect(html, url).toMatch(/<meta name="description" content="[^"]{20,}"/);
+      expect(html, url).toContain('<meta name="theme-color" content="#17324A"/>');
+      expect(html, url).toContain('<link rel="manifest" href="/manifest.webmanifest"/>');
+    }
+    expect(await (await fetch(`${BASE}/sign-in`)).text()).toContain('>Sign in · Keyoff</title>');
+    const manifest = (await (await fetch(`${BASE}/manifest.webmanifest`)).json()) as { name: string; start_url: string; display: string; icons: { src: string; sizes: string }[] };
+    expect(manifest).toMatchObject({ name: 'Keyoff', start_url: '/', display: 'standalone' });
+    expect(manifest.icons.map((i) => i.sizes)).toEqual(['192x192', '512x512']);
+    for (const icon of manifest.icons) {
+      const res = await get(icon.src, 'br');
+      expect(res.status, icon.src).toBe(200);
+      expect(res.headers.get('content-type')).toBe('image/png');
+      expect(res.headers.get('cache-control')).toBe(IMMUTABLE);
+    }
+  });
+
   it('answers a page that changed nothing since the last visit with 304', async () => {
     const first = await get('/sign-in', 'br');
     // (fetch marks a request with its own If-None-Match "no-cache" unless told otherwise, as a browser's cache would not.)

@@ -5,6 +5,7 @@ import { Pressable, Switch, Text, View } from 'react-native';
 
 import { ChoiceField, NumberField } from '@/components/form';
 import { TextField } from '@/components/text-field';
+import { PageTitle } from '@/components/page-title';
 import { Body, Button, Card, Heading, Title } from '@/components/ui';
 import { type RigCreateForm, type RigCreateInput, rigCreateSchema } from '@/shared/schemas/rig';
 import { colors, space, type } from '@/shared/theme';
@@ -43,6 +44,7 @@ export function NewRigScreen({ onCreated }: { onCreated: (rigId: string) => void
   });
   return (
     <View style={{ gap: space.lg }} testID="new-rig-screen">
+      <PageTitle parts={['New rig']} />
       <Title>New rig</Title>
       <Body>The vehicle and its electrical system. You can change every figure later.</Body>
       <Card>
