@@ -8,10 +8,10 @@
 //   worker adds in the background until the network is quiet;
 // - the same Outlook warm (a second visit): time to the headline and the chart, bytes (target 100 KB;
 //   headline within 1.5 s); and the layout shift the chart causes when it arrives (target none).
-// The page's emulated conditions do not reach the requests its service worker makes itself (Chrome 156;
-// attaching to the worker's target and emulating there did not slow them either): the warm visit's API
-// requests go through the worker, so its times are optimistic by up to about two round trips. Bytes are
-// counted at the server and are exact either way.
+// The page's emulated conditions do not reliably reach the requests its service worker makes itself
+// (Chrome 156; emulating on the worker's own target did not change that): the warm visit's API requests go
+// through the worker, so its times may be optimistic by up to about two round trips. Bytes are counted at
+// the server and are exact either way.
 import type { AddressInfo, Socket } from 'node:net';
 import type { BrowserContext, Page } from 'playwright-core';
 import { pino } from 'pino';
