@@ -66,15 +66,21 @@ start_s3() {
 # The web export, rebuilt only when a source it depends on changed.
 build_web() {
   local hash
-  hash=$(cd "$ROOT" && find app features components lib shared assets -type f -print0 | sort -z | xargs -0 sha1sum | cat - app.json package-lock.json tsconfig.json | sha1sum | cut -d' ' -f1)
+  hash=$(cd "$ROOT" && find app features components lib shared assets web -type f -print0 | sort -z | xargs -0 sha1sum |
+    cat - app.json package-lock.json tsconfig.json metro.config.js scripts/finish-web.ts server/web-routes.ts | sha1sum | cut -d' ' -f1)
   if [ -f "$ROOT/dist/index.html" ] && [ "$(cat "$ROOT/dist/.keyoff-build" 2>/dev/null)" = "$hash" ]; then
     say "web build is up to date"
     return
   fi
   say "exporting the web build (expo export --platform web)"
   local t0=$SECONDS
+  # canvaskit.wasm goes out under a name that changes with its content; the chart's loader is built with it.
+  EXPO_PUBLIC_CANVASKIT_WASM="canvaskit.$(sha256sum "$ROOT/public/canvaskit.wasm" | cut -c1-16).wasm"
+  export EXPO_PUBLIC_CANVASKIT_WASM
   (cd "$ROOT" && npx expo export --platform web --output-dir dist >"$ROOT/.data/export.log" 2>&1) || {
     tail -40 "$ROOT/.data/export.log"; say "web export failed"; exit 1; }
+  # Hashed names, icons and manifest, the service worker, then brotli and gzip beside every file.
+  (cd "$ROOT" && npx tsx scripts/finish-web.ts dist) || { say "finishing the web build failed"; exit 1; }
   echo "$hash" >"$ROOT/dist/.keyoff-build"
   say "web export took $((SECONDS - t0)) s"
 }

@@ -1,3 +1,4 @@
+import compression from 'compression';
 import express, { type Express } from 'express';
 import helmet from 'helmet';
 import { pinoHttp } from 'pino-http';
@@ -53,6 +54,10 @@ export function createApp(ctx: AppContext): Express {
   );
   if (config.TRUSTED_ORIGINS.length) app.use('/api', devCors(config.TRUSTED_ORIGINS));
   app.use(pinoHttp({ logger, autoLogging: { ignore: (req) => req.url === '/api/health' } }));
+  // JSON answers go out compressed (brotli or gzip, by the client's Accept-Encoding); a route that sends its
+  // own precompressed body (the Outlook) sets Content-Encoding and is left alone. Static files are
+  // precompressed at build time (server/web.ts).
+  app.use('/api', compression({ threshold: 1024 }));
 
   // Answers of the API carry private data: no browser, proxy or shared computer keeps a copy.
   app.use('/api', (_req, res, next) => {

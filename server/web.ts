@@ -1,71 +1,57 @@
-import { existsSync, readdirSync } from 'node:fs';
+import { existsSync } from 'node:fs';
 import path from 'node:path';
-import express, { type Express } from 'express';
+import type { Express, Response } from 'express';
+import expressStaticGzip from 'express-static-gzip';
 
-/** The static export's HTML files as routes: `rigs/[rigId]/people.html` answers `/rigs/<any>/people`. */
-export function dynamicRoutes(root: string): { pattern: RegExp; file: string; dynamic: number }[] {
-  const out: { pattern: RegExp; file: string; dynamic: number }[] = [];
-  const walk = (dir: string) => {
-    for (const entry of readdirSync(dir, { withFileTypes: true })) {
-      const full = path.join(dir, entry.name);
-      if (entry.isDirectory()) {
-        if (entry.name !== '_expo' && entry.name !== 'assets') walk(full);
-        continue;
-      }
-      // Route groups such as (app) are exported twice; their copies are never addressed.
-      if (!entry.name.endsWith('.html') || !full.includes('[') || path.relative(root, full).includes('(')) continue;
-      const rel = path.relative(root, full).replace(/\.html$/, '').replace(/(^|\/)index$/, '');
-      let dynamic = 0;
-      const source = rel
-        .split('/')
-        .map((seg) => {
-          if (/^\[\.\.\..+\]$/.test(seg)) return (dynamic += 10), '.+';
-          if (/^\[.+\]$/.test(seg)) return (dynamic += 1), '[^/]+';
-          return seg.replace(/[.*+?^${}()|[\]\\]/g, '\\$&');
-        })
-        .join('/');
-      out.push({ pattern: new RegExp(`^/${source}/?$`), file: full, dynamic });
-    }
-  };
-  walk(root);
-  return out.sort((a, b) => a.dynamic - b.dynamic);
+import { webRoutes } from './web-routes';
+
+/** A build file whose name carries its content hash (`entry-<hash>.js`, `canvaskit.<hash>.wasm`). */
+const HASHED = /[.-][0-9a-f]{12,}\.[a-z0-9]+$/i;
+
+/**
+ * How long a browser may keep a file: for good when its name changes with its content, otherwise it asks
+ * again each time (an ETag makes that a 304): HTML, the manifest, the service worker, the favicon.
+ */
+export function cacheControlFor(file: string): string {
+  const name = path.basename(file).replace(/\.(br|gz)$/, '');
+  return HASHED.test(name) ? 'public, max-age=31536000, immutable' : 'no-cache';
 }
 
 /**
- * Serves the static web export (expo export --platform web) from the same origin as the API.
- * Expo writes one HTML file per route; dynamic routes match their [param] files; the rest get the
- * export's not-found page with a 404.
+ * Serves the static web export (expo export --platform web, finished by scripts/finish-web.ts) from the
+ * same origin as the API. Every file goes out precompressed (brotli or gzip, written beside it at build
+ * time) by content negotiation, with `Vary: Accept-Encoding`. Expo writes one HTML file per route; a
+ * clean address is mapped onto its file first, so pages are negotiated like the rest; anything else gets
+ * the export's not-found page with a 404.
  */
 export function serveWeb(app: Express, dist: string) {
   const root = path.resolve(dist);
   if (!existsSync(path.join(root, 'index.html'))) {
     throw new Error(`No web build in ${root}: run \`npm run build:web\` first.`);
   }
-  app.use(
-    express.static(root, {
-      extensions: ['html'],
-      index: 'index.html',
-      setHeaders(res, file) {
-        // Hashed bundles never change; HTML must be revalidated so a new build shows at once.
-        if (file.includes(`${path.sep}_expo${path.sep}`) || file.endsWith('.wasm')) {
-          res.setHeader('Cache-Control', 'public, max-age=31536000, immutable');
-        } else {
-          res.setHeader('Cache-Control', 'no-cache');
-        }
-      },
-    }),
-  );
-  const routes = dynamicRoutes(root);
+  const routes = webRoutes(root);
+  const setHeaders = (res: Response, file: string) => {
+    res.setHeader('Cache-Control', cacheControlFor(file));
+    // The service worker must be able to control every route.
+    if (path.basename(file).startsWith('sw.js')) res.setHeader('Service-Worker-Allowed', '/');
+  };
+  app.use((req, _res, next) => {
+    if ((req.method !== 'GET' && req.method !== 'HEAD') || req.path.startsWith('/api/') || path.extname(req.path)) return next();
+    const match = routes.find((r) => r.pattern.test(req.path));
+    if (match) req.url = '/' + match.file + (req.url.includes('?') ? req.url.slice(req.url.indexOf('?')) : '');
+    next();
+  });
+  app.use(expressStaticGzip(root, { enableBrotli: true, orderPreference: ['br'], index: 'index.html', serveStatic: { setHeaders: setHeaders as never, index: false } }));
   const notFound = path.join(root, '+not-found.html');
   app.use((req, res, next) => {
     if (req.method !== 'GET' && req.method !== 'HEAD') return next();
-    const match = routes.find((r) => r.pattern.test(req.path));
-    if (match) {
-      res.setHeader('Cache-Control', 'no-cache');
-      return res.sendFile(match.file);
-    }
-    res.status(404);
-    if (existsSync(notFound)) res.sendFile(notFound);
-    else res.type('text').send('Not found');
+    res.status(404).setHeader('Cache-Control', 'no-cache');
+    if (!existsSync(notFound)) return res.type('text').send('Not found');
+    res.setHeader('Vary', 'Accept-Encoding');
+    const encoding = req.acceptsEncodings('br', 'gzip', 'identity');
+    const ext = encoding === 'br' ? '.br' : encoding === 'gzip' ? '.gz' : '';
+    if (!ext || !existsSync(notFound + ext)) return res.sendFile(notFound);
+    res.setHeader('Content-Encoding', encoding as string);
+    res.type('html').sendFile(notFound + ext);
   });
 }

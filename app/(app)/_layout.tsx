@@ -2,9 +2,11 @@ import { Slot } from 'expo-router';
 
 import { AccountMenu } from '@/features/auth/components/account-menu';
 import { SessionGate } from '@/features/auth/components/session-gate';
+import { usePrefetchRigFromAddress } from '@/features/rigs/api/prefetch-rig';
 import { AppShell } from '@/features/shell/components/app-shell';
 
 export default function AppLayout() {
+  usePrefetchRigFromAddress();
   return (
     <SessionGate>
       {(me) => (

@@ -1,6 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 
 import { apiFetch } from '@/lib/api-client';
+import { clearOfflineAnswers } from '@/lib/offline';
 import type { ForgotPasswordForm, SignInForm, SignUpForm } from '@/shared/schemas/auth';
 import { meQueryOptions } from './session';
 
@@ -9,8 +10,12 @@ export function useSignInMutation() {
   const client = useQueryClient();
   return useMutation({
     mutationFn: (form: SignInForm) => apiFetch('/api/auth/sign-in/email', { method: 'POST', json: form }),
-    // The new session is in the cache before the screen navigates, so the guard lets it through.
-    onSuccess: () => client.fetchQuery({ ...meQueryOptions(), staleTime: 0 }),
+    // The new session is in the cache before the screen navigates, so the guard lets it through. Answers
+    // kept for offline from an earlier account on this device (one that never signed out) go first.
+    onSuccess: async () => {
+      await clearOfflineAnswers();
+      return client.fetchQuery({ ...meQueryOptions(), staleTime: 0 });
+    },
   });
 }
 

@@ -1,6 +1,7 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 
 import { ApiError, apiFetch } from '@/lib/api-client';
+import { clearOfflineAnswers } from '@/lib/offline';
 
 export type Me = {
   user: { id: string; name: string; email: string; role: 'traveller' | 'advisor' | 'admin' };
@@ -27,6 +28,10 @@ export function useSignOutMutation() {
   const client = useQueryClient();
   return useMutation({
     mutationFn: () => apiFetch('/api/auth/sign-out', { method: 'POST', json: {} }),
-    onSuccess: () => client.clear(),
+    // Even when the request could not go out (offline), this device forgets the account's figures.
+    onSettled: async () => {
+      client.clear();
+      await clearOfflineAnswers();
+    },
   });
 }

@@ -1,6 +1,7 @@
 import type { ReactNode } from 'react';
 import { Image, ScrollView, StyleSheet, Text, View } from 'react-native';
 
+import { PageTitle } from '@/components/page-title';
 import { Card, Title } from '@/components/ui';
 import { colors, space, type } from '@/shared/theme';
 
@@ -9,6 +10,7 @@ const mark = require('@/assets/images/mark.png');
 export function AuthFrame({ title, children, testID }: { title: string; children: ReactNode; testID?: string }) {
   return (
     <ScrollView style={styles.root} contentContainerStyle={styles.inner} testID={testID}>
+      <PageTitle parts={[title]} />
       <View style={styles.brand}>
         <Image source={mark} style={styles.mark} accessibilityLabel="" />
         <Text style={styles.brandName}>Keyoff</Text>

@@ -5,6 +5,7 @@ import type { Comparison, Projection } from '@/shared/energy/project';
 import type { TripOutlook } from '@/shared/energy/trip';
 import type { Load, LoadInput, RigPower } from '@/shared/schemas/projection';
 import type { RigHeader, RigUpdateForm } from '@/shared/schemas/rig';
+import type { TryResult } from '../utils/try-on-device';
 import { rigKeys } from './rig-keys';
 
 export type SavedLoad = Load & { id: string; addedBy: { id: string; name: string } | null };
@@ -47,5 +48,20 @@ export const useLoadUpdateMutation = (rigId: string) =>
   useRigMutation(rigId, ({ id, load }: { id: string; load: LoadInput }) => apiFetch<SavedLoad>(`/api/rigs/${rigId}/loads/${id}`, { method: 'PATCH', json: load }));
 export const useLoadDeleteMutation = (rigId: string) => useRigMutation(rigId, (id: string) => apiFetch(`/api/rigs/${rigId}/loads/${id}`, { method: 'DELETE' }));
 
-export const useTryLoadsMutation = (rigId: string) =>
-  useMutation({ mutationFn: (candidates: LoadInput[]) => apiFetch<Comparison>(`/api/rigs/${rigId}/try`, { method: 'POST', json: { candidates } }) });
+/** Try a load: the server answers; with no connection, the same model runs here on the last saved rig. */
+export const useTryLoadsMutation = (rigId: string) => {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: async (candidates: LoadInput[]): Promise<TryResult> => {
+      try {
+        return { ...(await apiFetch<Comparison>(`/api/rigs/${rigId}/try`, { method: 'POST', json: { candidates } })), onDevice: false };
+      } catch (err) {
+        if (!(err instanceof ApiError && err.code === 'offline')) throw err;
+        const rig = await client.ensureQueryData(rigQueryOptions(rigId));
+        // The model loads only when needed (its own chunk, which the service worker keeps for offline).
+        const { tryOnDevice } = await import('../utils/try-on-device');
+        return { ...tryOnDevice(rig, candidates), onDevice: true };
+      }
+    },
+  });
+};

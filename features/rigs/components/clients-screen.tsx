@@ -3,6 +3,7 @@ import { ActivityIndicator, Pressable, StyleSheet, Text, View } from 'react-nati
 
 import { formatDays, formatWhen } from '@/components/format';
 import { MarginBadge } from '@/components/margin-badge';
+import { PageTitle } from '@/components/page-title';
 import { Body, Card, Heading, Small, Title } from '@/components/ui';
 import { useIsWide } from '@/components/use-layout';
 import { colors, radius, space, type } from '@/shared/theme';
@@ -48,6 +49,7 @@ export function ClientsScreen({ onOpen, renderNotes }: Props) {
   }
   return (
     <View style={{ gap: space.lg }} testID="clients-screen">
+      <PageTitle parts={['Clients']} />
       <Title>Clients</Title>
       <Small>Rigs whose households invited you as their advisor: Short first, then Tight, then Comfortable.</Small>
       {clients.data.length ? null : (

@@ -5,6 +5,7 @@ import { Pressable, StyleSheet, Switch, Text, View } from 'react-native';
 
 import { ChoiceField, NumberField } from '@/components/form';
 import { TextField } from '@/components/text-field';
+import { PageTitle } from '@/components/page-title';
 import { Body, Button, Card, Heading, Small, Title } from '@/components/ui';
 import { useIsWide } from '@/components/use-layout';
 import type { Device } from '@/shared/devices';
@@ -65,6 +66,7 @@ export function NewRigScreen({ onCreated }: { onCreated: (rigId: string) => void
   const col = wide ? styles.col : undefined;
   return (
     <View style={{ gap: space.lg }} testID="new-rig-screen">
+      <PageTitle parts={['New rig']} />
       <Title>New rig</Title>
       <Body>What the forecast needs to know about the vehicle. Every figure below is used as shown; change any of them now or later on Power.</Body>
       <View style={[styles.cols, wide && styles.colsWide]}>

@@ -3,6 +3,7 @@ import { ActivityIndicator, StyleSheet, Text, View } from 'react-native';
 
 import { formatDays } from '@/components/format';
 import { MarginBadge } from '@/components/margin-badge';
+import { OfflineNotice } from '@/components/offline-notice';
 import { Body, Button, Card, Heading, Small } from '@/components/ui';
 import { formatEnergy, useUnits } from '@/components/units';
 import { useIsWide } from '@/components/use-layout';
@@ -42,6 +43,7 @@ export function OutlookScreen({ rigId, narrow = false }: { rigId: string; narrow
   const o = outlook.data;
   return (
     <View style={{ gap: space.lg }} testID="outlook-screen">
+      <OfflineNotice path={`/api/rigs/${rigId}/outlook`} />
       <View style={[styles.figures, wide && { flexWrap: 'nowrap' }]}>
         <Figure label="Days parked" value={formatDays(o.parked.daysToCutoff, o.margin.coveredDays)} hint="to the cut-off, not driving at all" testID="figure-days-parked" />
         <Figure

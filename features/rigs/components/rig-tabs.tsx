@@ -1,6 +1,7 @@
 import { Link, type Href, usePathname } from 'expo-router';
 import { Pressable, ScrollView, StyleSheet, Text, View } from 'react-native';
 
+import { PageTitle } from '@/components/page-title';
 import { Small, Title } from '@/components/ui';
 import { colors, radius, space, type } from '@/shared/theme';
 import { useRigQuery } from '../api/rig';
@@ -23,8 +24,10 @@ export function RigTabs({ rigId, unreadNotes = 0 }: { rigId: string; unreadNotes
     { href: { pathname: '/rigs/[rigId]/history', params: { rigId } }, label: 'History', path: `/rigs/${rigId}/history` },
     { href: { pathname: '/rigs/[rigId]/reports', params: { rigId } }, label: 'Reports', path: `/rigs/${rigId}/reports` },
   ];
+  const current = tabs.find((t) => t.path === pathname);
   return (
     <View style={{ gap: space.sm }}>
+      <PageTitle parts={[current?.label.replace(/ \(.*\)$/, ''), rig.data?.name]} />
       <Title>{rig.data?.name ?? ' '}</Title>
       {rig.data ? (
         <Small>

@@ -3,6 +3,8 @@ import { ActivityIndicator, Pressable, StyleSheet, Text, View } from 'react-nati
 
 import { formatDays, formatWhen } from '@/components/format';
 import { MarginBadge } from '@/components/margin-badge';
+import { OfflineNotice } from '@/components/offline-notice';
+import { PageTitle } from '@/components/page-title';
 import { Body, Button, Card, Heading, Small, Title } from '@/components/ui';
 import { useIsWide } from '@/components/use-layout';
 import { colors, space, type } from '@/shared/theme';
@@ -15,10 +17,12 @@ export function RigsScreen({ onNewRig }: { onNewRig?: () => void }) {
   const wide = useIsWide();
   return (
     <View style={styles.root} testID="home-screen">
+      <PageTitle parts={['Rigs']} />
       <View style={styles.header}>
         <Title>Your rigs</Title>
         {onNewRig ? <Button testID="new-rig" label="New rig" onPress={onNewRig} /> : null}
       </View>
+      <OfflineNotice path="/api/rigs" />
       {rigs.isPending ? (
         <ActivityIndicator color={colors.night} />
       ) : rigs.isError ? (

@@ -50,6 +50,11 @@ export function TryScreen({ rigId }: { rigId: string }) {
         {result && candidate ? (
           <Card testID="try-result">
             <Heading>With {candidate.name}</Heading>
+            {result.onDevice ? (
+              <Small testID="try-on-device" style={{ color: colors.inkSoft }}>
+                Worked out on this device (no connection), from the rig as last saved here. The server works it out again when you are back online.
+              </Small>
+            ) : null}
             <View style={styles.sides}>
               <Side title="Now" side={result.without} horizon={horizon} />
               <Side title={`With ${candidate.name}`} side={result.with} horizon={horizon} testID="with" />

@@ -1,5 +1,6 @@
 import { Pressable, StyleSheet, Text, View } from 'react-native';
 
+import { PageTitle } from '@/components/page-title';
 import { Body, Card, Heading, Small, Title } from '@/components/ui';
 import { type Units, useUnits } from '@/components/units';
 import { colors, space, type } from '@/shared/theme';
@@ -18,6 +19,7 @@ export function SettingsScreen({ isAdmin = false }: { isAdmin?: boolean }) {
   const { units, setUnits } = useUnits();
   return (
     <View style={{ gap: space.lg }} testID="settings-screen">
+      <PageTitle parts={['Settings']} />
       <Title>Settings</Title>
       <EmailPrefsCard />
       <Card>

@@ -1,9 +1,11 @@
-import type { ReactNode } from 'react';
+import { type ReactNode, useEffect } from 'react';
 import { Image, Pressable, ScrollView, StyleSheet, Text, View } from 'react-native';
 import { Link, usePathname, type Href } from 'expo-router';
+import { useQueryClient } from '@tanstack/react-query';
 import { SafeAreaView } from 'react-native-safe-area-context';
 
 import { useIsWide } from '@/components/use-layout';
+import { registerServiceWorker } from '@/lib/service-worker';
 import { colors, space, type } from '@/shared/theme';
 
 const mark = require('@/assets/images/mark.png');
@@ -20,6 +22,9 @@ const destinations: { href: Href; label: string; advisorOnly?: boolean }[] = [
 export function AppShell({ children, account, accountCompact, advisor = false }: { children: ReactNode; account?: ReactNode; accountCompact?: ReactNode; advisor?: boolean }) {
   const wide = useIsWide();
   const pathname = usePathname();
+  const queryClient = useQueryClient();
+  // Only signed in: what is kept for offline is the signed-in app (the sign-in screen stays light).
+  useEffect(() => registerServiceWorker(() => void queryClient.invalidateQueries()), [queryClient]);
 
   const nav = destinations.filter((d) => advisor || !d.advisorOnly).map((d) => {
     const active = pathname === d.href;
