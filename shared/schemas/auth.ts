@@ -1,5 +1,7 @@
 import { z } from 'zod';
 
+import './error-map';
+
 // The sign-in forms' schemas (better-auth validates again on the server).
 export const emailSchema = z.email('Enter an e-mail address.').max(254);
 export const passwordSchema = z.string().min(10, 'Use at least 10 characters.').max(128, 'Use at most 128 characters.');

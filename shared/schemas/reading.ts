@@ -1,8 +1,10 @@
 import { z } from 'zod';
 
+import './error-map';
+
 import { chemistrySchema } from './projection';
 
-const num = (min: number, max: number) => z.number({ error: 'Enter a number.' }).finite('Enter a number.').min(min, `At least ${min}.`).max(max, `At most ${max}.`);
+const num = (min: number, max: number) => z.number().finite().min(min).max(max);
 const isoTime = z.iso.datetime({ offset: true, error: 'A time such as 2026-12-01T18:30:00Z.' });
 
 export const readingPlaceSchema = z.enum(['terminals', 'device', 'ground']);
@@ -15,7 +17,7 @@ export const readingSchema = z.strictObject({
   socPercent: num(0, 100).optional(),
   rested: z.boolean().default(false),
   place: readingPlaceSchema.default('terminals'),
-  note: z.string().trim().max(500, 'At most 500 characters.').default(''),
+  note: z.string().trim().max(500).default(''),
 });
 export type ReadingForm = z.input<typeof readingSchema>;
 export type ReadingInputParsed = z.infer<typeof readingSchema>;
@@ -59,12 +61,12 @@ export const logUploadFieldsSchema = z.object({
   rested: z.enum(['true', 'false']).default('false').transform((v) => v === 'true'),
 });
 
-export const photoFieldsSchema = z.object({ caption: z.string().trim().max(200, 'At most 200 characters.').default('') });
+export const photoFieldsSchema = z.object({ caption: z.string().trim().max(200).default('') });
 
 export const voltageDropSchema = z.strictObject({
   batteryV: num(0, 80),
   pointV: num(0, 80),
-  currentA: z.number({ error: 'Enter a number.' }).finite().gt(0, 'The test needs a current flowing: more than 0 A.').max(1000),
+  currentA: z.number().finite().gt(0, 'The test needs a current flowing: more than 0 A.').max(1000),
   cableRunId: z.uuid().optional(),
 });
 export type VoltageDropForm = z.input<typeof voltageDropSchema>;

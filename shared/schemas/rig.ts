@@ -1,5 +1,7 @@
 import { z } from 'zod';
 
+import './error-map';
+
 import type { HouseholdRole } from '../permissions';
 import { loadSchema, rigPowerSchema } from './projection';
 

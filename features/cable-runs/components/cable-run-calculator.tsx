@@ -2,8 +2,8 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
 import { StyleSheet, Text, View } from 'react-native';
 
-import { ChoiceField, NumberField, SwitchField } from '@/components/form';
-import { Body, Button, Card, Heading, Small, Title } from '@/components/ui';
+import { ChoiceField, Form, NumberField, SubmitButton, SwitchField } from '@/components/form';
+import { Body, Card, Heading, Small, Title } from '@/components/ui';
 import { useIsWide } from '@/components/use-layout';
 import type { CableRunResult } from '@/shared/energy/wiring';
 import { type CableRunSizeForm, type CableRunSizeInput, cableRunSizeSchema } from '@/shared/schemas/cable-run';
@@ -30,6 +30,7 @@ export function CableRunCalculator() {
   const onSubmit = form.handleSubmit((values) => mutation.mutate(values));
 
   return (
+    <Form control={form.control} onSubmit={onSubmit} busy={mutation.isPending}>
     <View style={styles.root} testID="cable-run-calculator">
       <Title>Cable run</Title>
       <Body>Size the wire and the fuse or breaker for one circuit from the battery to a device.</Body>
@@ -49,7 +50,7 @@ export function CableRunCalculator() {
           <SwitchField control={form.control} name="engineSpace" label="Runs through the engine space" />
           <SwitchField control={form.control} name="continuous" label="Continuous load (3 hours or more)" />
           <ChoiceField control={form.control} name="purpose" label="What it feeds" options={[{ value: 'general', label: 'A device' }, { value: 'inverter', label: 'An inverter' }]} />
-          <Button testID="size-run" label="Size this run" onPress={onSubmit} busy={mutation.isPending} />
+          <SubmitButton testID="size-run" label="Size this run" />
           {mutation.isError ? (
             <Text role="alert" style={styles.error}>
               {mutation.error.message}
@@ -61,6 +62,7 @@ export function CableRunCalculator() {
         </View>
       </View>
     </View>
+    </Form>
   );
 }
 

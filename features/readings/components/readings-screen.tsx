@@ -5,7 +5,8 @@ import { ActivityIndicator, Image, Pressable, StyleSheet, Text, View } from 'rea
 import { z } from 'zod';
 
 import { FilePicker } from '@/components/file-picker';
-import { ChoiceField, NumberField, showApiErrors, SwitchField } from '@/components/form';
+import { ChoiceField, Form, NumberField, showApiErrors, SubmitButton, SwitchField } from '@/components/form';
+import { DateTimeField, localDateTime } from '@/components/pickers';
 import { TextField } from '@/components/text-field';
 import { Body, Button, Card, Heading, Small } from '@/components/ui';
 import { useIsWide } from '@/components/use-layout';
@@ -154,14 +155,12 @@ function AnalysisCard({ readings, canEdit, onAdoptKeyOff }: { readings: Readings
   );
 }
 
-const spotForm = readingSchema.extend({ at: z.string().min(1, 'When was it measured?') });
+const spotForm = readingSchema.extend({ at: z.string().min(1, 'When: pick the date and time of the reading.') });
 type SpotForm = z.input<typeof spotForm>;
 
 function SpotReadingCard({ rigId }: { rigId: string }) {
   const save = useSpotReadingMutation(rigId);
-  const now = new Date();
-  const pad = (n: number) => String(n).padStart(2, '0');
-  const localNow = `${now.getFullYear()}-${pad(now.getMonth() + 1)}-${pad(now.getDate())}T${pad(now.getHours())}:${pad(now.getMinutes())}`;
+  const localNow = localDateTime(new Date());
   const { control, handleSubmit, reset, setError } = useForm<SpotForm>({
     resolver: zodResolver(spotForm),
     defaultValues: { at: localNow, voltageV: Number.NaN, rested: false, place: 'terminals', note: '' },
@@ -169,7 +168,7 @@ function SpotReadingCard({ rigId }: { rigId: string }) {
   const submit = handleSubmit(async (v) => {
     // Without a zone the browser reads it as local time, as the label says.
     const at = new Date(v.at);
-    if (Number.isNaN(at.getTime())) return setError('at', { message: 'A date and time such as 2026-12-01 18:30.' });
+    if (Number.isNaN(at.getTime())) return setError('at', { message: 'When: pick the date and time of the reading.' });
     try {
       await save.mutateAsync({ ...(v as ReadingForm), at: at.toISOString() });
       reset({ ...v, voltageV: Number.NaN, currentA: undefined, note: '' });
@@ -178,9 +177,10 @@ function SpotReadingCard({ rigId }: { rigId: string }) {
     }
   });
   return (
+    <Form control={control} onSubmit={submit} busy={save.isPending}>
     <Card testID="spot-form">
       <Heading>Add a reading</Heading>
-      <TextField control={control} name="at" label="When (your local time)" placeholder="2026-12-01T18:30" autoCapitalize="none" />
+      <DateTimeField control={control} name="at" label="When (your local time)" />
       <NumberField control={control} name="voltageV" label="Battery voltage" unit="V" />
       <NumberField control={control} name="currentA" label="Current (optional, + when drawn)" unit="A" />
       <SwitchField control={control} name="rested" label="Rested" hint="No charging and nothing switched on for two hours or more." />
@@ -194,9 +194,10 @@ function SpotReadingCard({ rigId }: { rigId: string }) {
           { value: 'ground', label: 'A ground point' },
         ]}
       />
-      <TextField control={control} name="note" label="Note (optional)" />
-      <Button label="Save reading" onPress={submit} busy={save.isPending} testID="save-reading" />
+      <TextField control={control} name="note" label="Note (optional)" maxLength={500} />
+      <SubmitButton label="Save reading" testID="save-reading" />
     </Card>
+    </Form>
   );
 }
 
@@ -389,6 +390,7 @@ function DropTestCard({ rigId, cableRuns }: { rigId: string; cableRuns: { id: st
   });
   const submit = handleSubmit((v) => test.mutate({ batteryV: v.batteryV, pointV: v.pointV, currentA: v.currentA, ...(v.run ? { cableRunId: v.run } : {}) }));
   return (
+    <Form control={control} onSubmit={submit} busy={test.isPending}>
     <Card testID="drop-test">
       <Heading>Voltage-drop test</Heading>
       <Small>With a known current flowing (the device on), measure at the battery posts and at the device or its ground point.</Small>
@@ -396,7 +398,7 @@ function DropTestCard({ rigId, cableRuns }: { rigId: string; cableRuns: { id: st
       <NumberField control={control} name="pointV" label="At the device or ground point" unit="V" />
       <NumberField control={control} name="currentA" label="Current flowing" unit="A" />
       {cableRuns.length ? <ChoiceField control={control} name="run" label="Cable run" options={[{ value: '', label: 'None' }, ...cableRuns.map((r) => ({ value: r.id, label: r.label }))]} /> : null}
-      <Button label="Check the connection" onPress={submit} busy={test.isPending} testID="run-drop-test" />
+      <SubmitButton label="Check the connection" testID="run-drop-test" />
       {test.data ? (
         <View role="status" style={{ gap: 2 }}>
           <Body style={test.data.flagged ? { color: colors.short } : undefined}>{test.data.message}</Body>
@@ -407,6 +409,7 @@ function DropTestCard({ rigId, cableRuns }: { rigId: string; cableRuns: { id: st
       ) : null}
       {test.error ? <Text role="alert" style={styles.error}>{test.error.message}</Text> : null}
     </Card>
+    </Form>
   );
 }
 
@@ -416,7 +419,7 @@ const styles = StyleSheet.create({
   row: { gap: 2, paddingVertical: space.sm, borderTopWidth: 1, borderTopColor: colors.line },
   label: { ...type.heading, fontSize: 15, color: colors.ink },
   chips: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm },
-  chip: { borderWidth: 1, borderColor: colors.line, borderRadius: 999, paddingHorizontal: space.md, paddingVertical: space.xs + 2, backgroundColor: colors.card, alignSelf: 'flex-start' },
+  chip: { minHeight: 44, minWidth: 44, justifyContent: 'center', borderWidth: 1, borderColor: colors.inkSoft, borderRadius: 999, paddingHorizontal: space.md, paddingVertical: space.xs, backgroundColor: colors.card, alignSelf: 'flex-start' },
   chipOn: { backgroundColor: colors.night, borderColor: colors.night },
   chipText: { ...type.small, color: colors.ink, fontFamily: 'Nunito_700Bold' },
   chipTextOn: { color: colors.paper },

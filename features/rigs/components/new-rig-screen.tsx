@@ -1,11 +1,12 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
 import { useState } from 'react';
-import { Pressable, Switch, Text, View } from 'react-native';
+import { Pressable, Text, View } from 'react-native';
 
-import { ChoiceField, NumberField } from '@/components/form';
+import { ChoiceField, Form, NumberField, SubmitButton } from '@/components/form';
 import { TextField } from '@/components/text-field';
-import { Body, Button, Card, Heading, Title } from '@/components/ui';
+import { Toggle } from '@/components/toggle';
+import { Body, Card, Heading, Title } from '@/components/ui';
 import { type RigCreateForm, type RigCreateInput, rigCreateSchema } from '@/shared/schemas/rig';
 import { colors, space, type } from '@/shared/theme';
 import { useRigCreateMutation } from '../api/create-rig';
@@ -42,13 +43,14 @@ export function NewRigScreen({ onCreated }: { onCreated: (rigId: string) => void
     create.mutate({ ...values, loads }, { onSuccess: (r) => onCreated(r.id) });
   });
   return (
+    <Form control={form.control} onSubmit={onSubmit} busy={create.isPending}>
     <View style={{ gap: space.lg }} testID="new-rig-screen">
       <Title>New rig</Title>
       <Body>The vehicle and its electrical system. You can change every figure later.</Body>
       <Card>
         <Heading>Vehicle</Heading>
-        <TextField control={form.control} name="name" label="Name" placeholder="Wren" />
-        <TextField control={form.control} name="vehicle" label="Vehicle" placeholder="Long-wheelbase panel van" />
+        <TextField control={form.control} name="name" label="Name" hint="What you call this vehicle." maxLength={60} />
+        <TextField control={form.control} name="vehicle" label="Vehicle (optional)" hint="Its make, model or kind." maxLength={120} />
       </Card>
       <Card>
         <Heading>Battery</Heading>
@@ -68,10 +70,7 @@ export function NewRigScreen({ onCreated }: { onCreated: (rigId: string) => void
       </Card>
       <Card>
         <Heading>Inverter</Heading>
-        <View style={{ flexDirection: 'row', alignItems: 'center', gap: space.md }}>
-          <Text style={{ ...type.heading, fontSize: 15, flex: 1, color: colors.ink }}>The rig has an inverter</Text>
-          <Switch testID="field-has-inverter" aria-label="The rig has an inverter" value={hasInverter} onValueChange={toggleInverter} />
-        </View>
+        <Toggle testID="field-has-inverter" label="The rig has an inverter" value={hasInverter} onChange={toggleInverter} />
         {hasInverter ? (
           <>
             <NumberField control={form.control} name="power.inverter.ratedW" label="Rating" unit="W" />
@@ -102,8 +101,8 @@ export function NewRigScreen({ onCreated }: { onCreated: (rigId: string) => void
           const on = ticked.has(c.key);
           const needsInverter = c.load.supply === 'ac' && !hasInverter;
           return (
-            <Pressable key={c.key} role="checkbox" aria-checked={on} aria-disabled={needsInverter} disabled={needsInverter} onPress={() => tick(c.key)} testID={`tick-${c.key}`} style={{ flexDirection: 'row', gap: space.sm, alignItems: 'center', opacity: needsInverter ? 0.5 : 1 }}>
-              <Text style={{ ...type.heading, color: on ? colors.night : colors.inkSoft, width: 22 }}>{on ? '☑' : '☐'}</Text>
+            <Pressable key={c.key} role="checkbox" aria-checked={on} aria-disabled={needsInverter} disabled={needsInverter} onPress={() => tick(c.key)} testID={`tick-${c.key}`} style={{ flexDirection: 'row', gap: space.sm, alignItems: 'center', minHeight: 44, opacity: needsInverter ? 0.6 : 1 }}>
+              <Text aria-hidden style={{ ...type.title, color: on ? colors.night : colors.inkSoft, width: 32, textAlign: 'center' }}>{on ? '☑' : '☐'}</Text>
               <Text style={{ ...type.body, color: colors.ink, flex: 1 }}>
                 {c.label}
                 {needsInverter ? ' (needs an inverter)' : ''}
@@ -117,8 +116,9 @@ export function NewRigScreen({ onCreated }: { onCreated: (rigId: string) => void
           {create.error.message}
         </Text>
       ) : null}
-      <Button testID="create-rig" label="Create rig" onPress={onSubmit} busy={create.isPending} />
+      <SubmitButton testID="create-rig" label="Create rig" />
     </View>
+    </Form>
   );
 }
 

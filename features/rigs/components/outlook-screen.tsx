@@ -3,7 +3,7 @@ import { ActivityIndicator, StyleSheet, Text, View } from 'react-native';
 import { formatDays } from '@/components/format';
 import { MarginBadge } from '@/components/margin-badge';
 import { Body, Button, Card, Heading, Small } from '@/components/ui';
-import { formatEnergy, useUnits } from '@/components/units';
+import { energyInText, formatEnergy, useUnits } from '@/components/units';
 import { useIsWide } from '@/components/use-layout';
 import { FIX_WIRING_CAUTION, needsWiringCaution } from '@/shared/safety';
 import { colors, radius, space, type } from '@/shared/theme';
@@ -23,6 +23,7 @@ const FIX_TITLE: Record<string, string> = {
 /** `narrow`: lay out as on a phone even on a wide screen (the Outlook shares the width with Notes on Clients). */
 export function OutlookScreen({ rigId, narrow = false }: { rigId: string; narrow?: boolean }) {
   const outlook = useOutlookQuery(rigId);
+  const { units } = useUnits();
   const wide = useIsWide() && !narrow;
   if (outlook.isPending) return <ActivityIndicator color={colors.night} />;
   if (outlook.isError)
@@ -50,7 +51,7 @@ export function OutlookScreen({ rigId, narrow = false }: { rigId: string; narrow
             <Heading>State of charge, {o.horizonDays} days</Heading>
             <SocChart series={o.series} cutoffSocPercent={o.cutoffSocPercent} />
             <Small>
-              Dark line: on your routine. Grey: parked. Red line: cut-off at {o.cutoffSocPercent} %. Amber bands: driving.
+              Solid dark line: on your routine. Dashed grey line: parked. Red line: cut-off at {o.cutoffSocPercent} %. Amber bands: driving. A line stops once the battery is flat.
             </Small>
           </Card>
           {o.warnings.length ? (
@@ -58,7 +59,7 @@ export function OutlookScreen({ rigId, narrow = false }: { rigId: string; narrow
               <Heading>Warnings</Heading>
               {o.warnings.map((w) => (
                 <Body key={w.code} style={{ color: colors.short }}>
-                  ▲ {w.message}
+                  ▲ {energyInText(w.message, units, o.assumptions.systemVoltage as number | undefined)}
                 </Body>
               ))}
             </Card>
@@ -117,6 +118,8 @@ function Drains({ outlook }: { outlook: Outlook }) {
 }
 
 function Fixes({ outlook }: { outlook: Outlook }) {
+  const { units } = useUnits();
+  const V = outlook.assumptions.systemVoltage as number | undefined;
   return (
     <Card testID="fixes">
       <Heading>Fixes</Heading>
@@ -127,8 +130,8 @@ function Fixes({ outlook }: { outlook: Outlook }) {
             {FIX_TITLE[f.kind] ?? f.kind}: {f.holds ? 'the routine holds' : `+${f.daysGainedRoutine.toFixed(1)} days on your routine`}
             {f.daysGainedParked > 0 ? `, +${f.daysGainedParked.toFixed(1)} days parked` : ''}
           </Text>
-          <Body>{f.summary}</Body>
-          <Small>Cost in convenience: {f.convenience}</Small>
+          <Body>{energyInText(f.summary, units, V)}</Body>
+          <Small>Cost in convenience: {energyInText(f.convenience, units, V)}</Small>
         </View>
       ))}
       {needsWiringCaution(outlook.fixes) ? (

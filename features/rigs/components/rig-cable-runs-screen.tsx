@@ -3,7 +3,8 @@ import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { ActivityIndicator, Pressable, StyleSheet, Text, View } from 'react-native';
 
-import { ChoiceField, NumberField, SwitchField } from '@/components/form';
+import { ChoiceField, Form, NumberField, SubmitButton, SwitchField } from '@/components/form';
+import { ChipGroup } from '@/components/chips';
 import { TextField } from '@/components/text-field';
 import { Body, Button, Card, Heading, Small } from '@/components/ui';
 import { useUnits } from '@/components/units';
@@ -126,20 +127,20 @@ function RunForm(props: { initial: CableRunForm; loads: { value: string; label: 
     }
   };
   return (
+    <Form control={form.control} onSubmit={form.handleSubmit(props.onSubmit)} busy={props.busy}>
     <Card testID="run-form">
       <Heading>{props.initial.label ? `Edit ${props.initial.label}` : 'Add a cable run'}</Heading>
-      <TextField control={form.control} name="label" label="Name" placeholder="Inverter feed" />
-      <TextField control={form.control} name="to" label="To" placeholder="Inverter" />
+      <TextField control={form.control} name="label" label="Name" hint="Which circuit, as you call it." maxLength={80} />
+      <TextField control={form.control} name="to" label="To" hint="The device at the end of the wire." maxLength={80} />
       <NumberField control={form.control} name="lengthM" label="Length, one way" unit="m" />
       {props.loads.length ? (
-        <View style={{ flexDirection: 'row', gap: space.sm }}>
-          <Pressable role="radio" aria-checked={!fromLoad} onPress={() => chooseSource(false)} style={[styles.chip, !fromLoad && styles.chipOn]}>
-            <Text style={[styles.chipText, !fromLoad && styles.chipTextOn]}>Enter the current</Text>
-          </Pressable>
-          <Pressable role="radio" aria-checked={fromLoad} onPress={() => chooseSource(true)} style={[styles.chip, fromLoad && styles.chipOn]} testID="run-from-load">
-            <Text style={[styles.chipText, fromLoad && styles.chipTextOn]}>Take a load&apos;s current</Text>
-          </Pressable>
-        </View>
+        <ChipGroup
+          label="The run's current"
+          options={[{ value: 'typed', label: 'Enter the current' }, { value: 'load', label: "Take a load's current" }]}
+          value={fromLoad ? 'load' : 'typed'}
+          onChange={(v) => chooseSource(v === 'load')}
+          testIDPrefix="run-from"
+        />
       ) : null}
       {fromLoad ? <ChoiceField control={form.control} name="loadId" label="Load" options={props.loads} /> : <NumberField control={form.control} name="currentA" label="Current" unit="A" />}
       <NumberField control={form.control} name="maxDropPercent" label="Allowed drop" unit="%" hint="3 % for electronics and feeds, 10 % for other loads (ABYC E-11)." />
@@ -155,11 +156,9 @@ function RunForm(props: { initial: CableRunForm; loads: { value: string; label: 
         options={[{ value: undefined as unknown as '10', label: 'None' }, ...(['16', '14', '12', '10', '8', '6', '4', '2'] as const).map((a) => ({ value: a, label: `${a} AWG` }))]}
       />
       {props.error ? <Text role="alert" style={styles.warning}>{props.error}</Text> : null}
-      <View style={{ flexDirection: 'row', gap: space.md }}>
-        <Button testID="run-submit" label="Save" onPress={form.handleSubmit(props.onSubmit)} busy={props.busy} />
-        <Button label="Cancel" onPress={props.onCancel} />
-      </View>
+      <SubmitButton testID="run-submit" label="Save" extra={<Button tone="secondary" label="Cancel" onPress={props.onCancel} />} />
     </Card>
+    </Form>
   );
 }
 
@@ -169,7 +168,7 @@ const styles = StyleSheet.create({
   name: { ...type.heading, fontSize: 15, color: colors.ink },
   figures: { ...type.body, color: colors.night, fontFamily: 'Nunito_700Bold' },
   warning: { ...type.small, color: colors.short, fontFamily: 'Nunito_700Bold' },
-  chip: { borderWidth: 1, borderColor: colors.line, borderRadius: 999, paddingHorizontal: space.md, paddingVertical: space.xs },
+  chip: { minHeight: 44, minWidth: 44, justifyContent: 'center', borderWidth: 1, borderColor: colors.inkSoft, borderRadius: 999, paddingHorizontal: space.md, paddingVertical: space.xs },
   chipOn: { backgroundColor: colors.night, borderColor: colors.night },
   chipText: { ...type.small, color: colors.ink, fontFamily: 'Nunito_700Bold' },
   chipTextOn: { color: colors.paper },
