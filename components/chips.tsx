@@ -7,7 +7,7 @@ import { Pressable, StyleSheet, Text, View } from 'react-native';
 import { colors, space, type } from '@/shared/theme';
 import { FieldNote, isFocused, type KeyEvent, onKeys, useFormFrame } from './form-frame';
 
-export type ChipOption<V> = { value: V; label: string };
+export type ChipOption<V> = { value: V; label: string; testID?: string };
 
 export function ChipGroup<V extends string | number | null>({
   label,
@@ -83,7 +83,7 @@ export function ChipGroup<V extends string | number | null>({
               aria-disabled={disabled || undefined}
               disabled={disabled}
               tabIndex={i === tabStop ? 0 : -1}
-              testID={`${testIDPrefix}-${o.value}`}
+              testID={o.testID ?? `${testIDPrefix}-${o.value}`}
               onPress={() => onChange(o.value)}
               {...onKeys(onKey(i))}
               style={(state) => [styles.chip, on && styles.chipOn, isFocused(state) && styles.chipFocused, disabled && !on && styles.chipOff]}

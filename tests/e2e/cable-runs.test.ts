@@ -47,7 +47,7 @@ describe('the cable-run calculator', () => {
     await fill(page, 'field-currentA', 'abc');
     await page.getByTestId('size-run').click();
     await page.getByText('The length must be more than 0 m.').waitFor();
-    await page.getByText('Enter a number.').waitFor();
+    await page.getByText('Current needs a number.').first().waitFor();
     expect(posted).toBe(0);
     await page.screenshot({ path: path.join(SHOTS, 'cable-runs-phone-errors.png'), fullPage: true });
     await page.close();

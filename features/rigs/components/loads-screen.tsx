@@ -79,7 +79,7 @@ export function LoadsScreen({ rigId }: { rigId: string }) {
         <ChipGroup
           label="Show loads added by"
           showLabel={false}
-          options={[{ value: null, label: 'Everyone' }, ...members.map(([id, name]) => ({ value: id as string | null, label: name }))]}
+          options={[{ value: null, label: 'Everyone', testID: 'filter-Everyone' }, ...members.map(([id, name]) => ({ value: id as string | null, label: name, testID: `filter-${name}` }))]}
           value={member}
           onChange={setMember}
           testIDPrefix="filter"
