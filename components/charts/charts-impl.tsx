@@ -33,9 +33,12 @@ function SocChartImpl({ series, cutoffSocPercent }: SocChartProps) {
         xKey="hour"
         yKeys={['soc', 'parked']}
         domain={{ x: [0, hours], y: [0, 100] }}
+        // A little room below 0 % and above 100 %, so both labels show clear of the edges.
+        domainPadding={{ top: 8, bottom: 8 }}
         padding={{ left: 4, right: 12, top: 12, bottom: 4 }}
-        xAxis={{ font: axisFont, tickValues: ticks.map((t) => t.hour), formatXLabel: (h) => ticks.find((t) => t.hour === Number(h))?.label ?? '', labelColor: colors.inkSoft, lineColor: colors.line }}
-        yAxis={[{ font: axisFont, tickValues: [0, 25, 50, 75, 100], formatYLabel: (v) => `${v} %`, labelColor: colors.ink, lineColor: colors.line }]}
+        // tickCount as many as the ticks: victory-native thins tickValues down to tickCount otherwise.
+        xAxis={{ font: axisFont, tickValues: ticks.map((t) => t.hour), tickCount: Math.max(1, ticks.length), formatXLabel: (h) => ticks.find((t) => t.hour === Number(h))?.label ?? '', labelColor: colors.inkSoft, lineColor: colors.line }}
+        yAxis={[{ font: axisFont, tickValues: [0, 25, 50, 75, 100], tickCount: 5, formatYLabel: (v) => `${v} %`, labelColor: colors.ink, lineColor: colors.line }]}
       >
         {({ points, chartBounds, xScale, yScale }) => {
           const y = yScale(cutoffSocPercent);

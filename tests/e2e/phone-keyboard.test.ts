@@ -69,7 +69,7 @@ describe.each(SIZES)('at %s size', (size, viewport) => {
       expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(PHONE.width);
     } else {
       await page.getByRole('table').waitFor();
-      expect(await page.getByRole('columnheader').count()).toBe(8);
+      expect(await page.getByRole('columnheader').count()).toBe(9);
     }
     for (const id of ['edit-Compressor fridge (40 L)', 'delete-Compressor fridge (40 L)', 'filter-Everyone']) {
       const box = (await page.getByTestId(id).boundingBox())!;

@@ -9,7 +9,7 @@ let fx: Awaited<ReturnType<typeof householdFixture>>;
 beforeAll(async () => {
   ctx = await makeTestApp();
   fx = await householdFixture(ctx);
-});
+}, 60_000);
 afterAll(async () => {
   await ctx.jobs.stop();
   await ctx.db.destroy();

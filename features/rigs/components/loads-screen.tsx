@@ -118,20 +118,24 @@ export function LoadsScreen({ rigId }: { rigId: string }) {
                   </Text>
                 </Pressable>
               ))}
-              {canEdit ? <View style={{ width: 200 }} /> : null}
+              {canEdit ? (
+                <View role="columnheader" style={{ width: 200, justifyContent: 'center' }}>
+                  <Text style={styles.th}>Change</Text>
+                </View>
+              ) : null}
             </View>
             {rows.map(({ load, amps, ah, share }) => (
               <View key={load.id} style={styles.tr} role="row" testID={`load-${load.name}`}>
-                <Text style={[styles.td, { width: 170 }]}>{load.quantity > 1 ? `${load.name} ×${load.quantity}` : load.name}</Text>
-                <Text style={[styles.td, { width: 110 }]}>{load.addedBy?.name.split(' ')[0] ?? '—'}</Text>
-                <Text style={[styles.td, { width: 60 }]}>{load.supply.toUpperCase()}</Text>
-                <Text style={[styles.td, { width: 70 }]}>{formatPower((load.watts ?? amps * V) * load.quantity, amps, units)}</Text>
-                <Text style={[styles.td, { width: 60 }]}>{load.hoursPerDay}</Text>
-                <Text style={[styles.td, { width: 60 }]}>{load.dutyPercent} %</Text>
-                <Text style={[styles.td, { width: 70 }]}>{formatEnergy(ah, units, V)}</Text>
-                <Text style={[styles.td, { width: 60 }]}>{Math.round(share * 100)} %</Text>
+                <Text role="cell" style={[styles.td, { width: 170 }]}>{load.quantity > 1 ? `${load.name} ×${load.quantity}` : load.name}</Text>
+                <Text role="cell" style={[styles.td, { width: 110 }]}>{load.addedBy?.name.split(' ')[0] ?? '—'}</Text>
+                <Text role="cell" style={[styles.td, { width: 60 }]}>{load.supply.toUpperCase()}</Text>
+                <Text role="cell" style={[styles.td, { width: 70 }]}>{formatPower((load.watts ?? amps * V) * load.quantity, amps, units)}</Text>
+                <Text role="cell" style={[styles.td, { width: 60 }]}>{load.hoursPerDay}</Text>
+                <Text role="cell" style={[styles.td, { width: 60 }]}>{load.dutyPercent} %</Text>
+                <Text role="cell" style={[styles.td, { width: 70 }]}>{formatEnergy(ah, units, V)}</Text>
+                <Text role="cell" style={[styles.td, { width: 60 }]}>{Math.round(share * 100)} %</Text>
                 {canEdit ? (
-                  <View style={{ width: 200 }}>
+                  <View role="cell" style={{ width: 200 }}>
                     {mayChange(load) ? <LoadActions load={load} confirming={confirming === load.id} onEdit={() => setEditing(load)} onAsk={() => setConfirming(load.id)} onKeep={() => setConfirming(null)} onDelete={() => remove.mutate(load.id, { onSuccess: () => setConfirming(null) })} /> : null}
                   </View>
                 ) : null}

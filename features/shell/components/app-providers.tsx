@@ -5,6 +5,7 @@ import { useFonts } from 'expo-font';
 import { SafeAreaProvider } from 'react-native-safe-area-context';
 
 import { fonts } from '@/shared/theme';
+import { PageTitle } from './page-title';
 
 // Only the weights the theme uses ship with the app, straight from the package's .ttf files.
 const fontFiles = {
@@ -22,7 +23,10 @@ export function AppProviders({ children }: { children: ReactNode }) {
   if (!loaded && !error && Platform.OS !== 'web') return null;
   return (
     <SafeAreaProvider>
-      <QueryClientProvider client={queryClient}>{children}</QueryClientProvider>
+      <QueryClientProvider client={queryClient}>
+        <PageTitle />
+        {children}
+      </QueryClientProvider>
     </SafeAreaProvider>
   );
 }
