@@ -2,6 +2,7 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
 import { ActivityIndicator, Pressable, StyleSheet, Text, View } from 'react-native';
 
+import { ChipGroup } from '@/components/chips';
 import { ChoiceField, Form, SubmitButton } from '@/components/form';
 import { TextField } from '@/components/text-field';
 import { Body, Button, Card, Heading, Small } from '@/components/ui';
@@ -82,18 +83,14 @@ function MemberRow({ rigId, person, canManage, me }: { rigId: string; person: Pe
       </View>
       {canManage ? (
         <View style={styles.actions}>
-          {ROLE_OPTIONS.map((o) => (
-            <Pressable
-              key={o.value}
-              role="radio"
-              aria-checked={person.role === o.value}
-              aria-label={`Make ${person.name} ${o.label}`}
-              onPress={() => person.role !== o.value && role.mutate({ memberId: person.id, role: o.value })}
-              style={[styles.chip, person.role === o.value && styles.chipOn]}
-            >
-              <Text style={[styles.chipText, person.role === o.value && styles.chipTextOn]}>{o.label}</Text>
-            </Pressable>
-          ))}
+          <ChipGroup
+            label={`Role of ${person.name}`}
+            showLabel={false}
+            options={ROLE_OPTIONS}
+            value={person.role}
+            onChange={(v) => v !== person.role && role.mutate({ memberId: person.id, role: v })}
+            testIDPrefix={`role-${person.name}`}
+          />
           {!me ? (
             <Pressable role="button" aria-label={`Remove ${person.name}`} onPress={() => remove.mutate(person.id)} style={styles.chip}>
               <Text style={styles.chipText}>Remove</Text>

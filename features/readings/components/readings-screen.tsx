@@ -7,6 +7,8 @@ import { z } from 'zod';
 import { FilePicker } from '@/components/file-picker';
 import { ChoiceField, Form, NumberField, showApiErrors, SubmitButton, SwitchField } from '@/components/form';
 import { DateTimeField, localDateTime } from '@/components/pickers';
+import { ChipGroup } from '@/components/chips';
+import { Toggle } from '@/components/toggle';
 import { TextField } from '@/components/text-field';
 import { Body, Button, Card, Heading, Small } from '@/components/ui';
 import { useIsWide } from '@/components/use-layout';
@@ -272,19 +274,14 @@ function UploadsCard({ rigId, readings, canEdit }: { rigId: string; readings: Re
             {file.name}: {p.rows.toLocaleString()} rows{p.remembered ? ' (columns as last time)' : ''}
           </Body>
           {FIELDS.map((f) => (
-            <View key={f.key} style={{ gap: space.xs }} role="radiogroup" aria-label={f.label}>
-              <Text style={styles.label}>{f.label}</Text>
-              <View style={styles.chips}>
-                {[...(f.optional ? [''] : []), ...p.columns].map((c) => {
-                  const on = (mapping[f.key] ?? '') === c;
-                  return (
-                    <Pressable key={c || 'none'} role="radio" aria-checked={on} testID={`map-${f.key}-${c || 'none'}`} onPress={() => setMapping({ ...mapping, [f.key]: c || undefined })} style={[styles.chip, on && styles.chipOn]}>
-                      <Text style={[styles.chipText, on && styles.chipTextOn]}>{c || 'None'}</Text>
-                    </Pressable>
-                  );
-                })}
-              </View>
-            </View>
+            <ChipGroup
+              key={f.key}
+              label={f.label}
+              options={[...(f.optional ? [''] : []), ...p.columns].map((c) => ({ value: c, label: c || 'None', testID: `map-${f.key}-${c || 'none'}` }))}
+              value={mapping[f.key] ?? ''}
+              onChange={(c) => setMapping({ ...mapping, [f.key]: c || undefined })}
+              testIDPrefix={`map-${f.key}`}
+            />
           ))}
           <Toggle label="Every row is a rested battery (parked, nothing on)" value={rested} onChange={setRested} testID="log-rested" />
           <Toggle label="All or nothing: store nothing if any row is bad" value={allOrNothing} onChange={setAllOrNothing} testID="log-all-or-nothing" />
@@ -335,15 +332,6 @@ function UploadsCard({ rigId, readings, canEdit }: { rigId: string; readings: Re
         </View>
       ))}
     </Card>
-  );
-}
-
-function Toggle({ label, value, onChange, testID }: { label: string; value: boolean; onChange: (v: boolean) => void; testID: string }) {
-  return (
-    <Pressable role="checkbox" aria-checked={value} onPress={() => onChange(!value)} style={{ flexDirection: 'row', gap: space.sm, alignItems: 'center' }} testID={testID}>
-      <View style={[styles.box, value && styles.boxOn]}>{value ? <Text style={{ color: colors.paper, fontSize: 12 }}>✓</Text> : null}</View>
-      <Body>{label}</Body>
-    </Pressable>
   );
 }
 
