@@ -110,6 +110,24 @@ describe.each(SIZES)('at %s size', (size, viewport) => {
     await page.close();
   });
 
+  it('gives the Outlook chart its reading in words, tied to the chart', async () => {
+    const page = await browser.newPage({ viewport });
+    await signInAs(page, 'ines@example.org');
+    await page.getByTestId('open-Wren').click();
+    const chart = page.getByTestId('soc-chart');
+    await chart.locator('canvas').waitFor();
+    await page.waitForTimeout(800);
+    // Wren reaches its cut-off within the horizon (PRODUCT.md's demo: a 300 W inverter left on).
+    const words = (await page.getByTestId('soc-chart-words').textContent())!;
+    expect(words).toMatch(/On your routine the charge reaches the cut-off \(\d+ %\) on (Mon|Tues|Wednes|Thurs|Fri|Satur|Sun)day about \d\d:00\./);
+    expect(await chart.getAttribute('role')).toBe('img');
+    const described = (await chart.getAttribute('aria-describedby'))!;
+    expect(await page.evaluate((id) => document.getElementById(id)?.textContent, described)).toBe(words);
+    await chart.scrollIntoViewIfNeeded();
+    await chart.screenshot({ path: path.join(SHOTS, `outlook-chart-${size}.png`) });
+    await page.close();
+  });
+
   it('writes Fix and warning figures in the chosen energy unit, and names the rig’s own voltage in Try a load', async () => {
     const page = await browser.newPage({ viewport });
     await signInAs(page, 'ines@example.org');
