@@ -4,7 +4,7 @@ import './error-map';
 
 // The sign-in forms' schemas (better-auth validates again on the server).
 export const emailSchema = z.email('Enter an e-mail address.').max(254);
-export const passwordSchema = z.string().min(10, 'Use at least 10 characters.').max(128, 'Use at most 128 characters.');
+export const passwordSchema = z.string().min(10, 'The password needs at least 10 characters.').max(128, 'The password can be at most 128 characters.');
 
 export const signUpSchema = z.object({ name: z.string().trim().min(1, 'Tell us your name.').max(80), email: emailSchema, password: passwordSchema });
 export type SignUpForm = z.infer<typeof signUpSchema>;
