@@ -3,8 +3,10 @@
 import { colors, radius, space, type } from '@/shared/theme';
 import type { NativeInputProps, SelectInputProps } from './native-inputs';
 
+// DOM styles: a bare number for lineHeight would multiply the font size, so it is given in px.
 const base = {
-  ...type.body,
+  fontFamily: type.body.fontFamily,
+  lineHeight: `${type.body.lineHeight}px`,
   minHeight: 44,
   boxSizing: 'border-box',
   border: `1px solid ${colors.inkSoft}`,

@@ -106,7 +106,18 @@ describe.each(SIZES)('at %s size', (size, viewport) => {
     await capacity.press('5').catch(() => undefined);
     expect(await capacity.inputValue()).toBe(before);
     expect(await page.getByTestId('power-save').count()).toBe(0);
-    await page.screenshot({ path: path.join(SHOTS, `power-member-read-only-${size}.png`), fullPage: true });
+    // The routine grid keeps each "min" on its field's line.
+    const monday = page.getByTestId('field-charging.drivingMinutesPerDay.0');
+    await monday.scrollIntoViewIfNeeded();
+    const field = (await monday.boundingBox())!;
+    const unit = (await page.getByText('min', { exact: true }).first().boundingBox())!;
+    expect(Math.abs(unit.y + unit.height / 2 - (field.y + field.height / 2))).toBeLessThan(8);
+    expect(unit.x).toBeGreaterThan(field.x + field.width - 1);
+    // The driving start is a time, shown as one in a field of the usual height.
+    const start = page.getByTestId('field-charging.drivingStartHour');
+    expect(await start.inputValue()).toBe('11:00');
+    expect((await start.boundingBox())!.height).toBeLessThan(60);
+    await page.screenshot({ path: path.join(SHOTS, `power-member-read-only-${size}.png`) });
     await page.close();
   });
 
