@@ -1,11 +1,62 @@
-// Form fields on react-hook-form's Controller: a label, the control, the unit and the field's error inline.
-import { useState } from 'react';
-import { type Control, Controller, type FieldPath, type FieldValues, type UseFormSetError } from 'react-hook-form';
-import { Pressable, StyleSheet, Switch, Text, TextInput, View } from 'react-native';
-
+// Forms: a frame that submits once (the button or Enter in any field), shows every error at once, moves
+// focus (and so the page) to the first and lists them all beside the button; and the number field.
+// Every field has its own label (ids from useId, so two forms on one screen never share one).
+import { type ReactNode, useId, useState } from 'react';
+import { type Control, Controller, type FieldErrors, type FieldPath, type FieldValues, type UseFormSetError, useFormState } from 'react-hook-form';
+import { StyleSheet, Text, TextInput, View } from 'react-native';
 
 import { ApiError } from '@/lib/api-client';
-import { colors, radius, space, type } from '@/shared/theme';
+import { colors, space, type } from '@/shared/theme';
+import { FieldNote, fieldStyles, useFormFrame } from './form-frame';
+import { Button, type ButtonTone } from './ui';
+
+export { Form, useFormFrame } from './form-frame';
+export { ChoiceField } from './chips';
+export { SwitchField } from './toggle';
+
+/** Every error message of a form, in the order the fields come. */
+export function errorMessages(errors: FieldErrors): string[] {
+  const out: string[] = [];
+  const walk = (node: unknown) => {
+    if (!node || typeof node !== 'object') return;
+    const e = node as { message?: unknown; type?: unknown; ref?: unknown };
+    if (typeof e.message === 'string' && e.message && (typeof e.type === 'string' || 'ref' in e)) out.push(e.message);
+    for (const [k, v] of Object.entries(node)) if (k !== 'ref' && k !== 'message' && k !== 'type' && k !== 'types') walk(v);
+  };
+  walk(errors);
+  return [...new Set(out)];
+}
+
+/** The form's button, with a short summary of what to fix above it after a submit that found errors. */
+export function SubmitButton({ label, testID, tone, extra }: { label: string; testID?: string; tone?: ButtonTone; extra?: ReactNode }) {
+  const frame = useFormFrame();
+  if (frame.readOnly) return null;
+  return (
+    <View style={{ gap: space.sm }}>
+      {frame.control ? <ErrorSummary control={frame.control} /> : null}
+      <View style={{ flexDirection: 'row', gap: space.md, flexWrap: 'wrap' }}>
+        <Button testID={testID} label={label} onPress={frame.submit} busy={frame.busy} tone={tone} />
+        {extra}
+      </View>
+    </View>
+  );
+}
+
+function ErrorSummary({ control }: { control: Control<any> }) {
+  const { errors, submitCount } = useFormState({ control });
+  const messages = errorMessages(errors);
+  if (!submitCount || !messages.length) return null;
+  return (
+    <View role="alert" style={styles.summary} testID="form-error-summary">
+      <Text style={styles.summaryTitle}>{messages.length === 1 ? 'One thing to fix:' : `${messages.length} things to fix:`}</Text>
+      {messages.map((m) => (
+        <Text key={m} style={styles.summaryItem}>
+          • {m}
+        </Text>
+      ))}
+    </View>
+  );
+}
 
 type Base<T extends FieldValues> = { control: Control<T>; name: FieldPath<T>; label: string; hint?: string };
 
@@ -21,18 +72,21 @@ export function NumberField<T extends FieldValues>({
   label,
   unit,
   hint,
+  compact,
   toDisplay = (n) => n,
   fromDisplay = (n) => n,
-}: Base<T> & { unit?: string; toDisplay?: (n: number) => number; fromDisplay?: (n: number) => number }) {
+}: Base<T> & { unit?: string; compact?: boolean; toDisplay?: (n: number) => number; fromDisplay?: (n: number) => number }) {
   return (
     <Controller
       control={control}
       name={name}
       render={({ field, fieldState }) => (
         <NumberInput
+          mount={field.ref}
           label={label}
           unit={unit}
           hint={hint}
+          compact={compact}
           value={Number.isFinite(field.value) ? toDisplay(field.value) : field.value}
           onChange={(n) => field.onChange(Number.isFinite(n) ? fromDisplay(n) : n)}
           onBlur={field.onBlur}
@@ -44,9 +98,10 @@ export function NumberField<T extends FieldValues>({
   );
 }
 
-function NumberInput(props: { label: string; unit?: string; hint?: string; value: number; onChange: (n: number) => void; onBlur: () => void; error?: string; testID: string }) {
+function NumberInput({ mount, ...props }: { mount: (el: unknown) => void; label: string; unit?: string; hint?: string; compact?: boolean; value: number; onChange: (n: number) => void; onBlur: () => void; error?: string; testID: string }) {
   const [text, setText] = useState(Number.isFinite(props.value) ? String(props.value) : '');
-  const id = props.testID;
+  const frame = useFormFrame();
+  const id = useId();
   return (
     <View style={styles.field}>
       <Text nativeID={`${id}-label`} style={styles.label}>
@@ -54,90 +109,41 @@ function NumberInput(props: { label: string; unit?: string; hint?: string; value
       </Text>
       <View style={styles.row}>
         <TextInput
-          testID={id}
+          ref={mount as never}
+          testID={props.testID}
           aria-labelledby={`${id}-label`}
+          aria-describedby={props.error ? `${id}-error` : props.hint ? `${id}-hint` : undefined}
           aria-invalid={!!props.error}
+          readOnly={frame.readOnly}
+          aria-readonly={frame.readOnly || undefined}
           inputMode="decimal"
+          enterKeyHint="done"
           value={text}
           onChangeText={(t) => {
             setText(t);
             props.onChange(parseNumber(t));
           }}
           onBlur={props.onBlur}
-          style={[styles.input, props.error ? styles.inputError : null]}
+          onSubmitEditing={frame.submit}
+          style={[styles.input, props.compact && styles.inputCompact, frame.readOnly && styles.inputReadOnly, props.error ? styles.inputError : null]}
         />
-        {props.unit ? <Text style={styles.unit}>{props.unit}</Text> : null}
+        {props.unit ? <Text style={[styles.unit, props.compact && styles.unitCompact]}>{props.unit}</Text> : null}
       </View>
-      {props.hint && !props.error ? <Text style={styles.hint}>{props.hint}</Text> : null}
-      {props.error ? (
-        <Text role="alert" style={styles.error}>
-          {props.error}
-        </Text>
-      ) : null}
+      <FieldNote id={id} hint={props.hint} error={props.error} />
     </View>
   );
 }
 
-/** One of a few values, as a row of buttons. */
-export function ChoiceField<T extends FieldValues, V extends string | number>({ control, name, label, options, hint }: Base<T> & { options: { value: V; label: string }[] }) {
-  return (
-    <Controller
-      control={control}
-      name={name}
-      render={({ field, fieldState }) => (
-        <View style={styles.field} role="radiogroup" aria-label={label}>
-          <Text style={styles.label}>{label}</Text>
-          <View style={styles.chips}>
-            {options.map((o) => {
-              const on = field.value === o.value;
-              return (
-                <Pressable key={String(o.value)} role="radio" aria-checked={on} testID={`field-${name}-${o.value}`} onPress={() => field.onChange(o.value)} style={[styles.chip, on && styles.chipOn]}>
-                  <Text style={[styles.chipLabel, on && styles.chipLabelOn]}>{o.label}</Text>
-                </Pressable>
-              );
-            })}
-          </View>
-          {hint ? <Text style={styles.hint}>{hint}</Text> : null}
-          {fieldState.error ? <Text role="alert" style={styles.error}>{fieldState.error.message}</Text> : null}
-        </View>
-      )}
-    />
-  );
-}
-
-export function SwitchField<T extends FieldValues>({ control, name, label, hint }: Base<T>) {
-  return (
-    <Controller
-      control={control}
-      name={name}
-      render={({ field }) => (
-        <View style={styles.switchRow}>
-          <View style={{ flex: 1 }}>
-            <Text style={styles.label}>{label}</Text>
-            {hint ? <Text style={styles.hint}>{hint}</Text> : null}
-          </View>
-          <Switch testID={`field-${name}`} aria-label={label} value={!!field.value} onValueChange={field.onChange} trackColor={{ true: colors.nightSoft, false: colors.line }} thumbColor={field.value ? colors.lamp : '#FFFFFF'} />
-        </View>
-      )}
-    />
-  );
-}
-
 const styles = StyleSheet.create({
-  field: { gap: space.xs },
+  ...fieldStyles,
   row: { flexDirection: 'row', alignItems: 'center', gap: space.sm },
-  label: { ...type.heading, fontSize: 15, color: colors.ink },
-  input: { ...type.body, flex: 1, minWidth: 80, borderWidth: 1, borderColor: colors.line, borderRadius: radius.sm, paddingHorizontal: space.md, paddingVertical: space.sm, backgroundColor: colors.card, color: colors.ink },
-  inputError: { borderColor: colors.short, borderWidth: 2 },
+  input: { ...fieldStyles.input, flex: 1, minWidth: 80 },
+  inputCompact: { minWidth: 40, paddingHorizontal: space.sm },
   unit: { ...type.body, color: colors.inkSoft, minWidth: 24 },
-  hint: { ...type.small, color: colors.inkSoft },
-  error: { ...type.small, color: colors.short, fontFamily: 'Nunito_700Bold' },
-  chips: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm },
-  chip: { borderWidth: 1, borderColor: colors.line, borderRadius: 999, paddingHorizontal: space.md, paddingVertical: space.xs + 2, backgroundColor: colors.card },
-  chipOn: { backgroundColor: colors.night, borderColor: colors.night },
-  chipLabel: { ...type.small, color: colors.ink, fontFamily: 'Nunito_700Bold' },
-  chipLabelOn: { color: colors.paper },
-  switchRow: { flexDirection: 'row', alignItems: 'center', gap: space.md },
+  unitCompact: { minWidth: 0 },
+  summary: { borderLeftWidth: 4, borderLeftColor: colors.short, paddingLeft: space.md, paddingVertical: space.xs, gap: 2 },
+  summaryTitle: { ...type.body, color: colors.short, fontFamily: 'Nunito_700Bold' },
+  summaryItem: { ...type.small, color: colors.ink },
 });
 
 /**

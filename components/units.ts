@@ -50,3 +50,13 @@ export function formatPower(watts: number, amps: number, units: Units): string {
 
 export const cToF = (c: number) => Math.round((c * 9) / 5 + 32);
 export const fToC = (f: number) => Math.round(((f - 32) * 5) / 9 * 10) / 10;
+
+/**
+ * A server text (a warning, a Fix) in the reader's energy unit. The model states energy as "<number> Ah"
+ * in every text it writes, whatever the wording around it; with Wh chosen each such figure is shown in
+ * watt-hours at the system voltage, so reworded texts keep following the setting.
+ */
+export function energyInText(text: string, units: Units, systemVoltage = 12): string {
+  if (units.energy === 'Ah') return text;
+  return text.replace(/(\d[\d,]*(?:\.\d+)?)\s?Ah\b/g, (_m, n: string) => `${Math.round(Number(n.replaceAll(',', '')) * systemVoltage).toLocaleString('en-US')} Wh`);
+}

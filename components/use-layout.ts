@@ -19,3 +19,17 @@ export function useIsWide(): boolean {
   );
   return hydrated && width >= WIDE_BREAKPOINT;
 }
+
+/** Below this width a table shows each row as a card instead (a phone held upright). */
+export const CARDS_BELOW = 600;
+
+/** Whether rows should be cards: phone first, like useIsWide (the static page renders as a phone). */
+export function useIsNarrow(): boolean {
+  const { width } = useWindowDimensions();
+  const hydrated = useSyncExternalStore(
+    noSubscription,
+    () => true,
+    () => false,
+  );
+  return !hydrated || width < CARDS_BELOW;
+}

@@ -10,7 +10,8 @@ import { defaultStatements as householdBaseStatements, memberAc, ownerAc } from 
 export const householdStatements = {
   ...householdBaseStatements,
   rig: ['read', 'update', 'delete'],
-  load: ['create', 'update', 'delete'],
+  // A member edits and deletes the loads they added (-own); an owner any load (-any).
+  load: ['create', 'update-own', 'delete-own', 'update-any', 'delete-any'],
   reading: ['create', 'update', 'delete'],
   cableRun: ['create', 'update', 'delete'],
   trip: ['create', 'update', 'delete'],
@@ -24,7 +25,7 @@ export const householdRoles = {
   owner: householdAc.newRole({
     ...ownerAc.statements,
     rig: ['read', 'update', 'delete'],
-    load: ['create', 'update', 'delete'],
+    load: ['create', 'update-own', 'delete-own', 'update-any', 'delete-any'],
     reading: ['create', 'update', 'delete'],
     cableRun: ['create', 'update', 'delete'],
     trip: ['create', 'update', 'delete'],
@@ -34,7 +35,7 @@ export const householdRoles = {
   member: householdAc.newRole({
     ...memberAc.statements,
     rig: ['read'],
-    load: ['create', 'update', 'delete'],
+    load: ['create', 'update-own', 'delete-own'],
     reading: ['create', 'update', 'delete'],
     cableRun: ['create', 'update', 'delete'],
     trip: ['create', 'update', 'delete'],

@@ -1,47 +1,68 @@
 // Every chart, in one module loaded only after CanvasKit (see lazy-charts.web.tsx): nothing here may be
 // imported before Skia is ready. One module, so the web build has one lazy chunk with Skia's code and the
 // first screen carries none of it.
-import { Line as SkiaLine, Rect, useFont, vec } from '@shopify/react-native-skia';
+import { DashPathEffect, Group, Line as SkiaLine, Rect, Text as SkiaText, useFont, vec } from '@shopify/react-native-skia';
+import { useState } from 'react';
 import { View } from 'react-native';
 import { CartesianChart, Line, Scatter } from 'victory-native';
 
 import { colors } from '@/shared/theme';
 import type { ReadingsChartProps, SocChartProps } from './chart-types';
 import { dateLabel, midnightTicks } from './date-axis';
+import { dayTicks, drivingBands, stopWhenFlat } from './describe';
 
 const font = require('@expo-google-fonts/nunito/400Regular/Nunito_400Regular.ttf');
 
 function SocChartImpl({ series, cutoffSocPercent, startSocPercent }: SocChartProps) {
   const axisFont = useFont(font, 12);
+  const [width, setWidth] = useState(0);
+  const hours = series.length ? series[series.length - 1].hour : 24;
+  const days = hours / 24;
+  // Regular day ticks at midnight with the weekday's name: every day when there is room, else every 2nd or 7th.
+  const every = [1, 2, 7].find((k) => width === 0 || width / (days / k) >= 44) ?? 7;
+  const ticks = dayTicks(series, every);
   const first = startSocPercent ?? series[0]?.socPercent ?? 100;
-  const data = [{ hour: 0, soc: first, parked: startSocPercent ?? series[0]?.parkedSocPercent ?? 100, driving: 0 }, ...series.map((s) => ({ hour: s.hour, soc: s.socPercent, parked: s.parkedSocPercent, driving: s.drivingMinutes }))];
+  const soc = stopWhenFlat([first, ...series.map((s) => s.socPercent)]);
+  const parked = stopWhenFlat([startSocPercent ?? series[0]?.parkedSocPercent ?? 100, ...series.map((s) => s.parkedSocPercent)]);
+  const data = [{ hour: 0 }, ...series.map((s) => ({ hour: s.hour }))].map((d, i) => ({ ...d, soc: soc[i], parked: parked[i] }));
+  // A drive of 40 minutes in 14 days is under a pixel wide at scale: each band is at least 8 px.
+  const minBandHours = width > 0 ? (8 / width) * hours : 1;
+  const bands = drivingBands(series, minBandHours);
   return (
-    <CartesianChart
-      data={data}
-      xKey="hour"
-      yKeys={['soc', 'parked']}
-      domain={{ y: [0, 100] }}
-      padding={{ left: 4, right: 8, top: 8, bottom: 4 }}
-      xAxis={{ font: axisFont, tickCount: 7, formatXLabel: (h) => `${Math.round(Number(h) / 24)} d`, labelColor: colors.inkSoft, lineColor: colors.line }}
-      yAxis={[{ font: axisFont, tickValues: [0, 25, 50, 75, 100], formatYLabel: (v) => `${v} %`, labelColor: colors.inkSoft, lineColor: colors.line }]}
-    >
-      {({ points, chartBounds, xScale, yScale }) => {
-        const step = points.soc.length > 1 ? (points.soc[1].x - points.soc[0].x) : 1;
-        const y = yScale(cutoffSocPercent);
-        return (
-          <>
-            {data.map((d, i) =>
-              d.driving > 0 ? (
-                <Rect key={i} x={xScale(d.hour - 1)} y={chartBounds.top} width={Math.max(1, step * (d.driving / 60))} height={chartBounds.bottom - chartBounds.top} color="rgba(244, 185, 66, 0.35)" />
-              ) : null,
-            )}
-            <SkiaLine p1={vec(chartBounds.left, y)} p2={vec(chartBounds.right, y)} color={colors.short} strokeWidth={1.5} />
-            <Line points={points.parked} color={colors.inkSoft} strokeWidth={1.5} />
-            <Line points={points.soc} color={colors.night} strokeWidth={2.5} />
-          </>
-        );
-      }}
-    </CartesianChart>
+    <View style={{ flex: 1 }} onLayout={(e) => setWidth(e.nativeEvent.layout.width)}>
+      <CartesianChart
+        data={data}
+        xKey="hour"
+        yKeys={['soc', 'parked']}
+        domain={{ x: [0, hours], y: [0, 100] }}
+        // A little room below 0 % and above 100 %, so both labels show clear of the edges.
+        domainPadding={{ top: 8, bottom: 8 }}
+        padding={{ left: 4, right: 12, top: 12, bottom: 4 }}
+        // tickCount as many as the ticks: victory-native thins tickValues down to tickCount otherwise.
+        xAxis={{ font: axisFont, tickValues: ticks.map((t) => t.hour), tickCount: Math.max(1, ticks.length), formatXLabel: (h) => ticks.find((t) => t.hour === Number(h))?.label ?? '', labelColor: colors.inkSoft, lineColor: colors.line }}
+        yAxis={[{ font: axisFont, tickValues: [0, 25, 50, 75, 100], tickCount: 5, formatYLabel: (v) => `${v} %`, labelColor: colors.ink, lineColor: colors.line }]}
+      >
+        {({ points, chartBounds, xScale, yScale }) => {
+          const y = yScale(cutoffSocPercent);
+          return (
+            <>
+              {bands.map((b, i) => (
+                <Group key={i}>
+                  <Rect x={xScale(b.from)} y={chartBounds.top} width={Math.max(1, xScale(b.to) - xScale(b.from))} height={chartBounds.bottom - chartBounds.top} color="rgba(244, 185, 66, 0.45)" />
+                  <Rect x={xScale(b.from)} y={chartBounds.top} width={Math.max(1, xScale(b.to) - xScale(b.from))} height={4} color={colors.lampDeep} />
+                </Group>
+              ))}
+              <SkiaLine p1={vec(chartBounds.left, y)} p2={vec(chartBounds.right, y)} color={colors.short} strokeWidth={2} />
+              {axisFont ? <SkiaText x={chartBounds.right - 70} y={y - 4} text="cut-off" font={axisFont} color={colors.short} /> : null}
+              <Line points={points.parked} color={colors.inkSoft} strokeWidth={2}>
+                <DashPathEffect intervals={[7, 5]} />
+              </Line>
+              <Line points={points.soc} color={colors.night} strokeWidth={3} />
+            </>
+          );
+        }}
+      </CartesianChart>
+    </View>
   );
 }
 

@@ -12,7 +12,7 @@ export async function findRigWithRole(db: Exec, rigId: string, userId: string) {
     .innerJoin('member', (j) => j.onRef('member.organizationId', '=', 'rigs.household_id').on('member.userId', '=', userId))
     .innerJoin('organization', 'organization.id', 'rigs.household_id')
     .selectAll('rigs')
-    .select(['member.role as role', 'organization.name as household_name'])
+    .select(['member.role as role', 'member.userId as viewer_id', 'organization.name as household_name'])
     .where('rigs.id', '=', rigId)
     .executeTakeFirst();
   return row ?? null;
@@ -24,7 +24,7 @@ export async function listRigsForUser(db: Exec, userId: string) {
     .innerJoin('member', (j) => j.onRef('member.organizationId', '=', 'rigs.household_id').on('member.userId', '=', userId))
     .innerJoin('organization', 'organization.id', 'rigs.household_id')
     .selectAll('rigs')
-    .select(['member.role as role', 'organization.name as household_name'])
+    .select(['member.role as role', 'member.userId as viewer_id', 'organization.name as household_name'])
     .orderBy('rigs.updated_at', 'desc')
     .execute();
 }

@@ -30,11 +30,12 @@ export function rigsRouter({ db, auth, jobs, config, storage }: AppContext) {
   const router = Router();
   const actor = (res: Response) => ({ id: session(res).user.id, name: session(res).user.name });
 
-  // After a change that can move the forecast, the rig's margin is checked (low-margin warnings).
+  // After a change that can move the forecast, the rig's margin is checked (low-margin warnings); a save
+  // that changed nothing (res.locals.unchanged) queues no check.
   router.use('/:rigId', (req, res, next) => {
     if (req.method !== 'GET' && !/\/(notes|try|fixes\/preview)(\/|$)/.test(req.path)) {
       res.on('finish', () => {
-        if (res.statusCode < 300 && typeof req.params.rigId === 'string') void jobs.rigChanged(req.params.rigId);
+        if (res.statusCode < 300 && !res.locals.unchanged && typeof req.params.rigId === 'string') void jobs.rigChanged(req.params.rigId);
       });
     }
     next();
@@ -56,7 +57,9 @@ export function rigsRouter({ db, auth, jobs, config, storage }: AppContext) {
   });
 
   router.patch('/:rigId', rigAccess(db, { rig: ['update'] }), validate(rigUpdateSchema), async (_req, res) => {
-    res.json(await rigs.changeRig(db, rigOf(res), actor(res), parsed(res, rigUpdateSchema)));
+    const { changed, ...rig } = await rigs.changeRig(db, rigOf(res), actor(res), parsed(res, rigUpdateSchema));
+    res.locals.unchanged = !changed;
+    res.json(rig);
   });
 
   router.delete('/:rigId', rigAccess(db, { rig: ['delete'] }), async (req, res) => {
@@ -89,11 +92,14 @@ export function rigsRouter({ db, auth, jobs, config, storage }: AppContext) {
     res.status(201).json(await rigs.addLoad(db, rigOf(res), actor(res), parsed(res, loadSchema)));
   });
 
-  router.patch('/:rigId/loads/:loadId', rigAccess(db, { load: ['update'] }), validate(loadParamsSchema, 'params'), validate(loadSchema), async (_req, res) => {
-    res.json(await rigs.editLoad(db, rigOf(res), actor(res), parsed(res, loadParamsSchema, 'params').loadId, parsed(res, loadSchema)));
+  // Members pass with update-own; the service refuses a load someone else added unless the role has update-any.
+  router.patch('/:rigId/loads/:loadId', rigAccess(db, { load: ['update-own'] }), validate(loadParamsSchema, 'params'), validate(loadSchema), async (_req, res) => {
+    const { load, changed } = await rigs.editLoad(db, rigOf(res), actor(res), parsed(res, loadParamsSchema, 'params').loadId, parsed(res, loadSchema));
+    res.locals.unchanged = !changed;
+    res.json(load);
   });
 
-  router.delete('/:rigId/loads/:loadId', rigAccess(db, { load: ['delete'] }), validate(loadParamsSchema, 'params'), async (_req, res) => {
+  router.delete('/:rigId/loads/:loadId', rigAccess(db, { load: ['delete-own'] }), validate(loadParamsSchema, 'params'), async (_req, res) => {
     await rigs.removeLoad(db, rigOf(res), actor(res), parsed(res, loadParamsSchema, 'params').loadId);
     res.status(204).end();
   });

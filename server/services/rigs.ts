@@ -1,3 +1,4 @@
+import { isDeepStrictEqual } from 'node:util';
 import { gzipSync } from 'node:zlib';
 
 import type { Db } from '@/db/client';
@@ -22,6 +23,7 @@ export function permissionsOf(role: string): RigPermissions {
     delete: can(role, { rig: ['delete'] }),
     manageLoads: can(role, { load: ['create'] }),
     manageTrips: can(role, { trip: ['create'] }),
+    editAnyLoad: can(role, { load: ['update-any'] }),
     managePeople: can(role, { people: ['manage'] }),
     comment: can(role, { note: ['create'] }),
   };
@@ -38,6 +40,7 @@ export function rigDto(row: RigRowWithRole, loads: SavedLoad[]): RigHeader & { p
     householdId: row.household_id,
     householdName: row.household_name,
     role: row.role as HouseholdRole,
+    viewerId: row.viewer_id,
     permissions: permissionsOf(row.role),
     version: row.version,
     updatedAt: new Date(row.updated_at as unknown as Date).toISOString(),
@@ -155,19 +158,28 @@ export async function tryLoads(db: Db, rig: RigRowWithRole, candidates: Load[]) 
 }
 
 
+/**
+ * Saves a change to the rig's name, vehicle or power system. A save that changes nothing keeps the rig as
+ * it is: no new version, no history entry (and the route queues no margin check): `changed` says which.
+ */
 export async function changeRig(db: Db, rig: RigRowWithRole, actor: Actor, input: RigUpdateInput) {
   const loads = (await loadsOfRigs(db, [rig.id])).map(loadFromRow).map(stripLoad);
   if (input.power) validateModel(input.power, loads, 'power.');
   const before = rigPowerSchema.parse(rig.power);
+  const conflict = () =>
+    new HttpError(409, 'conflict', 'Someone else changed this rig since you opened it. Reload to see their change, then make yours again.', [
+      { path: 'version', message: `This rig is now at version ${rig.version}; your edit started from version ${input.version}.` },
+    ]);
+  const powerChanged = input.power !== undefined && !isDeepStrictEqual(input.power, before);
+  const renamed = (input.name !== undefined && input.name !== rig.name) || (input.vehicle !== undefined && input.vehicle !== rig.vehicle);
+  if (!powerChanged && !renamed) {
+    if (input.version !== rig.version) throw conflict();
+    return { id: rig.id, version: rig.version, changed: false };
+  }
   return db.transaction().execute(async (trx) => {
     const updated = await updateRigIfVersion(trx, rig.id, input.version, { name: input.name, vehicle: input.vehicle, power: input.power });
-    if (!updated) {
-      throw new HttpError(409, 'conflict', 'Someone else changed this rig since you opened it. Reload to see their change, then make yours again.', [
-        { path: 'version', message: `This rig is now at version ${rig.version}; your edit started from version ${input.version}.` },
-      ]);
-    }
-    const change = input.power ? describePowerChange(before, input.power) : null;
-    const renamed = (input.name !== undefined && input.name !== rig.name) || (input.vehicle !== undefined && input.vehicle !== rig.vehicle);
+    if (!updated) throw conflict();
+    const change = powerChanged ? describePowerChange(before, input.power!) : null;
     if (change || renamed) {
       await insertHistory(trx, {
         rigId: rig.id,
@@ -178,8 +190,15 @@ export async function changeRig(db: Db, rig: RigRowWithRole, actor: Actor, input
         daysParkedAfter: daysParkedOf(input.power ?? before, loads),
       });
     }
-    return updated;
+    return { ...updated, changed: true };
   });
+}
+
+/** A member may change only the loads they added; an owner any load (shared/permissions.ts). */
+function mayChangeLoad(rig: RigRowWithRole, actor: Actor, load: SavedLoad, verb: 'update' | 'delete') {
+  if (load.addedBy?.id === actor.id && can(rig.role, { load: [`${verb}-own`] })) return;
+  if (can(rig.role, { load: [`${verb}-any`] })) return;
+  throw new HttpError(403, 'forbidden', `Only ${load.addedBy?.name || 'the person who added it'} or an owner can ${verb === 'update' ? 'edit' : 'delete'} ${load.name}.`);
 }
 
 export async function addLoad(db: Db, rig: RigRowWithRole, actor: Actor, load: Load) {
@@ -205,6 +224,9 @@ export async function editLoad(db: Db, rig: RigRowWithRole, actor: Actor, loadId
   const dto = await readRig(db, rig);
   const old = dto.loads.find((l) => l.id === loadId);
   if (!old) throw new HttpError(404, 'not_found', 'No such load on this rig.');
+  mayChangeLoad(rig, actor, old, 'update');
+  // Saved as it was: nothing to write, no new version, no history entry.
+  if (isDeepStrictEqual(stripLoad(old), load)) return { load: old, changed: false };
   const current = dto.loads.map(stripLoad);
   const next = dto.loads.map((l) => (l.id === loadId ? load : stripLoad(l)));
   validateModel(dto.power, next.map((l) => ({ ...l, status: 'installed' as const })));
@@ -220,7 +242,7 @@ export async function editLoad(db: Db, rig: RigRowWithRole, actor: Actor, loadId
       daysParkedBefore: daysParkedOf(dto.power, current),
       daysParkedAfter: daysParkedOf(dto.power, next),
     });
-    return loadFromRow(updated);
+    return { load: loadFromRow(updated), changed: true };
   });
 }
 
@@ -228,6 +250,7 @@ export async function removeLoad(db: Db, rig: RigRowWithRole, actor: Actor, load
   const dto = await readRig(db, rig);
   const old = dto.loads.find((l) => l.id === loadId);
   if (!old) throw new HttpError(404, 'not_found', 'No such load on this rig.');
+  mayChangeLoad(rig, actor, old, 'delete');
   const current = dto.loads.map(stripLoad);
   await db.transaction().execute(async (trx) => {
     if (!(await deleteLoad(trx, rig.id, loadId))) throw new HttpError(404, 'not_found', 'No such load on this rig.');

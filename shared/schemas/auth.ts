@@ -1,8 +1,10 @@
 import { z } from 'zod';
 
+import './error-map';
+
 // The sign-in forms' schemas (better-auth validates again on the server).
 export const emailSchema = z.email('Enter an e-mail address.').max(254);
-export const passwordSchema = z.string().min(10, 'Use at least 10 characters.').max(128, 'Use at most 128 characters.');
+export const passwordSchema = z.string().min(10, 'The password needs at least 10 characters.').max(128, 'The password can be at most 128 characters.');
 
 /** A person's or a household's name, in the forms and on every server route. */
 export const NAME_MAX = 80;

@@ -1,7 +1,9 @@
 import { z } from 'zod';
 
+import './error-map';
+
 // POST /api/cable-runs/size: one run from the battery to a device. lengthM is one way.
-const number = () => z.number({ error: 'Enter a number.' }).finite();
+const number = () => z.number().finite();
 
 const cableRunSizeFields = z.object({
   systemVoltage: number().min(6).max(60).default(12),

@@ -1,5 +1,7 @@
 import { z } from 'zod';
 
+import './error-map';
+
 /** A time zone name the runtime knows (IANA, e.g. Europe/Lisbon). */
 export const timeZoneSchema = z
   .string()

@@ -1,5 +1,7 @@
 import { z } from 'zod';
 
+import './error-map';
+
 export const healthSchema = z.object({
   status: z.enum(['ok', 'degraded']),
   database: z.object({ connected: z.boolean(), latencyMs: z.number().nullable(), error: z.string().optional() }),

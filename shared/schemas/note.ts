@@ -1,8 +1,10 @@
 import { z } from 'zod';
 
+import './error-map';
+
 export const noteCreateSchema = z
   .strictObject({
-    body: z.string().trim().min(1, 'Write something first.').max(4000, 'At most 4,000 characters.'),
+    body: z.string().trim().min(1, 'Write something first.').max(4000),
     targetKind: z.enum(['rig', 'load', 'cable-run', 'reading']).default('rig'),
     targetId: z.uuid().optional(),
     parentId: z.uuid().optional(),

@@ -1,5 +1,7 @@
 import { z } from 'zod';
 
+import './error-map';
+
 export const householdRoleSchema = z.enum(['owner', 'member', 'advisor']);
 export const accountRoleSchema = z.enum(['traveller', 'advisor', 'admin']);
 

@@ -1,12 +1,13 @@
 import { z } from 'zod';
 
 import { isoDateSchema, locationSchema, skySchema } from './solar';
+import './error-map';
 
 // The energy model's input: a public contract (POST /api/projections). Fields may be added; the names stay.
 // Optional fields take the defaults in shared/energy/defaults.ts (documented in docs/model.md).
 
-const num = (min: number, max: number) =>
-  z.number({ error: 'Enter a number.' }).finite('Enter a number.').min(min, `At least ${min}.`).max(max, `At most ${max.toLocaleString('en-US')}.`);
+// Messages come from ./error-map, which names the field and its unit.
+const num = (min: number, max: number) => z.number().finite().min(min).max(max);
 
 export const chemistrySchema = z.enum(['flooded', 'agm', 'gel', 'lifepo4']);
 export const batteryRoleSchema = z.enum(['house', 'starter']);

@@ -1,9 +1,11 @@
 import { z } from 'zod';
 
 import { timeZoneSchema } from './email-prefs';
+import './error-map';
+
 import { chemistrySchema } from './projection';
 
-const num = (min: number, max: number) => z.number({ error: 'Enter a number.' }).finite('Enter a number.').min(min, `At least ${min}.`).max(max, `At most ${max}.`);
+const num = (min: number, max: number) => z.number().finite().min(min).max(max);
 const isoTime = z.iso.datetime({ offset: true, error: 'A time such as 2026-12-01T18:30:00Z.' });
 
 export const readingPlaceSchema = z.enum(['terminals', 'device', 'ground']);
@@ -16,7 +18,7 @@ export const readingSchema = z.strictObject({
   socPercent: num(0, 100).optional(),
   rested: z.boolean().default(false),
   place: readingPlaceSchema.default('terminals'),
-  note: z.string().trim().max(500, 'At most 500 characters.').default(''),
+  note: z.string().trim().max(500).default(''),
 });
 export type ReadingForm = z.input<typeof readingSchema>;
 export type ReadingInputParsed = z.infer<typeof readingSchema>;
@@ -73,12 +75,12 @@ export const logUploadFieldsSchema = z.object({
 /** GET /api/rigs/:rigId/readings: the viewer's time zone, the model's schedule hours are local to it. */
 export const readingsQuerySchema = z.object({ timeZone: timeZoneSchema.default('UTC') });
 
-export const photoFieldsSchema = z.object({ caption: z.string().trim().max(200, 'At most 200 characters.').default('') });
+export const photoFieldsSchema = z.object({ caption: z.string().trim().max(200).default('') });
 
 export const voltageDropSchema = z.strictObject({
   batteryV: num(0, 80),
   pointV: num(0, 80),
-  currentA: z.number({ error: 'Enter a number.' }).finite().gt(0, 'The test needs a current flowing: more than 0 A.').max(1000),
+  currentA: z.number().finite().gt(0, 'The test needs a current flowing: more than 0 A.').max(1000),
   cableRunId: z.uuid().optional(),
 });
 export type VoltageDropForm = z.input<typeof voltageDropSchema>;

@@ -21,7 +21,7 @@ describe('accounts in the browser', () => {
     await page.getByTestId('field-email').fill(email);
     await page.getByTestId('field-password').fill('short');
     await page.getByTestId('sign-up-submit').click();
-    await page.getByText('Use at least 10 characters.').waitFor();
+    await page.getByText('The password needs at least 10 characters.', { exact: true }).waitFor();
     await page.getByTestId('field-password').fill('a-long-enough-password');
     await page.getByTestId('sign-up-submit').click();
     await page.getByTestId('check-inbox-screen').waitFor();

@@ -49,8 +49,10 @@ describe('Wire a circuit, the stand-alone calculator', () => {
     await fill(page, 'field-lengthM', '0');
     await fill(page, 'field-currentA', 'abc');
     await page.getByTestId('size-run').click();
-    await page.getByText('The length must be more than 0 m.').waitFor();
-    await page.getByText('Enter a number.').waitFor();
+    // Beside each field, and together in the summary by the button.
+    await page.getByText('The length must be more than 0 m.', { exact: true }).waitFor();
+    await page.getByText('Current needs a number.', { exact: true }).waitFor();
+    expect(await page.getByTestId('form-error-summary').textContent()).toMatch(/2 things to fix:.*Current needs a number.*length must be more than 0 m/);
     expect(posted).toBe(0);
     await page.screenshot({ path: path.join(SHOTS, 'cable-runs-phone-errors.png'), fullPage: true });
     await page.close();

@@ -150,9 +150,9 @@ describe('the rig workspace', () => {
     await fill(page, 'field-name', 'Space heater');
     await fill(page, 'field-watts', '100000');
     await page.getByTestId('load-submit').click();
-    await page.getByText('At most 10,000.').first().waitFor();
+    await page.getByText('Power can be at most 10,000 W.').first().waitFor();
     await fill(page, 'field-watts', 'abc');
-    await page.getByText('Enter a number.').first().waitFor();
+    await page.getByText('Power needs a number.').first().waitFor();
     expect(await page.getByTestId('load-Space heater').count()).toBe(0);
     await page.close();
   });

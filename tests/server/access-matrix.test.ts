@@ -208,13 +208,14 @@ const MATRIX: Record<string, Entry> = {
   'GET /api/rigs/:rigId/sheet.pdf': { send: (a, c) => a.get(`/api/rigs/${c.rigId}/sheet.pdf`), expect: readRig },
   'POST /api/rigs/:rigId/try': { send: (a, c) => a.post(`/api/rigs/${c.rigId}/try`).set('Origin', TEST_ORIGIN).send({ candidates: [LOAD] }), expect: readRig },
   'POST /api/rigs/:rigId/loads': { send: (a, c) => a.post(`/api/rigs/${c.rigId}/loads`).set('Origin', TEST_ORIGIN).send(LOAD), expect: editRole(201) },
+  // Tried on a load the owner added: a member changes only their own (tests/server/load-ownership.test.ts).
   'PATCH /api/rigs/:rigId/loads/:loadId': {
     send: async (a, c) => a.patch(`/api/rigs/${c.rigId}/loads/${await throwawayLoad()}`).set('Origin', TEST_ORIGIN).send({ ...LOAD, watts: 25 }),
-    expect: editRole(200),
+    expect: { ...editRole(200), member: 403 },
   },
   'DELETE /api/rigs/:rigId/loads/:loadId': {
     send: async (a, c) => a.delete(`/api/rigs/${c.rigId}/loads/${await throwawayLoad()}`).set('Origin', TEST_ORIGIN),
-    expect: editRole(204),
+    expect: { ...editRole(204), member: 403 },
   },
   'POST /api/rigs/:rigId/invitations': {
     send: (a, c) => a.post(`/api/rigs/${c.rigId}/invitations`).set('Origin', TEST_ORIGIN).send({ email: uniqueEmail('matrix'), role: 'member' }),

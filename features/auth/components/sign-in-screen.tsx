@@ -3,8 +3,9 @@ import { Link, useLocalSearchParams, useRouter } from 'expo-router';
 import { useForm } from 'react-hook-form';
 import { Text, View } from 'react-native';
 
+import { Form, SubmitButton } from '@/components/form';
 import { TextField } from '@/components/text-field';
-import { Body, Button } from '@/components/ui';
+import { Body } from '@/components/ui';
 import { ApiError } from '@/lib/api-client';
 import { safeNext } from '@/lib/app-url';
 import { type SignInForm, signInSchema } from '@/shared/schemas/auth';
@@ -30,16 +31,17 @@ export function SignInScreen() {
     signIn.mutate(values, { onSuccess: () => router.replace(safeNext(params.next) as never) }),
   );
   return (
+    <Form control={form.control} onSubmit={onSubmit} busy={signIn.isPending}>
     <AuthFrame title="Sign in" testID="sign-in-screen">
       {params.reset ? <Text style={okStyle}>Your password is changed. Sign in with the new one.</Text> : null}
       <TextField control={form.control} name="email" label="E-mail" autoComplete="email" inputMode="email" autoCapitalize="none" />
-      <TextField control={form.control} name="password" label="Password" autoComplete="current-password" secureTextEntry onSubmitEditing={onSubmit} />
+      <TextField control={form.control} name="password" label="Password" autoComplete="current-password" secureTextEntry />
       {signIn.isError ? (
         <Text role="alert" style={alertStyle} testID="sign-in-error">
           {signInError(signIn.error)}
         </Text>
       ) : null}
-      <Button testID="sign-in-submit" label="Sign in" onPress={onSubmit} busy={signIn.isPending} />
+      <SubmitButton testID="sign-in-submit" label="Sign in" />
       <View style={{ gap: space.sm }}>
         <Link href="/forgot-password" style={linkStyle}>
           Forgot your password?
@@ -52,5 +54,6 @@ export function SignInScreen() {
         </Body>
       </View>
     </AuthFrame>
+    </Form>
   );
 }

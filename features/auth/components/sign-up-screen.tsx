@@ -3,8 +3,9 @@ import { Link, useLocalSearchParams, useRouter } from 'expo-router';
 import { useForm } from 'react-hook-form';
 import { Text } from 'react-native';
 
+import { Form, SubmitButton } from '@/components/form';
 import { TextField } from '@/components/text-field';
-import { Body, Button } from '@/components/ui';
+import { Body } from '@/components/ui';
 import { ApiError } from '@/lib/api-client';
 import { appUrl, safeNext } from '@/lib/app-url';
 import { type SignUpForm, signUpSchema } from '@/shared/schemas/auth';
@@ -31,16 +32,17 @@ export function SignUpScreen() {
           ? signUp.error.message
           : null;
   return (
+    <Form control={form.control} onSubmit={onSubmit} busy={signUp.isPending}>
     <AuthFrame title="Create your account" testID="sign-up-screen">
-      <TextField control={form.control} name="name" label="Your name" autoComplete="name" />
+      <TextField control={form.control} name="name" label="Your name" autoComplete="name" maxLength={80} />
       <TextField control={form.control} name="email" label="E-mail" autoComplete="email" inputMode="email" autoCapitalize="none" />
-      <TextField control={form.control} name="password" label="Password" hint="At least 10 characters." autoComplete="new-password" secureTextEntry onSubmitEditing={onSubmit} />
+      <TextField control={form.control} name="password" label="Password" hint="At least 10 characters." autoComplete="new-password" secureTextEntry maxLength={128} />
       {error ? (
         <Text role="alert" style={alertStyle}>
           {error}
         </Text>
       ) : null}
-      <Button testID="sign-up-submit" label="Create account" onPress={onSubmit} busy={signUp.isPending} />
+      <SubmitButton testID="sign-up-submit" label="Create account" />
       <Body>
         Already have an account?{' '}
         <Link href={{ pathname: '/sign-in', params: params.next ? { next: params.next } : {} }} style={linkStyle}>
@@ -48,5 +50,6 @@ export function SignUpScreen() {
         </Link>
       </Body>
     </AuthFrame>
+    </Form>
   );
 }

@@ -3,8 +3,8 @@ import { useState } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
 import { StyleSheet, Text, View } from 'react-native';
 
-import { ChoiceField, NumberField, SwitchField } from '@/components/form';
-import { Body, Button, Card, Heading, Small, Title } from '@/components/ui';
+import { ChoiceField, Form, NumberField, SubmitButton, SwitchField } from '@/components/form';
+import { Body, Card, Heading, Small, Title } from '@/components/ui';
 import { useIsWide } from '@/components/use-layout';
 import { CircuitDrawing } from '@/components/wiring/circuit-drawing';
 import type { CableRunResult } from '@/shared/energy/wiring';
@@ -39,6 +39,7 @@ export function CableRunCalculator() {
   });
 
   return (
+    <Form control={form.control} onSubmit={onSubmit} busy={mutation.isPending}>
     <View style={styles.root} testID="cable-run-calculator">
       <Title>Wire a circuit</Title>
       <Body>Start from what is at the end of the wire; Keyoff sizes the cable and the fuse at the battery and draws the circuit.</Body>
@@ -61,7 +62,7 @@ export function CableRunCalculator() {
             </>
           )}
           <ChoiceField control={form.control} name="systemVoltage" label="System voltage" options={[{ value: 12, label: '12 V' }, { value: 24, label: '24 V' }]} />
-          <Button testID="size-run" label="Wire it" onPress={onSubmit} busy={mutation.isPending} />
+          <SubmitButton testID="size-run" label="Wire it" />
           {mutation.isError ? (
             <Text role="alert" style={styles.error}>
               {mutation.error.message}
@@ -73,6 +74,7 @@ export function CableRunCalculator() {
         </View>
       </View>
     </View>
+    </Form>
   );
 }
 

@@ -188,7 +188,7 @@ const styles = StyleSheet.create({
   author: { ...type.heading, fontSize: 15, color: colors.ink },
   when: { ...type.small, color: colors.inkSoft },
   actions: { flexDirection: 'row', gap: space.sm, flexWrap: 'wrap', alignItems: 'center' },
-  chip: { borderWidth: 1, borderColor: colors.line, borderRadius: radius.md, paddingHorizontal: space.md, paddingVertical: space.xs + 2, backgroundColor: colors.card },
+  chip: { minHeight: 44, minWidth: 44, justifyContent: 'center', borderWidth: 1, borderColor: colors.inkSoft, borderRadius: radius.md, paddingHorizontal: space.md, paddingVertical: space.xs, backgroundColor: colors.card },
   chipText: { ...type.small, color: colors.ink, fontFamily: 'Nunito_700Bold' },
   link: { ...type.small, color: colors.focus, fontFamily: 'Nunito_700Bold' },
   photos: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm },

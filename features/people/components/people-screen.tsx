@@ -2,7 +2,8 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
 import { ActivityIndicator, Pressable, StyleSheet, Text, View } from 'react-native';
 
-import { ChoiceField } from '@/components/form';
+import { ChipGroup } from '@/components/chips';
+import { ChoiceField, Form, SubmitButton } from '@/components/form';
 import { TextField } from '@/components/text-field';
 import { Body, Button, Card, Heading, Small } from '@/components/ui';
 import { useIsWide } from '@/components/use-layout';
@@ -56,7 +57,7 @@ export function PeopleScreen({ rigId, myUserId, canManage, onLeft }: { rigId: st
           <Card>
             <Heading>Leave</Heading>
             <Small>You stop seeing this rig. {owner ? 'A household keeps at least one owner.' : ''}</Small>
-            <Button label="Leave this household" onPress={() => leave.mutate(undefined, { onSuccess: onLeft })} busy={leave.isPending} testID="leave" />
+            <Button tone="danger" label="Leave this household" onPress={() => leave.mutate(undefined, { onSuccess: onLeft })} busy={leave.isPending} testID="leave" />
             {leave.isError ? <Text role="alert" style={styles.error}>{leave.error.message}</Text> : null}
           </Card>
         </View>
@@ -82,18 +83,14 @@ function MemberRow({ rigId, person, canManage, me }: { rigId: string; person: Pe
       </View>
       {canManage ? (
         <View style={styles.actions}>
-          {ROLE_OPTIONS.map((o) => (
-            <Pressable
-              key={o.value}
-              role="radio"
-              aria-checked={person.role === o.value}
-              aria-label={`Make ${person.name} ${o.label}`}
-              onPress={() => person.role !== o.value && role.mutate({ memberId: person.id, role: o.value })}
-              style={[styles.chip, person.role === o.value && styles.chipOn]}
-            >
-              <Text style={[styles.chipText, person.role === o.value && styles.chipTextOn]}>{o.label}</Text>
-            </Pressable>
-          ))}
+          <ChipGroup
+            label={`Role of ${person.name}`}
+            showLabel={false}
+            options={ROLE_OPTIONS}
+            value={person.role}
+            onChange={(v) => v !== person.role && role.mutate({ memberId: person.id, role: v })}
+            testIDPrefix={`role-${person.name}`}
+          />
           {!me ? (
             <Pressable role="button" aria-label={`Remove ${person.name}`} onPress={() => remove.mutate(person.id)} style={styles.chip}>
               <Text style={styles.chipText}>Remove</Text>
@@ -136,14 +133,16 @@ function InviteForm({ rigId }: { rigId: string }) {
   const form = useForm<InvitationCreateForm>({ resolver: zodResolver(invitationCreateSchema), defaultValues: { email: '', role: 'member' } });
   const onSubmit = form.handleSubmit((values) => invite.mutate(values, { onSuccess: () => form.reset({ email: '', role: values.role }) }));
   return (
+    <Form control={form.control} onSubmit={onSubmit} busy={invite.isPending}>
     <Card testID="invite-form">
       <Heading>Invite someone</Heading>
       <TextField control={form.control} name="email" label="E-mail" inputMode="email" autoCapitalize="none" />
       <ChoiceField control={form.control} name="role" label="As" options={ROLE_OPTIONS} hint="An advisor (your installer, say) reads everything and comments, and changes nothing." />
-      <Button testID="invite-submit" label="Send invitation" onPress={onSubmit} busy={invite.isPending} />
+      <SubmitButton testID="invite-submit" label="Send invitation" />
       {invite.isSuccess ? <Text style={{ ...type.body, color: colors.comfortable }}>Invitation sent.</Text> : null}
       {invite.isError ? <Text role="alert" style={styles.error}>{invite.error.message}</Text> : null}
     </Card>
+    </Form>
   );
 }
 
@@ -151,7 +150,7 @@ const styles = StyleSheet.create({
   row: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: space.sm, paddingVertical: space.sm, borderBottomWidth: 1, borderBottomColor: colors.line },
   name: { ...type.heading, fontSize: 15, color: colors.ink },
   actions: { flexDirection: 'row', gap: space.xs, flexWrap: 'wrap' },
-  chip: { borderWidth: 1, borderColor: colors.line, borderRadius: 999, paddingHorizontal: space.md, paddingVertical: space.xs },
+  chip: { minHeight: 44, minWidth: 44, justifyContent: 'center', borderWidth: 1, borderColor: colors.inkSoft, borderRadius: 999, paddingHorizontal: space.md, paddingVertical: space.xs },
   chipOn: { backgroundColor: colors.night, borderColor: colors.night },
   chipText: { ...type.small, color: colors.ink, fontFamily: 'Nunito_700Bold' },
   chipTextOn: { color: colors.paper },

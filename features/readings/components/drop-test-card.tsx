@@ -3,8 +3,8 @@ import { useForm } from 'react-hook-form';
 import { Text, View } from 'react-native';
 import { z } from 'zod';
 
-import { ChoiceField, NumberField } from '@/components/form';
-import { Body, Button, Card, Heading, Small } from '@/components/ui';
+import { ChoiceField, Form, NumberField, SubmitButton } from '@/components/form';
+import { Body, Card, Heading, Small } from '@/components/ui';
 import { voltageDropSchema, type VoltageDropForm } from '@/shared/schemas/reading';
 import { colors, type } from '@/shared/theme';
 import { useVoltageDropMutation } from '../api/readings';
@@ -18,6 +18,7 @@ export function DropTestCard({ rigId, cableRuns }: { rigId: string; cableRuns: {
   });
   const submit = handleSubmit((v) => test.mutate({ batteryV: v.batteryV, pointV: v.pointV, currentA: v.currentA, ...(v.run ? { cableRunId: v.run } : {}) }));
   return (
+    <Form control={control} onSubmit={submit} busy={test.isPending}>
     <Card testID="drop-test">
       <Heading>Voltage-drop test</Heading>
       <Small>With a known current flowing (the device on), measure at the battery posts and at the device or its ground point.</Small>
@@ -25,7 +26,7 @@ export function DropTestCard({ rigId, cableRuns }: { rigId: string; cableRuns: {
       <NumberField control={control} name="pointV" label="At the device or ground point" unit="V" />
       <NumberField control={control} name="currentA" label="Current flowing" unit="A" />
       {cableRuns.length ? <ChoiceField control={control} name="run" label="Cable run" options={[{ value: '', label: 'None' }, ...cableRuns.map((r) => ({ value: r.id, label: r.label }))]} /> : null}
-      <Button label="Check the connection" onPress={submit} busy={test.isPending} testID="run-drop-test" />
+      <SubmitButton label="Check the connection" testID="run-drop-test" />
       {test.data ? (
         <View role="status" style={{ gap: 2 }}>
           {test.data.verdict ? (
@@ -42,5 +43,6 @@ export function DropTestCard({ rigId, cableRuns }: { rigId: string; cableRuns: {
       ) : null}
       {test.error ? <Text role="alert" style={styles.error}>{test.error.message}</Text> : null}
     </Card>
+    </Form>
   );
 }

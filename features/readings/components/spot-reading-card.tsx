@@ -2,20 +2,17 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
 import { z } from 'zod';
 
-import { ChoiceField, NumberField, showApiErrors, SwitchField } from '@/components/form';
+import { ChoiceField, Form, NumberField, showApiErrors, SubmitButton, SwitchField } from '@/components/form';
+import { DateTimeField, localDateTime } from '@/components/pickers';
 import { TextField } from '@/components/text-field';
-import { Button, Card, Heading } from '@/components/ui';
+import { Card, Heading } from '@/components/ui';
 import { type ReadingForm, readingSchema } from '@/shared/schemas/reading';
 import { useSpotReadingMutation } from '../api/readings';
 
-const spotForm = readingSchema.extend({ at: z.string().min(1, 'When was it measured?') });
+const spotForm = readingSchema.extend({ at: z.string().min(1, 'When: pick the date and time of the reading.') });
 type SpotForm = z.input<typeof spotForm>;
 
-const localNow = () => {
-  const now = new Date();
-  const pad = (n: number) => String(n).padStart(2, '0');
-  return `${now.getFullYear()}-${pad(now.getMonth() + 1)}-${pad(now.getDate())}T${pad(now.getHours())}:${pad(now.getMinutes())}`;
-};
+const localNow = () => localDateTime(new Date());
 
 /** A reading typed in. After a save the form starts over (Rested off): the next reading is rarely rested too. */
 export function SpotReadingCard({ rigId }: { rigId: string }) {
@@ -27,7 +24,7 @@ export function SpotReadingCard({ rigId }: { rigId: string }) {
   const submit = handleSubmit(async (v) => {
     // Without a zone the browser reads it as local time, as the label says.
     const at = new Date(v.at);
-    if (Number.isNaN(at.getTime())) return setError('at', { message: 'A date and time such as 2026-12-01 18:30.' });
+    if (Number.isNaN(at.getTime())) return setError('at', { message: 'When: pick the date and time of the reading.' });
     try {
       await save.mutateAsync({ ...(v as ReadingForm), at: at.toISOString() });
       reset({ at: localNow(), voltageV: Number.NaN, currentA: undefined, rested: false, place: v.place, note: '' });
@@ -36,9 +33,10 @@ export function SpotReadingCard({ rigId }: { rigId: string }) {
     }
   });
   return (
+    <Form control={control} onSubmit={submit} busy={save.isPending}>
     <Card testID="spot-form">
       <Heading>Add a reading</Heading>
-      <TextField control={control} name="at" label="When (your local time)" placeholder="2026-12-01T18:30" autoCapitalize="none" />
+      <DateTimeField control={control} name="at" label="When (your local time)" />
       <NumberField control={control} name="voltageV" label="Battery voltage" unit="V" />
       <NumberField control={control} name="currentA" label="Current (optional, + when drawn)" unit="A" />
       <SwitchField control={control} name="rested" label="Rested" hint="No charging and nothing switched on for two hours or more: no more than a trickle flowing." />
@@ -52,8 +50,9 @@ export function SpotReadingCard({ rigId }: { rigId: string }) {
           { value: 'ground', label: 'A ground point' },
         ]}
       />
-      <TextField control={control} name="note" label="Note (optional)" />
-      <Button label="Save reading" onPress={submit} busy={save.isPending} testID="save-reading" />
+      <TextField control={control} name="note" label="Note (optional)" maxLength={500} />
+      <SubmitButton label="Save reading" testID="save-reading" />
     </Card>
+    </Form>
   );
 }

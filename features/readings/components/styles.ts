@@ -9,7 +9,7 @@ export const styles = StyleSheet.create({
   row: { gap: 2, paddingVertical: space.sm, borderTopWidth: 1, borderTopColor: colors.line },
   label: { ...type.heading, fontSize: 15, color: colors.ink },
   chips: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm },
-  chip: { borderWidth: 1, borderColor: colors.line, borderRadius: 999, paddingHorizontal: space.md, paddingVertical: space.xs + 2, backgroundColor: colors.card, alignSelf: 'flex-start' },
+  chip: { minHeight: 44, minWidth: 44, justifyContent: 'center', borderWidth: 1, borderColor: colors.inkSoft, borderRadius: 999, paddingHorizontal: space.md, paddingVertical: space.xs, backgroundColor: colors.card, alignSelf: 'flex-start' },
   chipOn: { backgroundColor: colors.night, borderColor: colors.night },
   chipText: { ...type.small, color: colors.ink, fontFamily: 'Nunito_700Bold' },
   chipTextOn: { color: colors.paper },

@@ -67,7 +67,7 @@ export function ClientsScreen({ onOpen, renderNotes }: Props) {
 
 function ClientRow({ client, onPress }: { client: Client; onPress: () => void }) {
   return (
-    <Pressable role="button" onPress={onPress} style={styles.row} testID={`client-${client.name}`} aria-label={`Open ${client.name}`}>
+    <Pressable role="button" onPress={onPress} style={styles.row} testID={`client-${client.name}`}>
       <View style={{ flex: 1, minWidth: 160, gap: 2 }}>
         <Text style={styles.name}>{client.name}</Text>
         <Small>

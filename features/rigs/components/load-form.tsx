@@ -2,7 +2,8 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
 import { Text, View } from 'react-native';
 
-import { ChoiceField, NumberField } from '@/components/form';
+import { ChoiceField, Form, NumberField, SubmitButton } from '@/components/form';
+import { HourField } from '@/components/pickers';
 import { TextField } from '@/components/text-field';
 import { Button, Card, Heading } from '@/components/ui';
 import { type Load, type LoadInput, loadSchema } from '@/shared/schemas/projection';
@@ -22,6 +23,7 @@ export function LoadForm({
   onSubmit,
   onCancel,
   maxWatts,
+  systemVoltage = 12,
 }: {
   title: string;
   initial: LoadInput;
@@ -32,6 +34,8 @@ export function LoadForm({
   onCancel?: () => void;
   /** A sanity limit for the rig (for example what its inverter or system can feed). */
   maxWatts?: number;
+  /** The rig's system voltage, for the DC choice's label. */
+  systemVoltage?: number;
 }) {
   const form = useForm<LoadInput, unknown, Load>({ resolver: zodResolver(loadSchema), defaultValues: initial, mode: 'onTouched' });
   const submit = form.handleSubmit((load) => {
@@ -42,10 +46,11 @@ export function LoadForm({
     onSubmit(load);
   });
   return (
+    <Form control={form.control} onSubmit={submit} busy={busy}>
     <Card testID="load-form">
       <Heading>{title}</Heading>
-      <TextField control={form.control} name="name" label="Name" placeholder="Compressor fridge" />
-      <ChoiceField control={form.control} name="supply" label="Supply" options={[{ value: 'dc', label: 'DC (12 V direct)' }, { value: 'ac', label: 'AC (through the inverter)' }]} />
+      <TextField control={form.control} name="name" label="Name" hint="The device, as you call it." maxLength={80} />
+      <ChoiceField control={form.control} name="supply" label="Supply" options={[{ value: 'dc', label: `DC (${systemVoltage} V direct)` }, { value: 'ac', label: 'AC (through the inverter)' }]} />
       <View style={{ flexDirection: 'row', gap: space.md, flexWrap: 'wrap' }}>
         <View style={{ flex: 1, minWidth: 140 }}>
           <NumberField control={form.control} name="watts" label="Power" unit="W" />
@@ -59,7 +64,7 @@ export function LoadForm({
           <NumberField control={form.control} name="hoursPerDay" label="Hours a day" unit="h" />
         </View>
         <View style={{ flex: 1, minWidth: 140 }}>
-          <NumberField control={form.control} name="startHour" label="From" unit="h" hint="Hour of day, 0 to 23." />
+          <HourField control={form.control} name="startHour" label="From" hint="When it starts each day, to the hour." />
         </View>
         <View style={{ flex: 1, minWidth: 140 }}>
           <NumberField control={form.control} name="dutyPercent" label="Duty cycle" unit="%" hint="A fridge runs about 30 to 40 % of the time." />
@@ -72,10 +77,8 @@ export function LoadForm({
           {error}
         </Text>
       ) : null}
-      <View style={{ flexDirection: 'row', gap: space.md }}>
-        <Button testID="load-submit" label={submitLabel} onPress={submit} busy={busy} />
-        {onCancel ? <Button label="Cancel" onPress={onCancel} /> : null}
-      </View>
+      <SubmitButton testID="load-submit" label={submitLabel} extra={onCancel ? <Button label="Cancel" tone="secondary" onPress={onCancel} /> : null} />
     </Card>
+    </Form>
   );
 }

@@ -1,9 +1,10 @@
 import { useMemo, useState } from 'react';
 import { ActivityIndicator, Pressable, ScrollView, StyleSheet, Text, View } from 'react-native';
 
+import { ChipGroup } from '@/components/chips';
 import { Body, Button, Card, Heading, Small } from '@/components/ui';
 import { formatEnergy, formatPower, useUnits } from '@/components/units';
-import { useIsWide } from '@/components/use-layout';
+import { useIsNarrow, useIsWide } from '@/components/use-layout';
 import { loadRunningCurrentA } from '@/shared/energy/profile';
 import type { Load } from '@/shared/schemas/projection';
 import { colors, space, type } from '@/shared/theme';
@@ -30,6 +31,7 @@ export function LoadsScreen({ rigId }: { rigId: string }) {
   const rig = useRigQuery(rigId);
   const outlook = useOutlookQuery(rigId);
   const wide = useIsWide();
+  const narrow = useIsNarrow();
   const { units } = useUnits();
   const [sort, setSort] = useState<{ key: SortKey; desc: boolean }>({ key: 'ah', desc: true });
   const [member, setMember] = useState<string | null>(null);
@@ -61,6 +63,8 @@ export function LoadsScreen({ rigId }: { rigId: string }) {
   if (rig.isError) return <Body style={{ color: colors.short }}>{rig.error.message}</Body>;
   const V = rig.data.power.systemVoltage;
   const canEdit = rig.data.permissions.manageLoads;
+  // A member changes the loads they added; an owner any load (the server refuses the rest with 403).
+  const mayChange = (load: SavedLoad) => rig.data.permissions.editAnyLoad || (canEdit && load.addedBy?.id === rig.data.viewerId);
   const members = [...new Map(rig.data.loads.filter((l) => l.addedBy).map((l) => [l.addedBy!.id, l.addedBy!.name])).entries()];
   const maxWatts = rig.data.power.systemVoltage * 400;
   const save = (load: Load) => {
@@ -76,13 +80,30 @@ export function LoadsScreen({ rigId }: { rigId: string }) {
           <Heading>Loads</Heading>
           {canEdit && !editing ? <Button testID="add-load" label="Add a load" onPress={() => setEditing('new')} /> : null}
         </View>
-        <View style={styles.filters} role="radiogroup" aria-label="Show loads added by">
-          {[[null, 'Everyone'] as const, ...members].map(([id, name]) => (
-            <Pressable key={id ?? 'all'} role="radio" aria-checked={member === id} onPress={() => setMember(id)} style={[styles.chip, member === id && styles.chipOn]} testID={`filter-${name}`}>
-              <Text style={[styles.chipText, member === id && styles.chipTextOn]}>{name}</Text>
-            </Pressable>
-          ))}
-        </View>
+        <ChipGroup
+          label="Show loads added by"
+          showLabel={false}
+          options={[{ value: null, label: 'Everyone', testID: 'filter-Everyone' }, ...members.map(([id, name]) => ({ value: id as string | null, label: name, testID: `filter-${name}` }))]}
+          value={member}
+          onChange={setMember}
+          testIDPrefix="filter"
+        />
+        {narrow ? (
+          <View style={{ gap: space.sm }} testID="load-cards">
+            {rows.map(({ load, amps, ah, share }) => (
+              <View key={load.id} style={styles.card} testID={`load-${load.name}`}>
+                <Text style={styles.cardTitle}>{load.quantity > 1 ? `${load.name} ×${load.quantity}` : load.name}</Text>
+                <Text style={styles.cardLine}>
+                  {load.supply.toUpperCase()} · {formatPower((load.watts ?? amps * V) * load.quantity, amps, units)} · {load.hoursPerDay} h a day{load.dutyPercent < 100 ? ` at ${load.dutyPercent} %` : ''}
+                </Text>
+                <Text style={styles.cardLine}>
+                  {formatEnergy(ah, units, V)} a day · {Math.round(share * 100)} % of the use · added by {load.addedBy?.name.split(' ')[0] ?? 'someone who left'}
+                </Text>
+                {mayChange(load) ? <LoadActions load={load} confirming={confirming === load.id} onEdit={() => setEditing(load)} onAsk={() => setConfirming(load.id)} onKeep={() => setConfirming(null)} onDelete={() => remove.mutate(load.id, { onSuccess: () => setConfirming(null) })} /> : null}
+              </View>
+            ))}
+          </View>
+        ) : (
         <ScrollView horizontal>
           <View role="table">
             <View style={styles.tr} role="row">
@@ -92,7 +113,7 @@ export function LoadsScreen({ rigId }: { rigId: string }) {
                   role="columnheader"
                   aria-sort={sort.key === c.key ? (sort.desc ? 'descending' : 'ascending') : 'none'}
                   onPress={() => setSort((s) => ({ key: c.key, desc: s.key === c.key ? !s.desc : c.key !== 'name' }))}
-                  style={{ width: c.width }}
+                  style={{ width: c.width, minHeight: 44, justifyContent: 'center' }}
                   testID={`sort-${c.key}`}
                 >
                   <Text style={styles.th}>
@@ -101,45 +122,33 @@ export function LoadsScreen({ rigId }: { rigId: string }) {
                   </Text>
                 </Pressable>
               ))}
-              {canEdit ? <View style={{ width: 150 }} /> : null}
+              {canEdit ? (
+                <View role="columnheader" style={{ width: 200, justifyContent: 'center' }}>
+                  <Text style={styles.th}>Change</Text>
+                </View>
+              ) : null}
             </View>
             {rows.map(({ load, amps, ah, share }) => (
               <View key={load.id} style={styles.tr} role="row" testID={`load-${load.name}`}>
-                <Text style={[styles.td, { width: 170 }]}>{load.quantity > 1 ? `${load.name} ×${load.quantity}` : load.name}</Text>
-                <Text style={[styles.td, { width: 110 }]}>{load.addedBy?.name.split(' ')[0] ?? '—'}</Text>
-                <Text style={[styles.td, { width: 60 }]}>{load.supply.toUpperCase()}</Text>
-                <Text style={[styles.td, { width: 70 }]}>{formatPower((load.watts ?? amps * V) * load.quantity, amps, units)}</Text>
-                <Text style={[styles.td, { width: 60 }]}>{load.hoursPerDay}</Text>
-                <Text style={[styles.td, { width: 60 }]}>{load.dutyPercent} %</Text>
-                <Text style={[styles.td, { width: 70 }]}>{formatEnergy(ah, units, V)}</Text>
-                <Text style={[styles.td, { width: 60 }]}>{Math.round(share * 100)} %</Text>
+                <Text role="cell" style={[styles.td, { width: 170 }]}>{load.quantity > 1 ? `${load.name} ×${load.quantity}` : load.name}</Text>
+                <Text role="cell" style={[styles.td, { width: 110 }]}>{load.addedBy?.name.split(' ')[0] ?? '—'}</Text>
+                <Text role="cell" style={[styles.td, { width: 60 }]}>{load.supply.toUpperCase()}</Text>
+                <Text role="cell" style={[styles.td, { width: 70 }]}>{formatPower((load.watts ?? amps * V) * load.quantity, amps, units)}</Text>
+                <Text role="cell" style={[styles.td, { width: 60 }]}>{load.hoursPerDay}</Text>
+                <Text role="cell" style={[styles.td, { width: 60 }]}>{load.dutyPercent} %</Text>
+                <Text role="cell" style={[styles.td, { width: 70 }]}>{formatEnergy(ah, units, V)}</Text>
+                <Text role="cell" style={[styles.td, { width: 60 }]}>{Math.round(share * 100)} %</Text>
                 {canEdit ? (
-                  <View style={[styles.actions, { width: 150 }]}>
-                    {confirming === load.id ? (
-                      <>
-                        <Pressable role="button" onPress={() => remove.mutate(load.id, { onSuccess: () => setConfirming(null) })} style={styles.chip} testID={`confirm-delete-${load.name}`}>
-                          <Text style={[styles.chipText, { color: colors.short }]}>Delete</Text>
-                        </Pressable>
-                        <Pressable role="button" onPress={() => setConfirming(null)} style={styles.chip}>
-                          <Text style={styles.chipText}>Keep</Text>
-                        </Pressable>
-                      </>
-                    ) : (
-                      <>
-                        <Pressable role="button" aria-label={`Edit ${load.name}`} onPress={() => setEditing(load)} style={styles.chip}>
-                          <Text style={styles.chipText}>Edit</Text>
-                        </Pressable>
-                        <Pressable role="button" aria-label={`Delete ${load.name}`} onPress={() => setConfirming(load.id)} style={styles.chip} testID={`delete-${load.name}`}>
-                          <Text style={styles.chipText}>Delete</Text>
-                        </Pressable>
-                      </>
-                    )}
+                  <View role="cell" style={{ width: 200 }}>
+                    {mayChange(load) ? <LoadActions load={load} confirming={confirming === load.id} onEdit={() => setEditing(load)} onAsk={() => setConfirming(load.id)} onKeep={() => setConfirming(null)} onDelete={() => remove.mutate(load.id, { onSuccess: () => setConfirming(null) })} /> : null}
                   </View>
                 ) : null}
               </View>
             ))}
           </View>
         </ScrollView>
+        )}
+        {remove.isError ? <Text role="alert" style={{ ...type.body, color: colors.short }}>{remove.error.message}</Text> : null}
         {rows.length === 0 ? <Small>No loads{member ? ' added by this member' : ''} yet.</Small> : null}
         {outlook.data ? (
           <Small>
@@ -167,9 +176,28 @@ export function LoadsScreen({ rigId }: { rigId: string }) {
               setPicked(null);
             }}
             maxWatts={maxWatts}
+            systemVoltage={V}
           />
         </View>
       ) : null}
+    </View>
+  );
+}
+
+function LoadActions({ load, confirming, onEdit, onAsk, onKeep, onDelete }: { load: SavedLoad; confirming: boolean; onEdit: () => void; onAsk: () => void; onKeep: () => void; onDelete: () => void }) {
+  return (
+    <View style={styles.actions}>
+      {confirming ? (
+        <>
+          <Button tone="danger" label="Delete" accessibilityLabel={`Yes, delete ${load.name}`} onPress={onDelete} testID={`confirm-delete-${load.name}`} />
+          <Button tone="secondary" label="Keep" accessibilityLabel={`Keep ${load.name}`} onPress={onKeep} />
+        </>
+      ) : (
+        <>
+          <Button tone="secondary" label="Edit" accessibilityLabel={`Edit ${load.name}`} onPress={onEdit} testID={`edit-${load.name}`} />
+          <Button tone="danger" label="Delete" accessibilityLabel={`Delete ${load.name}`} onPress={onAsk} testID={`delete-${load.name}`} />
+        </>
+      )}
     </View>
   );
 }
@@ -180,13 +208,11 @@ function stripSaved({ id: _id, addedBy: _a, ...load }: SavedLoad): Load {
 
 const styles = StyleSheet.create({
   head: { flexDirection: 'row', justifyContent: 'space-between', alignItems: 'center' },
-  filters: { flexDirection: 'row', flexWrap: 'wrap', gap: space.xs },
   tr: { flexDirection: 'row', alignItems: 'center', borderBottomWidth: 1, borderBottomColor: colors.line, paddingVertical: space.sm },
   th: { ...type.small, fontFamily: 'Nunito_700Bold', color: colors.ink },
   td: { ...type.small, color: colors.ink, paddingRight: space.sm },
-  actions: { flexDirection: 'row', gap: space.xs },
-  chip: { borderWidth: 1, borderColor: colors.line, borderRadius: 999, paddingHorizontal: space.md, paddingVertical: space.xs },
-  chipOn: { backgroundColor: colors.night, borderColor: colors.night },
-  chipText: { ...type.small, color: colors.ink, fontFamily: 'Nunito_700Bold' },
-  chipTextOn: { color: colors.paper },
+  actions: { flexDirection: 'row', gap: space.sm, flexWrap: 'wrap' },
+  card: { gap: 2, paddingVertical: space.md, borderBottomWidth: 1, borderBottomColor: colors.line },
+  cardTitle: { ...type.heading, fontSize: 15, color: colors.ink },
+  cardLine: { ...type.small, color: colors.ink },
 });

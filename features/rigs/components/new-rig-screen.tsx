@@ -1,12 +1,13 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm, useWatch } from 'react-hook-form';
 import { useState } from 'react';
-import { Pressable, StyleSheet, Switch, Text, View } from 'react-native';
+import { Pressable, StyleSheet, Text, View } from 'react-native';
 
-import { ChoiceField, NumberField } from '@/components/form';
+import { ChoiceField, Form, NumberField, SubmitButton } from '@/components/form';
 import { TextField } from '@/components/text-field';
 import { PageTitle } from '@/components/page-title';
-import { Body, Button, Card, Heading, Small, Title } from '@/components/ui';
+import { Toggle } from '@/components/toggle';
+import { Body, Card, Heading, Small, Title } from '@/components/ui';
 import { useIsWide } from '@/components/use-layout';
 import type { Device } from '@/shared/devices';
 import { ROUTINE_PRESETS, type RoutineKey } from '@/shared/routines';
@@ -65,6 +66,7 @@ export function NewRigScreen({ onCreated }: { onCreated: (rigId: string) => void
   });
   const col = wide ? styles.col : undefined;
   return (
+    <Form control={form.control} onSubmit={onSubmit} busy={create.isPending}>
     <View style={{ gap: space.lg }} testID="new-rig-screen">
       <PageTitle parts={['New rig']} />
       <Title>New rig</Title>
@@ -72,8 +74,8 @@ export function NewRigScreen({ onCreated }: { onCreated: (rigId: string) => void
       <View style={[styles.cols, wide && styles.colsWide]}>
         <Card style={col}>
           <Heading>Vehicle</Heading>
-          <TextField control={form.control} name="name" label="Name" placeholder="Wren" />
-          <TextField control={form.control} name="vehicle" label="Vehicle" placeholder="Long-wheelbase panel van" />
+          <TextField control={form.control} name="name" label="Name" hint="What you call this vehicle." maxLength={60} />
+          <TextField control={form.control} name="vehicle" label="Vehicle (optional)" hint="Its make, model or kind." maxLength={120} />
           <ChoiceField control={form.control} name="power.systemVoltage" label="System voltage" hint="6 V only on some old vehicles." options={[{ value: 12, label: '12 V' }, { value: 24, label: '24 V' }, { value: 6, label: '6 V' }]} />
         </Card>
         <Card style={col}>
@@ -84,10 +86,7 @@ export function NewRigScreen({ onCreated }: { onCreated: (rigId: string) => void
         </Card>
         <Card style={col}>
           <Heading>Inverter</Heading>
-          <View style={styles.switchRow}>
-            <Text style={styles.switchLabel}>The rig has an inverter</Text>
-            <Switch testID="field-has-inverter" aria-label="The rig has an inverter" value={hasInverter} onValueChange={toggleInverter} />
-          </View>
+          <Toggle testID="field-has-inverter" label="The rig has an inverter" value={hasInverter} onChange={toggleInverter} />
           {hasInverter ? (
             <>
               <NumberField control={form.control} name="power.inverter.ratedW" label="Rating" unit="W" />
@@ -158,8 +157,9 @@ export function NewRigScreen({ onCreated }: { onCreated: (rigId: string) => void
           {create.error.message}
         </Text>
       ) : null}
-      <Button testID="create-rig" label="Create rig and see the Outlook" onPress={onSubmit} busy={create.isPending} />
+      <SubmitButton testID="create-rig" label="Create rig and see the Outlook" />
     </View>
+    </Form>
   );
 }
 

@@ -5,7 +5,7 @@ import { formatDays } from '@/components/format';
 import { MarginBadge } from '@/components/margin-badge';
 import { OfflineNotice } from '@/components/offline-notice';
 import { Body, Button, Card, Heading, Small } from '@/components/ui';
-import { formatEnergy, useUnits } from '@/components/units';
+import { energyInText, formatEnergy, useUnits } from '@/components/units';
 import { useIsWide } from '@/components/use-layout';
 import { fixGainText } from '@/shared/energy/project';
 import { FIX_WIRING_CAUTION, needsWiringCaution } from '@/shared/safety';
@@ -31,6 +31,7 @@ const FIX_TITLE: Record<string, string> = {
 /** `narrow`: lay out as on a phone even on a wide screen (the Outlook shares the width with Notes on Clients). */
 export function OutlookScreen({ rigId, narrow = false }: { rigId: string; narrow?: boolean }) {
   const outlook = useOutlookQuery(rigId);
+  const { units } = useUnits();
   const wide = useIsWide() && !narrow;
   if (outlook.isPending) return <ActivityIndicator color={colors.night} />;
   if (outlook.isError)
@@ -71,7 +72,7 @@ export function OutlookScreen({ rigId, narrow = false }: { rigId: string; narrow
             <Heading>State of charge, {o.horizonDays} days</Heading>
             <SocChart series={o.series} cutoffSocPercent={o.cutoffSocPercent} startSocPercent={o.start.socPercent} />
             <Small>
-              Dark line: on your routine. Grey: parked. Red line: cut-off at {o.cutoffSocPercent} %. Amber bands: driving.
+              Solid dark line: on your routine. Dashed grey line: parked. Red line: cut-off at {o.cutoffSocPercent} %. Amber bands: driving. A line stops once the battery is flat.
             </Small>
           </Card>
           {o.trip ? (
@@ -86,7 +87,7 @@ export function OutlookScreen({ rigId, narrow = false }: { rigId: string; narrow
               <Heading>Warnings</Heading>
               {o.warnings.map((w) => (
                 <Body key={w.code} style={{ color: colors.short }}>
-                  ▲ {w.message}
+                  ▲ {energyInText(w.message, units, o.assumptions.systemVoltage as number | undefined)}
                 </Body>
               ))}
             </Card>
@@ -165,7 +166,7 @@ function Fixes({ outlook }: { outlook: Outlook }) {
           <Text style={styles.fixTitle}>
             {FIX_TITLE[f.kind] ?? f.kind}: {fixGainText(f)}
           </Text>
-          <Body>{f.summary}</Body>
+          <Body>{energyInText(f.summary, units, V)}</Body>
           {f.stops ? (
             <Small style={f.cutsEssential ? { color: colors.short, fontFamily: 'Nunito_700Bold' } : undefined} testID={`fix-stops-${f.kind}`}>
               Stops {f.stops.loads.map((n) => (f.stops!.essentialLoads.includes(n) ? `${n} (essential)` : n)).join(', ')}{' '}
@@ -173,7 +174,7 @@ function Fixes({ outlook }: { outlook: Outlook }) {
               {formatEnergy(f.stops.ahPerDayNotServed, units, V)} a day not served.
             </Small>
           ) : null}
-          <Small>Cost in convenience: {f.convenience}</Small>
+          <Small>Cost in convenience: {energyInText(f.convenience, units, V)}</Small>
           <Link
             href={{ pathname: '/rigs/[rigId]/hookup', params: { rigId: outlook.rigId, fix: f.kind } }}
             style={styles.fixLink}

@@ -4,6 +4,7 @@ import { type Control, Controller, type FieldPath, type FieldValues, useWatch } 
 import { Pressable, StyleSheet, Switch, Text, View } from 'react-native';
 
 import { NumberField } from '@/components/form';
+import { HourField } from '@/components/pickers';
 import { Small } from '@/components/ui';
 import { routineOf } from '@/shared/routines';
 import { colors, space, type } from '@/shared/theme';
@@ -29,12 +30,12 @@ export function DrivingFields<T extends FieldValues>({ control, prefix }: Props<
       <Small>Minutes of driving each day.</Small>
       <View style={styles.days}>
         {DAYS.map((d, i) => (
-          <View key={d} style={{ width: 84 }}>
-            <NumberField control={control} name={at<T>(prefix, `charging.drivingMinutesPerDay.${i}`)} label={d} />
+          <View key={d} style={{ flexBasis: 104, flexGrow: 1, maxWidth: 140 }}>
+            <NumberField compact control={control} name={at<T>(prefix, `charging.drivingMinutesPerDay.${i}`)} label={d} unit="min" />
           </View>
         ))}
       </View>
-      <NumberField control={control} name={at<T>(prefix, 'charging.drivingStartHour')} label="Driving starts at" unit="h" hint="Hour of day, 0 to 23." />
+      <HourField control={control} name={at<T>(prefix, 'charging.drivingStartHour')} label="Driving starts at" />
     </>
   );
 }

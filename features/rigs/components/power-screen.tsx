@@ -1,9 +1,10 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
-import { ActivityIndicator, Switch, Text, View } from 'react-native';
+import { ActivityIndicator, Text, View } from 'react-native';
 
-import { ChoiceField, NumberField } from '@/components/form';
+import { ChoiceField, Form, NumberField, SubmitButton } from '@/components/form';
+import { Toggle } from '@/components/toggle';
 import { Body, Button, Card, Heading, Small } from '@/components/ui';
 import { cToF, fToC, useUnits } from '@/components/units';
 import { useIsWide } from '@/components/use-layout';
@@ -46,8 +47,9 @@ function PowerForm({ rig }: { rig: Rig }) {
   const conflict = update.error instanceof ApiError && update.error.status === 409;
   const col = wide ? { flex: 1 } : undefined;
   return (
-    <View style={{ gap: space.lg }} testID="power-screen" pointerEvents={readOnly ? 'none' : 'auto'}>
-      {readOnly ? <Small>You can read the power system; only an owner changes it.</Small> : null}
+    <Form control={form.control} onSubmit={save} busy={update.isPending} readOnly={readOnly}>
+    <View style={{ gap: space.lg }} testID="power-screen">
+      {readOnly ? <Small testID="power-read-only">You can read the power system; only an owner changes it.</Small> : null}
       <View style={[{ gap: space.lg }, wide && { flexDirection: 'row', alignItems: 'flex-start' }]}>
         <Card style={col}>
           <Heading>Battery bank</Heading>
@@ -71,10 +73,7 @@ function PowerForm({ rig }: { rig: Rig }) {
         </Card>
         <Card style={col}>
           <Heading>Inverter and standby</Heading>
-          <View style={{ flexDirection: 'row', alignItems: 'center', gap: space.md }}>
-            <Text style={{ ...type.heading, fontSize: 15, flex: 1, color: colors.ink }}>The rig has an inverter</Text>
-            <Switch aria-label="The rig has an inverter" value={hasInverter} onValueChange={toggle} disabled={readOnly} />
-          </View>
+          <Toggle testID="field-has-inverter" label="The rig has an inverter" value={hasInverter} onChange={toggle} disabled={readOnly} />
           {hasInverter ? (
             <>
               <NumberField control={form.control} name="inverter.ratedW" label="Rating" unit="W" />
@@ -120,9 +119,10 @@ function PowerForm({ rig }: { rig: Rig }) {
         </Text>
       ) : null}
       {update.isSuccess ? <Text style={{ ...type.body, color: colors.comfortable }}>Saved. The Outlook is updated.</Text> : null}
-      {!readOnly ? <Button testID="power-save" label="Save the power system" onPress={save} busy={update.isPending} /> : null}
+      <SubmitButton testID="power-save" label="Save the power system" />
       {rig.permissions.delete ? <DeleteRig rig={rig} /> : null}
     </View>
+    </Form>
   );
 }
 
@@ -136,11 +136,11 @@ function DeleteRig({ rig }: { rig: Rig }) {
       <Small>Deletes {rig.name} with all its loads for everyone in the household. This cannot be undone.</Small>
       {asking ? (
         <View style={{ flexDirection: 'row', gap: space.md, flexWrap: 'wrap' }}>
-          <Button testID="confirm-delete-rig" label={`Yes, delete ${rig.name}`} onPress={() => remove.mutate(undefined, { onSuccess: () => router.replace('/') })} busy={remove.isPending} />
-          <Button label="Keep it" onPress={() => setAsking(false)} />
+          <Button tone="danger" testID="confirm-delete-rig" label={`Yes, delete ${rig.name}`} onPress={() => remove.mutate(undefined, { onSuccess: () => router.replace('/') })} busy={remove.isPending} />
+          <Button tone="secondary" label="Keep it" onPress={() => setAsking(false)} />
         </View>
       ) : (
-        <Button testID="delete-rig" label="Delete rig…" onPress={() => setAsking(true)} />
+        <Button tone="danger" testID="delete-rig" label="Delete rig…" onPress={() => setAsking(true)} />
       )}
       {remove.isError ? <Text role="alert" style={{ ...type.body, color: colors.short }}>{remove.error.message}</Text> : null}
     </Card>

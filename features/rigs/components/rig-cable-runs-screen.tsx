@@ -3,7 +3,7 @@ import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { ActivityIndicator, Pressable, StyleSheet, Text, View } from 'react-native';
 
-import { ChoiceField, NumberField, SwitchField } from '@/components/form';
+import { ChoiceField, Form, NumberField, SubmitButton, SwitchField } from '@/components/form';
 import { TextField } from '@/components/text-field';
 import { Body, Button, Card, Heading, Small } from '@/components/ui';
 import { useUnits } from '@/components/units';
@@ -148,10 +148,11 @@ function RunForm(props: {
     if (next === 'inverter') form.setValue('purpose', 'inverter');
   };
   return (
+    <Form control={form.control} onSubmit={form.handleSubmit(props.onSubmit)} busy={props.busy}>
     <Card testID="run-form">
       <Heading>{props.initial.label ? `Edit ${props.initial.label}` : 'Add a cable run'}</Heading>
-      <TextField control={form.control} name="label" label="Name" placeholder="Inverter feed" />
-      <TextField control={form.control} name="to" label="To" placeholder="Inverter" />
+      <TextField control={form.control} name="label" label="Name" hint="Which circuit, as you call it." maxLength={80} />
+      <TextField control={form.control} name="to" label="To" hint="The device at the end of the wire." maxLength={80} />
       <RunSourceChips value={source} onChange={chooseSource} hasLoads={props.loads.length > 0} hasInverter={props.hasInverter} />
       {source === 'load' ? <ChoiceField control={form.control} name="loadId" label="Load" options={props.loads} hint="DC loads only: an AC load's own circuit is mains wiring, outside these tables." /> : null}
       {source === 'current' ? <NumberField control={form.control} name="currentA" label={L.current} unit="A" /> : null}
@@ -169,11 +170,9 @@ function RunForm(props: {
         options={[{ value: undefined as unknown as '10', label: 'None' }, ...(['16', '14', '12', '10', '8', '6', '4', '2'] as const).map((a) => ({ value: a, label: `${a} AWG` }))]}
       />
       {props.error ? <Text role="alert" style={styles.warning}>{props.error}</Text> : null}
-      <View style={{ flexDirection: 'row', gap: space.md }}>
-        <Button testID="run-submit" label="Save" onPress={form.handleSubmit(props.onSubmit)} busy={props.busy} />
-        <Button label="Cancel" onPress={props.onCancel} />
-      </View>
+      <SubmitButton testID="run-submit" label="Save" extra={<Button tone="secondary" label="Cancel" onPress={props.onCancel} />} />
     </Card>
+    </Form>
   );
 }
 
@@ -183,7 +182,7 @@ const styles = StyleSheet.create({
   name: { ...type.heading, fontSize: 15, color: colors.ink },
   figures: { ...type.body, color: colors.night, fontFamily: 'Nunito_700Bold' },
   warning: { ...type.small, color: colors.short, fontFamily: 'Nunito_700Bold' },
-  chip: { borderWidth: 1, borderColor: colors.line, borderRadius: 999, paddingHorizontal: space.md, paddingVertical: space.xs },
+  chip: { minHeight: 44, minWidth: 44, justifyContent: 'center', borderWidth: 1, borderColor: colors.inkSoft, borderRadius: 999, paddingHorizontal: space.md, paddingVertical: space.xs },
   chipOn: { backgroundColor: colors.night, borderColor: colors.night },
   chipText: { ...type.small, color: colors.ink, fontFamily: 'Nunito_700Bold' },
   chipTextOn: { color: colors.paper },

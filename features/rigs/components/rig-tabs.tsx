@@ -53,7 +53,7 @@ export function RigTabs({ rigId, unreadNotes = 0 }: { rigId: string; unreadNotes
 
 const styles = StyleSheet.create({
   row: { gap: space.sm, paddingVertical: space.xs },
-  tab: { paddingHorizontal: space.lg, paddingVertical: space.sm, borderRadius: radius.md, borderWidth: 1, borderColor: colors.line, backgroundColor: colors.card },
+  tab: { minHeight: 44, justifyContent: 'center', paddingHorizontal: space.lg, paddingVertical: space.sm, borderRadius: radius.md, borderWidth: 1, borderColor: colors.line, backgroundColor: colors.card },
   tabOn: { backgroundColor: colors.night, borderColor: colors.night },
   label: { ...type.heading, fontSize: 15, color: colors.ink },
   labelOn: { color: colors.paper },

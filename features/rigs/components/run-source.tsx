@@ -1,6 +1,4 @@
-import { Pressable, StyleSheet, Text, View } from 'react-native';
-
-import { colors, space, type } from '@/shared/theme';
+import { ChipGroup } from '@/components/chips';
 
 export type RunSource = 'current' | 'load' | 'inverter';
 
@@ -12,20 +10,5 @@ export function RunSourceChips({ value, onChange, hasLoads, hasInverter }: { val
     ...(hasInverter ? [{ value: 'inverter' as const, label: 'Feeds the inverter', testID: 'run-from-inverter' }] : []),
   ];
   if (options.length < 2) return null;
-  return (
-    <View style={{ flexDirection: 'row', gap: space.sm, flexWrap: 'wrap' }}>
-      {options.map((o) => (
-        <Pressable key={o.value} role="radio" aria-checked={value === o.value} onPress={() => onChange(o.value)} style={[styles.chip, value === o.value && styles.chipOn]} testID={o.testID}>
-          <Text style={[styles.chipText, value === o.value && styles.chipTextOn]}>{o.label}</Text>
-        </Pressable>
-      ))}
-    </View>
-  );
+  return <ChipGroup label="The run's current" options={options} value={value} onChange={onChange} testIDPrefix="run-from" />;
 }
-
-const styles = StyleSheet.create({
-  chip: { borderWidth: 1, borderColor: colors.line, borderRadius: 999, paddingHorizontal: space.md, paddingVertical: space.xs },
-  chipOn: { backgroundColor: colors.night, borderColor: colors.night },
-  chipText: { ...type.small, color: colors.ink, fontFamily: 'Nunito_700Bold' },
-  chipTextOn: { color: colors.paper },
-});

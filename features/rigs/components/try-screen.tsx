@@ -4,7 +4,7 @@ import { StyleSheet, Text, View } from 'react-native';
 import { formatDays } from '@/components/format';
 import { MarginBadge } from '@/components/margin-badge';
 import { Body, Button, Card, Heading, Small } from '@/components/ui';
-import { formatEnergy, useUnits } from '@/components/units';
+import { energyInText, formatEnergy, useUnits } from '@/components/units';
 import { useIsWide } from '@/components/use-layout';
 import type { CompareSide } from '@/shared/energy/project';
 import type { Load } from '@/shared/schemas/projection';
@@ -40,6 +40,7 @@ export function TryScreen({ rigId }: { rigId: string }) {
           submitLabel="Try it"
           busy={tryIt.isPending}
           error={tryIt.error?.message}
+          systemVoltage={V}
           onSubmit={(load) => {
             setCandidate(load);
             tryIt.mutate([{ ...load, status: 'candidate' }]);
@@ -56,8 +57,8 @@ export function TryScreen({ rigId }: { rigId: string }) {
               </Small>
             ) : null}
             <View style={styles.sides}>
-              <Side title="Now" side={result.without} horizon={horizon} />
-              <Side title={`With ${candidate.name}`} side={result.with} horizon={horizon} testID="with" />
+              <Side title="Now" side={result.without} horizon={horizon} V={V} />
+              <Side title={`With ${candidate.name}`} side={result.with} horizon={horizon} V={V} testID="with" />
             </View>
             <Body>
               Days parked {delta(result.delta.daysParked)}, days on your routine {delta(result.delta.daysOnRoutine)}; {result.delta.dailyAh >= 0 ? '+' : ''}
@@ -65,7 +66,7 @@ export function TryScreen({ rigId }: { rigId: string }) {
             </Body>
             {result.warnings.map((w) => (
               <Small key={w.code} style={{ color: colors.short }}>
-                ▲ {w.message}
+                ▲ {energyInText(w.message, units, V)}
               </Small>
             ))}
             {rig.data?.permissions.manageLoads ? (
@@ -78,7 +79,7 @@ export function TryScreen({ rigId }: { rigId: string }) {
                     adopt.mutate({ ...candidate, status: 'installed' }, { onSuccess: () => { setCandidate(null); tryIt.reset(); } })
                   }
                 />
-                <Button label="Discard" onPress={() => { setCandidate(null); tryIt.reset(); }} />
+                <Button tone="danger" label="Discard" testID="discard" onPress={() => { setCandidate(null); tryIt.reset(); }} />
               </View>
             ) : null}
             {adopt.isError ? <Text role="alert" style={{ ...type.body, color: colors.short }}>{adopt.error.message}</Text> : null}
@@ -99,7 +100,8 @@ function delta(d: number | null) {
   return `${d >= 0 ? '+' : ''}${d.toFixed(1)}`;
 }
 
-function Side({ title, side, horizon, testID }: { title: string; side: CompareSide; horizon: number; testID?: string }) {
+function Side({ title, side, horizon, V, testID }: { title: string; side: CompareSide; horizon: number; V: number; testID?: string }) {
+  const { units } = useUnits();
   return (
     <View style={styles.side} testID={testID}>
       <Text style={styles.sideTitle}>{title}</Text>
@@ -109,7 +111,7 @@ function Side({ title, side, horizon, testID }: { title: string; side: CompareSi
       <Small>parked</Small>
       <Text style={styles.mid}>{formatDays(side.daysOnRoutine, horizon)}</Text>
       <Small>on your routine</Small>
-      <Small>{formatEnergy(side.dailyAh, useUnits().units)} a day</Small>
+      <Small>{formatEnergy(side.dailyAh, units, V)} a day</Small>
       <MarginBadge state={side.marginState} />
     </View>
   );

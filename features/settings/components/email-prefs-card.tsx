@@ -2,9 +2,9 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm, useWatch } from 'react-hook-form';
 import { ActivityIndicator, Text } from 'react-native';
 
-import { ChoiceField, NumberField, showApiErrors, SwitchField } from '@/components/form';
-import { TextField } from '@/components/text-field';
-import { Body, Button, Card, Heading, Small } from '@/components/ui';
+import { ChoiceField, Form, showApiErrors, SubmitButton, SwitchField } from '@/components/form';
+import { HourField, TimeZoneField } from '@/components/pickers';
+import { Body, Card, Heading, Small } from '@/components/ui';
 import { type EmailPrefs, emailPrefsSchema } from '@/shared/schemas/email-prefs';
 import { colors } from '@/shared/theme';
 import { useEmailPrefsMutation, useEmailPrefsQuery } from '../api/email-prefs';
@@ -41,6 +41,7 @@ function PrefsForm({ initial, saved }: { initial: EmailPrefs; saved: boolean }) 
     }
   });
   return (
+    <Form control={control} onSubmit={submit} busy={save.isPending}>
     <Card testID="email-prefs">
       <Heading>E-mail</Heading>
       <Small>For every rig you share. Each e-mail also has a link that turns its kind off in one click.</Small>
@@ -48,8 +49,8 @@ function PrefsForm({ initial, saved }: { initial: EmailPrefs; saved: boolean }) 
       {reportsOn ? (
         <>
           <ChoiceField control={control} name="reportWeekday" label="Report day" options={WEEKDAYS} />
-          <NumberField control={control} name="reportHour" label="Report hour (0 to 23)" unit="h" />
-          <TextField control={control} name="timeZone" label="Time zone" hint="A name such as Europe/Lisbon or America/Denver." autoCapitalize="none" autoCorrect={false} />
+          <HourField control={control} name="reportHour" label="Report time" hint="To the hour, in the time zone below." />
+          <TimeZoneField control={control} name="timeZone" label="Time zone" hint="This device's zone until you choose another." />
         </>
       ) : null}
       <SwitchField control={control} name="warningsOn" label="Low-margin warning" hint="One e-mail when a rig's margin falls, with what changed and the top Fix; no repeat until it recovers." />
@@ -65,8 +66,9 @@ function PrefsForm({ initial, saved }: { initial: EmailPrefs; saved: boolean }) 
         />
       ) : null}
       <SwitchField control={control} name="noteEmailsOn" label="New notes" hint="Notes written within 10 minutes come together in one e-mail." />
-      <Button label="Save e-mail preferences" onPress={submit} busy={save.isPending} testID="save-email-prefs" />
+      <SubmitButton label="Save e-mail preferences" testID="save-email-prefs" />
       {save.isSuccess ? <Text role="status" style={{ color: colors.comfortable }}>Saved.</Text> : !saved ? <Small>Not saved yet: these are the defaults.</Small> : null}
     </Card>
+    </Form>
   );
 }

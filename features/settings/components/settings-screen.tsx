@@ -1,9 +1,10 @@
-import { Pressable, StyleSheet, Text, View } from 'react-native';
+import { View } from 'react-native';
 
 import { PageTitle } from '@/components/page-title';
-import { Body, Card, Heading, Small, Title } from '@/components/ui';
+import { Card, Heading, Small, Title } from '@/components/ui';
+import { ChipGroup } from '@/components/chips';
 import { type Units, useUnits } from '@/components/units';
-import { colors, space, type } from '@/shared/theme';
+import { space } from '@/shared/theme';
 import { DeliveryProblemsCard } from './delivery-problems-card';
 import { EmailPrefsCard } from './email-prefs-card';
 
@@ -26,30 +27,10 @@ export function SettingsScreen({ isAdmin = false }: { isAdmin?: boolean }) {
         <Heading>Units</Heading>
         <Small>Kept on this device. The model always works in amps and amp-hours at the battery.</Small>
         {CHOICES.map((c) => (
-          <View key={c.key} style={{ gap: space.xs }} role="radiogroup" aria-label={c.label}>
-            <Body>{c.label}</Body>
-            <View style={styles.row}>
-              {c.options.map((o) => {
-                const on = units[c.key] === o.value;
-                return (
-                  <Pressable key={o.value} role="radio" aria-checked={on} testID={`unit-${c.key}-${o.value}`} onPress={() => setUnits({ ...units, [c.key]: o.value } as Units)} style={[styles.chip, on && styles.chipOn]}>
-                    <Text style={[styles.chipText, on && styles.chipTextOn]}>{o.label}</Text>
-                  </Pressable>
-                );
-              })}
-            </View>
-          </View>
+          <ChipGroup key={c.key} label={c.label} options={c.options} value={units[c.key] as string} onChange={(v) => setUnits({ ...units, [c.key]: v } as Units)} testIDPrefix={`unit-${c.key}`} />
         ))}
       </Card>
       {isAdmin ? <DeliveryProblemsCard /> : null}
     </View>
   );
 }
-
-const styles = StyleSheet.create({
-  row: { flexDirection: 'row', gap: space.sm, flexWrap: 'wrap' },
-  chip: { borderWidth: 1, borderColor: colors.line, borderRadius: 999, paddingHorizontal: space.md, paddingVertical: space.xs + 2, backgroundColor: colors.card },
-  chipOn: { backgroundColor: colors.night, borderColor: colors.night },
-  chipText: { ...type.small, color: colors.ink, fontFamily: 'Nunito_700Bold' },
-  chipTextOn: { color: colors.paper },
-});
