@@ -6,14 +6,21 @@ import type { RigAccess } from '../middleware/rig-access';
 import { svgToPng, weekChartSvg } from '../emails/chart';
 import { renderSheet, type SheetData, type SheetSize } from '../sheet/render';
 import { modelInput, stripLoad } from './rigs-model';
+import { rigHookup } from './hookup';
 import { readRig } from './rigs';
 
-/**
- * The hook-up plan for the sheet. Hook-ups (the drawn inverter circuit) do not exist yet; when they do,
- * return the rig's plan here as lines of text and the sheet prints it in its own section.
- */
-function hookUpPlanOf(_rigId: string): string[] | null {
-  return null;
+/** The inverter's hook-up plan as lines for the sheet (as the Hook-up tab shows it), or null without an inverter. */
+async function hookUpPlanOf(db: Db, rig: RigAccess, hasInverter: boolean): Promise<string[] | null> {
+  if (!hasInverter) return null;
+  const plan = await rigHookup(db, rig, {});
+  const f = plan.feed;
+  const size = f.awg ? `${f.awg} AWG${f.mm2 ? ` (${f.mm2} mm²)` : ''}` : f.mm2 ? `${f.mm2} mm²` : null;
+  return [
+    `Feed: ${f.currentA} A at full output near the ${f.cutOutV} V cut-out, ${f.continuousA} A continuous (125 %)${size ? `; ${size} over ${f.lengthM} m` : ''}${f.dropPercent !== null ? `, ${f.dropPercent} % drop` : ''}${f.fuseA ? `; protection ${f.fuseA} A` : ''}.`,
+    ...plan.parts.map((p) => `${p.label}${p.ratingA !== null ? ` (${p.ratingA} A)` : ''}${p.notes.length ? `: ${p.notes.join(' ')}` : ''}`),
+    ...plan.warnings.map((w) => `Warning: ${w.message}`),
+    "The inverter maker's own fuse and cable instructions come first.",
+  ];
 }
 
 /** The budget sheet of a rig as a PDF: the same model run as the Outlook, laid out for print. */
@@ -42,7 +49,7 @@ export async function budgetSheet(db: Db, rig: RigAccess, size: SheetSize, now =
     projection: p,
     assumptions: explainAssumptions(dto.power, p.assumptions, p.horizonDays),
     chartPng,
-    hookUp: hookUpPlanOf(dto.id),
+    hookUp: await hookUpPlanOf(db, rig, dto.power.inverter !== null),
     madeAt: now,
   };
   const pdf = await renderSheet(data, size);

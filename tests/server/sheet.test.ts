@@ -58,7 +58,11 @@ describe('GET /api/rigs/:rigId/sheet.pdf', () => {
     expect(text).toContain('Home Power');
     expect(text).toContain('qualified auto electrician');
     expect(text).toContain('not a guarantee');
-    expect(text).not.toContain('Hook-up plan');
+    // Wren's 300 W inverter: its hook-up plan, the feed at 300 W / (10.5 V x 0.9) = 31.75 A near the cut-out
+    // (REFERENCES.md: inverters and their switching, common practice), as GET /hookup plans it.
+    expect(text).toContain('Hook-up plan');
+    expect(text).toContain('Feed: 31.75 A');
+    expect(text).toContain("The inverter maker's own fuse and cable instructions come first.");
   });
 
   it('prints on A4 by default and on Letter when asked', async () => {
