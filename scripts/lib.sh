@@ -74,6 +74,7 @@ build_web() {
   fi
   say "exporting the web build (expo export --platform web)"
   local t0=$SECONDS
+  mkdir -p "$ROOT/.data"
   # canvaskit.wasm goes out under a name that changes with its content; the chart's loader is built with it.
   EXPO_PUBLIC_CANVASKIT_WASM="canvaskit.$(sha256sum "$ROOT/public/canvaskit.wasm" | cut -c1-16).wasm"
   export EXPO_PUBLIC_CANVASKIT_WASM
