@@ -7,9 +7,9 @@ import { View } from 'react-native';
 import { CartesianChart, Line, Scatter } from 'victory-native';
 
 import { colors } from '@/shared/theme';
-import type { ReadingsChartProps, SocChartProps } from './chart-types';
+import type { ReadingsChartProps, SocChartProps, TripChartProps } from './chart-types';
 import { dateLabel, midnightTicks } from './date-axis';
-import { dayTicks, drivingBands, stopWhenFlat } from './describe';
+import { dayTicks, drivingBands, stopWhenFlat, tripDayTicks, tripHourAt } from './describe';
 
 const font = require('@expo-google-fonts/nunito/400Regular/Nunito_400Regular.ttf');
 
@@ -108,6 +108,64 @@ function ReadingsChartImpl({ points, showSoc, showVoltage }: ReadingsChartProps)
   );
 }
 
-const charts = { SocChart: SocChartImpl, ReadingsChart: ReadingsChartImpl };
+/** A trip's charge through its legs: the cut-off, each drive as a band, a thin line where each stay begins with its name when there is room. */
+function TripChartImpl({ series, stays, drives, cutoffSocPercent }: TripChartProps) {
+  const axisFont = useFont(font, 12);
+  const [width, setWidth] = useState(0);
+  const hours = series.length ? series[series.length - 1].hour : 24;
+  const every = [1, 2, 7].find((k) => width === 0 || width / (hours / 24 / k) >= 44) ?? 7;
+  const ticks = tripDayTicks(series, every);
+  const starts = stays.map((s) => ({ name: s.name, hour: Math.max(0, tripHourAt(series, s.arriveAt) ?? 0) }));
+  // The series begins at the end of the first hour: a trip that starts with a stay starts at its charge on arrival.
+  const first = starts[0]?.hour === 0 ? [{ hour: 0, soc: stays[0].socOnArrivalPercent }] : [];
+  const data = [...first, ...series.map((p) => ({ hour: p.hour, soc: p.socPercent }))];
+  const minBandHours = width > 0 ? (8 / width) * hours : 1;
+  const bands = drives.flatMap((d) => {
+    const from = tripHourAt(series, `${d.date}T${String(d.startHour).padStart(2, '0')}:00`);
+    if (from === null) return [];
+    const span = Math.max(d.minutes / 60, minBandHours);
+    return [{ from: from + d.minutes / 120 - span / 2, to: from + d.minutes / 120 + span / 2 }];
+  });
+  return (
+    <View style={{ flex: 1 }} onLayout={(e) => setWidth(e.nativeEvent.layout.width)}>
+      <CartesianChart
+        data={data}
+        xKey="hour"
+        yKeys={['soc']}
+        domain={{ x: [0, hours], y: [0, 100] }}
+        domainPadding={{ top: 8, bottom: 8 }}
+        padding={{ left: 4, right: 12, top: 12, bottom: 4 }}
+        xAxis={{ font: axisFont, tickValues: ticks.map((t) => t.hour), tickCount: Math.max(1, ticks.length), formatXLabel: (h) => ticks.find((t) => t.hour === Number(h))?.label ?? '', labelColor: colors.inkSoft, lineColor: colors.line }}
+        yAxis={[{ font: axisFont, tickValues: [0, 25, 50, 75, 100], tickCount: 5, formatYLabel: (v) => `${v} %`, labelColor: colors.ink, lineColor: colors.line }]}
+      >
+        {({ points, chartBounds, xScale, yScale }) => {
+          const y = yScale(cutoffSocPercent);
+          return (
+            <>
+              {bands.map((b, i) => (
+                <Rect key={i} x={xScale(b.from)} y={chartBounds.top} width={Math.max(1, xScale(b.to) - xScale(b.from))} height={chartBounds.bottom - chartBounds.top} color="rgba(244, 185, 66, 0.45)" />
+              ))}
+              {starts.map((s, i) => {
+                const x = xScale(s.hour);
+                const room = (i + 1 < starts.length ? xScale(starts[i + 1].hour) : chartBounds.right) - x;
+                return (
+                  <Group key={i}>
+                    {i > 0 ? <SkiaLine p1={vec(x, chartBounds.top)} p2={vec(x, chartBounds.bottom)} color={colors.inkSoft} strokeWidth={1} /> : null}
+                    {axisFont && room >= s.name.length * 7 + 8 ? <SkiaText x={x + 4} y={chartBounds.top + 14} text={s.name} font={axisFont} color={colors.inkSoft} /> : null}
+                  </Group>
+                );
+              })}
+              <SkiaLine p1={vec(chartBounds.left, y)} p2={vec(chartBounds.right, y)} color={colors.short} strokeWidth={2} />
+              {axisFont ? <SkiaText x={chartBounds.right - 70} y={y - 4} text="cut-off" font={axisFont} color={colors.short} /> : null}
+              <Line points={points.soc} color={colors.night} strokeWidth={3} />
+            </>
+          );
+        }}
+      </CartesianChart>
+    </View>
+  );
+}
+
+const charts = { SocChart: SocChartImpl, ReadingsChart: ReadingsChartImpl, TripChart: TripChartImpl };
 export type Charts = typeof charts;
 export default charts;

@@ -49,3 +49,35 @@ export function drivingBands(series: Point[], minHours: number): { from: number;
 export function stopWhenFlat(values: number[], floor = 0.5): (number | undefined)[] {
   return values.map((v, i) => (v <= floor && i > 0 && values[i - 1] <= floor ? undefined : v));
 }
+
+type TripPoint = { hour: number; at: string; socPercent: number; stay: number };
+const weekdayOf = (at: string) => DAY_NAMES[(new Date(`${at.slice(0, 10)}T12:00:00Z`).getUTCDay() + 6) % 7];
+
+/**
+ * A trip's chart in one line: where and when the charge first reaches the cut-off, or else its lowest point
+ * ("lowest 42 % at the Lake on Tuesday, above the cut-off (25 %) all trip").
+ */
+export function describeTripSoc(series: TripPoint[], stayNames: string[], cutoffSocPercent: number): string {
+  if (!series.length) return 'No trip to show.';
+  const place = (p: TripPoint) => `at ${stayNames[p.stay] ?? 'the first stay'} on ${weekdayOf(p.at)} about ${p.at.slice(11, 16)}`;
+  const cross = series.find((p) => p.socPercent <= cutoffSocPercent + 1e-9);
+  if (cross) return `Reaches the cut-off (${cutoffSocPercent} %) ${place(cross)}.`;
+  const lowest = series.reduce((m, p) => (p.socPercent < m.socPercent ? p : m));
+  return `Lowest ${Math.round(lowest.socPercent)} % ${place(lowest)}, above the cut-off (${cutoffSocPercent} %) all trip.`;
+}
+
+/** Hours of the trip's midnights, every `everyDays` days, with the weekday that begins there. */
+export function tripDayTicks(series: TripPoint[], everyDays: number): { hour: number; label: string }[] {
+  return series
+    .filter((p) => p.at.endsWith('T00:00'))
+    .filter((_, i) => i % everyDays === 0)
+    .map((p) => ({ hour: p.hour, label: weekdayOf(p.at).slice(0, 3) }));
+}
+
+/** The hour (from the trip's start) a stamp "YYYY-MM-DDTHH:00" falls at, or null if outside the series. */
+export function tripHourAt(series: TripPoint[], at: string): number | null {
+  if (!series.length) return null;
+  const first = series[0];
+  const h = first.hour + (Date.parse(`${at}:00Z`) - Date.parse(`${first.at}:00Z`)) / 3_600_000;
+  return Number.isFinite(h) ? h : null;
+}

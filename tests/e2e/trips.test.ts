@@ -2,7 +2,7 @@ import path from 'node:path';
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 
-import { BASE, launchChromium, PHONE, SHOTS, signInAs } from './browser';
+import { BASE, launchChromium, PHONE, SHOTS, signInAs, WIDE } from './browser';
 
 let browser: Browser;
 beforeAll(async () => {
@@ -19,6 +19,30 @@ async function fill(page: Page, testId: string, value: string) {
 }
 
 type StayAnswer = { name: string; socOnArrivalPercent: number; socOnLeavingPercent: number; marginState: string };
+type TripAnswer = { stays: StayAnswer[]; series: { socPercent: number; stay: number }[]; cutoffSocPercent: number };
+
+/** The trip's chart: a box of fixed height that keeps its place when the chart arrives, drawn, with its reading in words. */
+async function expectTripChart(page: Page, answer: TripAnswer) {
+  const chart = page.getByTestId('trip-chart');
+  await chart.waitFor();
+  const before = (await page.getByTestId('trip-stays').boundingBox())!;
+  await chart.locator('canvas').waitFor();
+  await page.waitForTimeout(800);
+  expect((await chart.boundingBox())!.height).toBe(220);
+  expect((await page.getByTestId('trip-stays').boundingBox())!.y).toBe(before.y);
+  expect((await chart.screenshot()).length).toBeGreaterThan(4000);
+  // The words name the lowest charge of the model's series and the stay it falls in (or where it meets the cut-off).
+  const words = (await page.getByTestId('trip-chart-words').textContent())!;
+  const lowest = answer.series.reduce((m, p) => (p.socPercent < m.socPercent ? p : m));
+  const at = answer.stays[lowest.stay].name;
+  if (lowest.socPercent > answer.cutoffSocPercent) {
+    expect(words).toMatch(new RegExp(`^Lowest ${Math.round(lowest.socPercent)} % at ${at} on [A-Z][a-z]+day about \\d\\d:00, above the cut-off \\(${answer.cutoffSocPercent} %\\) all trip\\.$`));
+  } else {
+    expect(words).toMatch(new RegExp(`^Reaches the cut-off \\(${answer.cutoffSocPercent} %\\) at (Lake|Farm) on [A-Z][a-z]+day about \\d\\d:00\\.$`));
+  }
+  const described = (await chart.getAttribute('aria-describedby'))!;
+  expect(await page.evaluate((id) => document.getElementById(id)?.textContent, described)).toBe(words);
+}
 
 describe('trips', () => {
   it('plans a trip of two stays and a drive on a phone and reads the margin at each stay', async () => {
@@ -52,7 +76,7 @@ describe('trips', () => {
     const trips = (await (await page.request.get(`${BASE}/api/rigs/${page.url().split('/rigs/')[1].split('/')[0]}/trips`)).json()) as { trips: { id: string; name: string }[] };
     const trip = trips.trips.find((t) => t.name === name)!;
     const rigId = page.url().split('/rigs/')[1].split('/')[0];
-    const answer = (await (await page.request.get(`${BASE}/api/rigs/${rigId}/trips/${trip.id}/outlook`)).json()) as { stays: StayAnswer[] };
+    const answer = (await (await page.request.get(`${BASE}/api/rigs/${rigId}/trips/${trip.id}/outlook`)).json()) as TripAnswer;
     // The screen shows each stay's charge on arrival and on leaving and its margin, as the model answers them.
     for (const stay of answer.stays) {
       const figures = await page.getByTestId(`stay-figures-${stay.name}`).textContent();
@@ -63,7 +87,17 @@ describe('trips', () => {
     expect(answer.stays.map((s) => s.name)).toEqual(['Lake', 'Farm']);
     expect(answer.stays[1].socOnLeavingPercent).toBe(100);
     expect(await page.getByTestId('stay-margin-Lake').textContent()).toMatch(/Days to cut-off here|Arrives below the cut-off/);
+    await expectTripChart(page, answer);
     await page.screenshot({ path: path.join(SHOTS, 'trips-phone.png'), fullPage: true });
+
+    // The same chart on a wide screen, beside nothing wider than its column.
+    const wide = await browser.newPage({ viewport: WIDE });
+    await signInAs(wide, 'tobi@example.org');
+    await wide.goto(`${BASE}/rigs/${rigId}/trips`);
+    await wide.getByTestId('trip-outlook').waitFor();
+    await expectTripChart(wide, answer);
+    await wide.screenshot({ path: path.join(SHOTS, 'trips-wide.png'), fullPage: true });
+    await wide.close();
 
     // The Outlook follows the active trip.
     await page.getByTestId('tab-Outlook').click();

@@ -7,6 +7,7 @@ import type { Trip, TripInput } from '@/shared/schemas/trip';
 import { colors, space, type } from '@/shared/theme';
 import { useRigQuery } from '../api/rig';
 import { type SavedTrip, useTripCreateMutation, useTripDeleteMutation, useTripOutlookQuery, useTripsQuery, useTripUpdateMutation } from '../api/trips';
+import { TripChart } from './chart/trip-chart';
 import { NEW_TRIP, TripForm } from './trip-form';
 import { TripStays } from './trip-stays';
 
@@ -94,6 +95,7 @@ function TripOutlookCard({ rigId, tripId }: { rigId: string; tripId: string }) {
       <Small>
         Ends at {o.endSocPercent.toFixed(0)} % (cut-off {o.cutoffSocPercent} %). Each stay&apos;s sun comes from its latitude and dates (FAO-56), its battery temperature from the expected low and high.
       </Small>
+      <TripChart series={o.series} stays={o.stays} drives={o.drives} cutoffSocPercent={o.cutoffSocPercent} />
       <TripStays trip={o} />
     </Card>
   );
