@@ -124,6 +124,8 @@ describe.each(SIZES)('at %s size', (size, viewport) => {
   it('gives the Outlook chart its reading in words, tied to the chart', async () => {
     const page = await browser.newPage({ viewport });
     await signInAs(page, 'ines@example.org');
+    // Text links are 44 px targets too (by padding or minHeight, the font unchanged).
+    expect((await page.getByTestId('open-Wren').boundingBox())!.height).toBeGreaterThanOrEqual(44);
     await page.getByTestId('open-Wren').click();
     const chart = page.getByTestId('soc-chart');
     await chart.locator('canvas').waitFor();
@@ -134,6 +136,9 @@ describe.each(SIZES)('at %s size', (size, viewport) => {
     expect(await chart.getAttribute('role')).toBe('img');
     const described = (await chart.getAttribute('aria-describedby'))!;
     expect(await page.evaluate((id) => document.getElementById(id)?.textContent, described)).toBe(words);
+    for (const link of [page.getByTestId('change-routine'), page.locator('[data-testid^="fix-hookup-"]').first()]) {
+      expect((await link.boundingBox())!.height).toBeGreaterThanOrEqual(44);
+    }
     await chart.scrollIntoViewIfNeeded();
     await chart.screenshot({ path: path.join(SHOTS, `outlook-chart-${size}.png`) });
     await page.close();
