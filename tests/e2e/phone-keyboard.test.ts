@@ -206,6 +206,10 @@ describe.each(SIZES)('at %s size', (size, viewport) => {
     await tabTo('field-has-inverter');
     await page.keyboard.press('Space');
     expect(await page.getByTestId('field-has-inverter').getAttribute('aria-checked')).toBe('false');
+    // The week's driving has no default: Enter on a starting point picks it.
+    await tabTo('routine-mostly-parked');
+    await page.keyboard.press('Enter');
+    expect(await page.getByTestId('routine-mostly-parked').getAttribute('aria-checked')).toBe('true');
     await tabTo('field-power.plannedStayDays');
     await page.keyboard.press('Enter');
     await page.keyboard.press('Enter');
