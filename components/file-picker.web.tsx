@@ -1,7 +1,7 @@
 import { useRef } from 'react';
 import { Pressable, StyleSheet, Text } from 'react-native';
 
-import { colors, radius, space, type } from '@/shared/theme';
+import { colors, radius, space, TAP_MIN, type } from '@/shared/theme';
 
 /** A button that opens the browser's file chooser; the chosen File goes to onPick. */
 export function FilePicker({ label, accept, onPick, testID }: { label: string; accept: string; onPick: (file: File) => void; testID?: string }) {
@@ -28,6 +28,6 @@ export function FilePicker({ label, accept, onPick, testID }: { label: string; a
 }
 
 const styles = StyleSheet.create({
-  button: { borderWidth: 1, borderColor: colors.night, borderRadius: radius.md, paddingHorizontal: space.lg, paddingVertical: space.sm, alignSelf: 'flex-start', backgroundColor: colors.card },
+  button: { minHeight: TAP_MIN, justifyContent: 'center', borderWidth: 1, borderColor: colors.night, borderRadius: radius.md, paddingHorizontal: space.lg, paddingVertical: space.sm, alignSelf: 'flex-start', backgroundColor: colors.card },
   label: { ...type.heading, fontSize: 15, color: colors.night },
 });

@@ -35,5 +35,12 @@ export const type = {
   figure: { fontFamily: fonts.heavy, fontSize: 40, lineHeight: 44 },
 } as const;
 
+/** The least height of anything pressed: 44 px (WCAG 2.5.5), by padding or minHeight, never a bigger font. */
+export const TAP_MIN = 44;
+/** A text link on its own line: a 44 px target, its text centred in it, no wider than the text. */
+export const linkTarget = { minHeight: TAP_MIN, display: 'flex', alignItems: 'center', alignSelf: 'flex-start' } as const;
+/** A Pressable holding a text link or text button: the same 44 px target. */
+export const pressTarget = { minHeight: TAP_MIN, justifyContent: 'center', alignSelf: 'flex-start' } as const;
+
 /** Width from which the app shows a side rail and two columns. */
 export const WIDE_BREAKPOINT = 900;

@@ -23,6 +23,11 @@ describe('notes between an advisor and a household', () => {
     await advisor.getByTestId('clients-screen').waitFor();
     await advisor.getByTestId('client-Wren').click();
     await advisor.getByTestId('new-note').waitFor();
+    // An empty note: the form says so by the button and focuses the note field; nothing is posted.
+    await advisor.getByTestId('post-note').click();
+    await advisor.getByTestId('form-error-summary').getByText('Write something first.').waitFor();
+    expect(await advisor.evaluate(() => document.activeElement?.getAttribute('data-testid'))).toBe('field-body');
+    expect(await advisor.getByTestId('new-note').innerText()).toContain('0 of 4000');
     await advisor.getByRole('radio', { name: 'Compressor fridge (40 L)' }).click();
     await advisor.getByTestId('field-body').fill(text);
     await advisor.getByTestId('post-note').click();
@@ -70,6 +75,7 @@ describe('notes between an advisor and a household', () => {
     await signInAs(ownerPhone, 'ines@example.org');
     await ownerPhone.getByTestId('open-Wren').click();
     await ownerPhone.getByTestId('tab-Notes').click();
+    expect((await ownerPhone.getByTestId('toggle-resolved').boundingBox())!.height).toBeGreaterThanOrEqual(44);
     await ownerPhone.getByTestId('toggle-resolved').click();
     await ownerPhone.locator('[data-testid^="thread-"]', { hasText: text }).waitFor();
     await ownerPhone.screenshot({ path: path.join(SHOTS, 'notes-owner-phone.png'), fullPage: true });

@@ -124,6 +124,8 @@ describe.each(SIZES)('at %s size', (size, viewport) => {
   it('gives the Outlook chart its reading in words, tied to the chart', async () => {
     const page = await browser.newPage({ viewport });
     await signInAs(page, 'ines@example.org');
+    // Text links are 44 px targets too (by padding or minHeight, the font unchanged).
+    expect((await page.getByTestId('open-Wren').boundingBox())!.height).toBeGreaterThanOrEqual(44);
     await page.getByTestId('open-Wren').click();
     const chart = page.getByTestId('soc-chart');
     await chart.locator('canvas').waitFor();
@@ -134,6 +136,9 @@ describe.each(SIZES)('at %s size', (size, viewport) => {
     expect(await chart.getAttribute('role')).toBe('img');
     const described = (await chart.getAttribute('aria-describedby'))!;
     expect(await page.evaluate((id) => document.getElementById(id)?.textContent, described)).toBe(words);
+    for (const link of [page.getByTestId('change-routine'), page.locator('[data-testid^="fix-hookup-"]').first()]) {
+      expect((await link.boundingBox())!.height).toBeGreaterThanOrEqual(44);
+    }
     await chart.scrollIntoViewIfNeeded();
     await chart.screenshot({ path: path.join(SHOTS, `outlook-chart-${size}.png`) });
     await page.close();
@@ -201,6 +206,10 @@ describe.each(SIZES)('at %s size', (size, viewport) => {
     await tabTo('field-has-inverter');
     await page.keyboard.press('Space');
     expect(await page.getByTestId('field-has-inverter').getAttribute('aria-checked')).toBe('false');
+    // The week's driving has no default: Enter on a starting point picks it.
+    await tabTo('routine-mostly-parked');
+    await page.keyboard.press('Enter');
+    expect(await page.getByTestId('routine-mostly-parked').getAttribute('aria-checked')).toBe('true');
     await tabTo('field-power.plannedStayDays');
     await page.keyboard.press('Enter');
     await page.keyboard.press('Enter');

@@ -1,7 +1,7 @@
 import { useRouter } from 'expo-router';
 import { Pressable, StyleSheet, Text, View } from 'react-native';
 
-import { colors, space, type } from '@/shared/theme';
+import { colors, space, TAP_MIN, type } from '@/shared/theme';
 import { type Me, useSignOutMutation } from '../api/session';
 
 const ROLE_LABEL = { traveller: 'Traveller', advisor: 'Advisor', admin: 'Admin' } as const;
@@ -43,6 +43,6 @@ const styles = StyleSheet.create({
   compact: { flexDirection: 'row', alignItems: 'center', gap: space.md },
   name: { ...type.heading, color: colors.paper, maxWidth: 140 },
   role: { ...type.small, color: '#C9D6E2' },
-  button: { paddingVertical: space.xs, paddingHorizontal: space.md, borderRadius: 8, borderWidth: 1, borderColor: '#C9D6E2', alignSelf: 'flex-start' },
+  button: { minHeight: TAP_MIN, justifyContent: 'center', paddingVertical: space.xs, paddingHorizontal: space.md, borderRadius: 8, borderWidth: 1, borderColor: '#C9D6E2', alignSelf: 'flex-start' },
   buttonLabel: { ...type.small, color: colors.paper, fontFamily: 'Nunito_700Bold' },
 });

@@ -3,7 +3,7 @@ import { Image, ScrollView, StyleSheet, Text, View } from 'react-native';
 
 import { PageTitle } from '@/components/page-title';
 import { Card, Title } from '@/components/ui';
-import { colors, space, type } from '@/shared/theme';
+import { colors, linkTarget, space, type } from '@/shared/theme';
 
 const mark = require('@/assets/images/mark.png');
 
@@ -32,6 +32,8 @@ const styles = StyleSheet.create({
   card: { width: '100%', maxWidth: 440, gap: space.md },
 });
 
-export const linkStyle = { color: colors.focus, fontFamily: 'Nunito_700Bold', fontSize: 15 } as const;
+export const linkStyle = { color: colors.focus, fontFamily: 'Nunito_700Bold', fontSize: 15, ...linkTarget } as const;
+/** A sentence and its link side by side (the link keeps its own 44 px target). */
+export const rowStyle = { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', columnGap: 6 } as const;
 export const alertStyle = { ...type.body, color: colors.short } as const;
 export const okStyle = { ...type.body, color: colors.comfortable } as const;

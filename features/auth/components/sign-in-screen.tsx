@@ -11,7 +11,7 @@ import { safeNext } from '@/lib/app-url';
 import { type SignInForm, signInSchema } from '@/shared/schemas/auth';
 import { space } from '@/shared/theme';
 import { useSignInMutation } from '../api/auth-actions';
-import { alertStyle, AuthFrame, linkStyle, okStyle } from './auth-frame';
+import { alertStyle, AuthFrame, linkStyle, okStyle, rowStyle } from './auth-frame';
 
 function signInError(err: unknown): string {
   if (err instanceof ApiError) {
@@ -46,12 +46,12 @@ export function SignInScreen() {
         <Link href="/forgot-password" style={linkStyle}>
           Forgot your password?
         </Link>
-        <Body>
-          New to Keyoff?{' '}
+        <View style={rowStyle}>
+          <Body>New to Keyoff?</Body>
           <Link href={{ pathname: '/sign-up', params: params.next ? { next: params.next } : {} }} style={linkStyle}>
             Create an account
           </Link>
-        </Body>
+        </View>
       </View>
     </AuthFrame>
     </Form>

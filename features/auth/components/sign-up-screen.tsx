@@ -1,7 +1,7 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { Link, useLocalSearchParams, useRouter } from 'expo-router';
 import { useForm } from 'react-hook-form';
-import { Text } from 'react-native';
+import { Text, View } from 'react-native';
 
 import { Form, SubmitButton } from '@/components/form';
 import { TextField } from '@/components/text-field';
@@ -10,7 +10,7 @@ import { ApiError } from '@/lib/api-client';
 import { appUrl, safeNext } from '@/lib/app-url';
 import { type SignUpForm, signUpSchema } from '@/shared/schemas/auth';
 import { useSignUpMutation } from '../api/auth-actions';
-import { alertStyle, AuthFrame, linkStyle } from './auth-frame';
+import { alertStyle, AuthFrame, linkStyle, rowStyle } from './auth-frame';
 
 export function SignUpScreen() {
   const params = useLocalSearchParams<{ next?: string }>();
@@ -43,12 +43,12 @@ export function SignUpScreen() {
         </Text>
       ) : null}
       <SubmitButton testID="sign-up-submit" label="Create account" />
-      <Body>
-        Already have an account?{' '}
+      <View style={rowStyle}>
+        <Body>Already have an account?</Body>
         <Link href={{ pathname: '/sign-in', params: params.next ? { next: params.next } : {} }} style={linkStyle}>
           Sign in
         </Link>
-      </Body>
+      </View>
     </AuthFrame>
     </Form>
   );

@@ -4,12 +4,12 @@ import { useForm } from 'react-hook-form';
 import { ActivityIndicator, Image, Pressable, StyleSheet, Text, View } from 'react-native';
 import { z } from 'zod';
 
-import { ChoiceField } from '@/components/form';
+import { ChoiceField, Form, showApiErrors, SubmitButton } from '@/components/form';
 import { formatWhen } from '@/components/format';
 import { TextField } from '@/components/text-field';
-import { Body, Button, Card, Heading, Small } from '@/components/ui';
+import { Body, Card, Heading, Small } from '@/components/ui';
 import { noteCreateSchema, noteEditSchema } from '@/shared/schemas/note';
-import { colors, radius, space, type } from '@/shared/theme';
+import { colors, pressTarget, radius, space, type } from '@/shared/theme';
 import { type Note, type Thread, useNoteCreateMutation, useNoteDeleteMutation, useNoteEditMutation, useNotesQuery, useNotesReadMutation, useThreadResolveMutation } from '../api/notes';
 
 export type NoteTarget = { kind: 'rig' | 'load' | 'cable-run' | 'reading'; id?: string; name: string };
@@ -51,7 +51,7 @@ export function NotesPanel({ rigId, canComment, canDeleteAny, targets, photos = 
         <ThreadCard key={t.id} rigId={rigId} thread={t} canComment={canComment} canDeleteAny={canDeleteAny} />
       ))}
       {resolved.length ? (
-        <Pressable role="button" onPress={() => setShowResolved(!showResolved)} testID="toggle-resolved">
+        <Pressable role="button" onPress={() => setShowResolved(!showResolved)} style={pressTarget} testID="toggle-resolved">
           <Text style={styles.link}>{showResolved ? 'Hide' : 'Show'} resolved ({resolved.length})</Text>
         </Pressable>
       ) : null}
@@ -59,6 +59,9 @@ export function NotesPanel({ rigId, canComment, canDeleteAny, targets, photos = 
     </View>
   );
 }
+
+/** The longest note the server takes (noteCreateSchema), shown as a count under each note field. */
+const NOTE_MAX = 4000;
 
 /** The form: the note's text (the server's rule) and what it is about, as "kind:id". */
 const newNoteSchema = z.object({ body: noteCreateSchema.shape.body, about: z.string() });
@@ -74,15 +77,17 @@ function NewNote({ rigId, targets }: { rigId: string; targets: NoteTarget[] }) {
       await create.mutateAsync({ body, targetKind: kind, ...(id ? { targetId: id } : {}) });
       reset({ body: '', about });
     } catch (err) {
-      setError('body', { message: err instanceof Error ? err.message : 'Could not save the note.' });
+      showApiErrors(err, setError, 'body');
     }
   });
   return (
     <Card testID="new-note">
       <Heading>Write a note</Heading>
-      <ChoiceField control={control} name="about" label="About" options={options} />
-      <TextField control={control} name="body" label="Note" multiline numberOfLines={4} placeholder="What you noticed, asked or changed" style={styles.multiline} maxLength={4000} />
-      <Button label="Post note" onPress={submit} busy={create.isPending} testID="post-note" />
+      <Form control={control} onSubmit={submit} busy={create.isPending}>
+        <ChoiceField control={control} name="about" label="About" options={options} />
+        <TextField control={control} name="body" label="Note" multiline numberOfLines={4} placeholder="What you noticed, asked or changed" style={styles.multiline} maxLength={NOTE_MAX} />
+        <SubmitButton label="Post note" testID="post-note" />
+      </Form>
     </Card>
   );
 }
@@ -141,14 +146,16 @@ function ReplyForm({ rigId, parentId, onDone }: { rigId: string; parentId: strin
       await create.mutateAsync({ body, parentId });
       onDone();
     } catch (err) {
-      setError('body', { message: err instanceof Error ? err.message : 'Could not save the reply.' });
+      showApiErrors(err, setError, 'body');
     }
   });
   return (
-    <View style={{ gap: space.sm }}>
-      <TextField control={control} name="body" label="Reply" multiline numberOfLines={3} style={styles.multiline} maxLength={4000} />
-      <Button label="Post reply" onPress={submit} busy={create.isPending} testID={`post-reply-${parentId}`} />
-    </View>
+    <Form control={control} onSubmit={submit} busy={create.isPending}>
+      <View style={{ gap: space.sm }}>
+        <TextField control={control} name="body" label="Reply" multiline numberOfLines={3} style={styles.multiline} maxLength={NOTE_MAX} />
+        <SubmitButton label="Post reply" testID={`post-reply-${parentId}`} />
+      </View>
+    </Form>
   );
 }
 
@@ -160,17 +167,16 @@ function EditForm({ rigId, note, onDone }: { rigId: string; note: Note; onDone: 
       await edit.mutateAsync({ id: note.id, body });
       onDone();
     } catch (err) {
-      setError('body', { message: err instanceof Error ? err.message : 'Could not save the change.' });
+      showApiErrors(err, setError, 'body');
     }
   });
   return (
-    <View style={{ gap: space.sm }}>
-      <TextField control={control} name="body" label="Edit note" multiline numberOfLines={3} style={styles.multiline} maxLength={4000} />
-      <View style={styles.actions}>
-        <Button label="Save" onPress={submit} busy={edit.isPending} />
-        <Chip label="Cancel" onPress={onDone} />
+    <Form control={control} onSubmit={submit} busy={edit.isPending}>
+      <View style={{ gap: space.sm }}>
+        <TextField control={control} name="body" label="Edit note" multiline numberOfLines={3} style={styles.multiline} maxLength={NOTE_MAX} />
+        <SubmitButton label="Save" extra={<Chip label="Cancel" onPress={onDone} />} />
       </View>
-    </View>
+    </Form>
   );
 }
 

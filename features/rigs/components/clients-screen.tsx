@@ -6,7 +6,7 @@ import { MarginBadge } from '@/components/margin-badge';
 import { PageTitle } from '@/components/page-title';
 import { Body, Card, Heading, Small, Title } from '@/components/ui';
 import { useIsWide } from '@/components/use-layout';
-import { colors, radius, space, type } from '@/shared/theme';
+import { colors, pressTarget, radius, space, type } from '@/shared/theme';
 import { type Client, useClientsQuery } from '../api/clients';
 import { OutlookScreen } from './outlook-screen';
 
@@ -28,7 +28,7 @@ export function ClientsScreen({ onOpen, renderNotes }: Props) {
   if (wide && open) {
     return (
       <View style={{ gap: space.lg }} testID="client-detail">
-        <Pressable role="button" onPress={() => setSelected(null)} testID="back-to-clients">
+        <Pressable role="button" onPress={() => setSelected(null)} style={pressTarget} testID="back-to-clients">
           <Text style={styles.link}>← All clients</Text>
         </Pressable>
         <Title>{open.name}</Title>

@@ -9,7 +9,7 @@ import { energyInText, formatEnergy, useUnits } from '@/components/units';
 import { useIsWide } from '@/components/use-layout';
 import { fixGainText } from '@/shared/energy/project';
 import { FIX_WIRING_CAUTION, needsWiringCaution } from '@/shared/safety';
-import { colors, radius, space, type } from '@/shared/theme';
+import { colors, linkTarget, radius, space, type } from '@/shared/theme';
 import { type Outlook, useOutlookQuery } from '../api/rig';
 import { SocChart } from './chart/soc-chart';
 import { OutlookBasis } from './outlook/outlook-basis';
@@ -204,7 +204,7 @@ const styles = StyleSheet.create({
   barTrack: { height: 8, backgroundColor: colors.paper, borderRadius: 4 },
   bar: { height: 8, borderRadius: 4 },
   fix: { gap: 2, paddingVertical: space.sm, borderBottomWidth: 1, borderBottomColor: colors.line },
-  fixLink: { ...type.body, fontFamily: 'Nunito_700Bold', color: colors.focus, textDecorationLine: 'underline', paddingVertical: space.sm },
+  fixLink: { ...type.body, fontFamily: 'Nunito_700Bold', color: colors.focus, textDecorationLine: 'underline', ...linkTarget },
   fixTitle: { ...type.heading, fontSize: 15, color: colors.ink },
   caution: { backgroundColor: '#FFF4DC', borderColor: colors.lampDeep, borderWidth: 1, borderRadius: radius.md, padding: space.md },
 });

@@ -3,7 +3,7 @@ import { ActivityIndicator, Pressable, StyleSheet, Text, View } from 'react-nati
 
 import { Body, Card, Heading, Small } from '@/components/ui';
 import { useIsWide } from '@/components/use-layout';
-import { colors, radius, space, type } from '@/shared/theme';
+import { colors, radius, space, TAP_MIN, type } from '@/shared/theme';
 import { type SentEmail, useSentEmailsQuery } from '../api/emails';
 import { EmailFrame, ReportPreviewFrame } from './email-frame';
 
@@ -54,7 +54,7 @@ export function ReportsScreen({ rigId }: { rigId: string }) {
 }
 
 const styles = StyleSheet.create({
-  row: { paddingVertical: space.sm, paddingHorizontal: space.sm, borderRadius: radius.sm, gap: 2, borderTopWidth: 1, borderTopColor: colors.line },
+  row: { minHeight: TAP_MIN, paddingVertical: space.sm, paddingHorizontal: space.sm, borderRadius: radius.sm, gap: 2, borderTopWidth: 1, borderTopColor: colors.line },
   rowOn: { backgroundColor: colors.paper },
   subject: { ...type.heading, fontSize: 15, color: colors.ink },
 });

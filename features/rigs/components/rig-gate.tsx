@@ -4,7 +4,7 @@ import { ActivityIndicator, StyleSheet } from 'react-native';
 
 import { Body, Button, Card, Title } from '@/components/ui';
 import { ApiError } from '@/lib/api-client';
-import { colors } from '@/shared/theme';
+import { colors, linkTarget } from '@/shared/theme';
 import { useRigQuery } from '../api/rig';
 
 /**
@@ -35,4 +35,4 @@ export function RigGate({ rigId, children }: { rigId: string; children: ReactNod
   return children;
 }
 
-const styles = StyleSheet.create({ link: { color: colors.focus, fontFamily: 'Nunito_700Bold', fontSize: 15, paddingVertical: 10 } });
+const styles = StyleSheet.create({ link: { color: colors.focus, fontFamily: 'Nunito_700Bold', fontSize: 15, ...linkTarget } });

@@ -7,7 +7,7 @@ import { OfflineNotice } from '@/components/offline-notice';
 import { PageTitle } from '@/components/page-title';
 import { Body, Button, Card, Heading, Small, Title } from '@/components/ui';
 import { useIsWide } from '@/components/use-layout';
-import { colors, space, type } from '@/shared/theme';
+import { colors, pressTarget, space, type } from '@/shared/theme';
 import { type RigSummary, useRigsQuery } from '../api/get-rigs';
 
 /** Rigs (home): each rig with its Days parked, margin state and last change. */
@@ -71,12 +71,12 @@ function RigCard({ rig, wide }: { rig: RigSummary; wide: boolean }) {
       </Small>
       <View style={{ flexDirection: 'row', gap: space.lg }}>
         <Link href={{ pathname: '/rigs/[rigId]', params: { rigId: rig.id } }} asChild>
-          <Pressable role="link" testID={`open-${rig.name}`}>
+          <Pressable role="link" style={pressTarget} testID={`open-${rig.name}`}>
             <Text style={styles.link}>Open the Outlook</Text>
           </Pressable>
         </Link>
         <Link href={{ pathname: '/rigs/[rigId]/people', params: { rigId: rig.id } }} asChild>
-          <Pressable role="link" testID={`people-${rig.name}`}>
+          <Pressable role="link" style={pressTarget} testID={`people-${rig.name}`}>
             <Text style={styles.link}>People</Text>
           </Pressable>
         </Link>

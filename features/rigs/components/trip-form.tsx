@@ -7,7 +7,7 @@ import { ChoiceField, NumberField, showApiErrors, SwitchField } from '@/componen
 import { TextField } from '@/components/text-field';
 import { Button, Card, Heading, Small } from '@/components/ui';
 import { type Trip, type TripInput, tripSchema } from '@/shared/schemas/trip';
-import { colors, space, type } from '@/shared/theme';
+import { colors, space, TAP_MIN, type } from '@/shared/theme';
 import type { RecentPlace } from '../api/trips';
 
 type Path = FieldPath<TripInput>;
@@ -125,7 +125,7 @@ const styles = StyleSheet.create({
   leg: { gap: space.sm, paddingVertical: space.sm, borderTopWidth: 1, borderTopColor: colors.line },
   legTitle: { ...type.heading, fontSize: 15, color: colors.ink },
   chips: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm },
-  chip: { borderWidth: 1, borderColor: colors.line, borderRadius: 999, paddingHorizontal: space.md, paddingVertical: space.xs },
+  chip: { minHeight: TAP_MIN, justifyContent: 'center', borderWidth: 1, borderColor: colors.line, borderRadius: 999, paddingHorizontal: space.md, paddingVertical: space.xs },
   chipText: { ...type.small, color: colors.ink, fontFamily: 'Nunito_700Bold' },
   warning: { ...type.small, color: colors.short, fontFamily: 'Nunito_700Bold' },
 });

@@ -4,7 +4,7 @@ import { ActivityIndicator, Pressable, StyleSheet, Text, View } from 'react-nati
 import { Body, Button, Card, Heading, Small } from '@/components/ui';
 import { useIsWide } from '@/components/use-layout';
 import type { Trip, TripInput } from '@/shared/schemas/trip';
-import { colors, space, type } from '@/shared/theme';
+import { colors, space, TAP_MIN, type } from '@/shared/theme';
 import { useRigQuery } from '../api/rig';
 import { type SavedTrip, useTripCreateMutation, useTripDeleteMutation, useTripOutlookQuery, useTripsQuery, useTripUpdateMutation } from '../api/trips';
 import { TripChart } from './chart/trip-chart';
@@ -105,6 +105,6 @@ const styles = StyleSheet.create({
   head: { flexDirection: 'row', justifyContent: 'space-between', alignItems: 'center' },
   trip: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm, paddingVertical: space.sm, borderBottomWidth: 1, borderBottomColor: colors.line, alignItems: 'flex-start' },
   name: { ...type.heading, fontSize: 15, color: colors.ink },
-  chip: { borderWidth: 1, borderColor: colors.line, borderRadius: 999, paddingHorizontal: space.md, paddingVertical: space.xs },
+  chip: { minHeight: TAP_MIN, justifyContent: 'center', borderWidth: 1, borderColor: colors.line, borderRadius: 999, paddingHorizontal: space.md, paddingVertical: space.xs },
   chipText: { ...type.small, color: colors.ink, fontFamily: 'Nunito_700Bold' },
 });

@@ -2,7 +2,7 @@ import { StyleSheet, View } from 'react-native';
 import { Link } from 'expo-router';
 
 import { Body, Card, Title } from '@/components/ui';
-import { colors, space } from '@/shared/theme';
+import { colors, linkTarget, space } from '@/shared/theme';
 
 export function NotFoundScreen() {
   return (
@@ -21,5 +21,5 @@ export function NotFoundScreen() {
 const styles = StyleSheet.create({
   root: { flex: 1, backgroundColor: colors.paper, alignItems: 'center', justifyContent: 'center', padding: space.lg },
   card: { maxWidth: 480, width: '100%' },
-  link: { color: colors.focus, fontFamily: 'Nunito_700Bold', fontSize: 15 },
+  link: { color: colors.focus, fontFamily: 'Nunito_700Bold', fontSize: 15, ...linkTarget },
 });

@@ -3,7 +3,7 @@ import { StyleSheet, Text, View } from 'react-native';
 
 import { Small } from '@/components/ui';
 import { routineOf } from '@/shared/routines';
-import { colors, space, type } from '@/shared/theme';
+import { colors, linkTarget, space, type } from '@/shared/theme';
 import { useRigQuery } from '../../api/rig';
 
 /** What the Outlook's figures assume about driving and staying, named, with the way to change them. */
@@ -30,5 +30,5 @@ const styles = StyleSheet.create({
   row: { gap: space.xs },
   text: { ...type.body, color: colors.ink },
   strong: { fontFamily: 'Nunito_700Bold' },
-  link: { color: colors.focus, fontFamily: 'Nunito_700Bold', fontSize: 15, paddingVertical: space.xs },
+  link: { color: colors.focus, fontFamily: 'Nunito_700Bold', fontSize: 15, ...linkTarget },
 });

@@ -8,7 +8,7 @@ import { NumberField } from '@/components/form';
 import { Button, Card, Heading, Small } from '@/components/ui';
 import { explainAssumptions } from '@/shared/energy/assumptions';
 import { type CutoffForm, cutoffFormSchema } from '@/shared/schemas/rig';
-import { colors, space, type } from '@/shared/theme';
+import { colors, linkTarget, space, type } from '@/shared/theme';
 import { type Outlook, type Rig, useRigQuery, useRigUpdateMutation } from '../../api/rig';
 
 /** "How this was worked out": every assumption behind the Outlook's figures, its source, and where to change it. */
@@ -77,6 +77,6 @@ const styles = StyleSheet.create({
   row: { gap: 2, paddingVertical: space.sm, borderTopWidth: 1, borderTopColor: colors.line },
   label: { ...type.small, color: colors.inkSoft, fontFamily: 'Nunito_700Bold' },
   value: { ...type.body, color: colors.ink },
-  link: { color: colors.focus, fontFamily: 'Nunito_700Bold', fontSize: 14 },
+  link: { color: colors.focus, fontFamily: 'Nunito_700Bold', fontSize: 14, ...linkTarget },
   cutoff: { gap: space.sm, paddingTop: space.md, borderTopWidth: 1, borderTopColor: colors.line },
 });
