@@ -45,7 +45,8 @@ export const INSULATION_OPTIONS = [
   { value: 75, label: 'Other cable, 75 °C' },
 ];
 
-const number = () => z.number({ error: 'Enter a number.' }).finite('Enter a number.');
+// Messages for a missing or non-numeric figure come from the plain error map (error-map.ts), naming the field.
+const number = () => z.number().finite();
 
 export const circuitSchema = z
   .object({

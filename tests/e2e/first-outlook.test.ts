@@ -49,7 +49,8 @@ for (const [size, viewport] of [['phone', PHONE], ['wide', WIDE]] as const) {
       await page.getByTestId('field-power.battery.chemistry-lifepo4').click();
       // Creating without a routine is refused with a message beside the routine.
       await page.getByTestId('create-rig').click();
-      await page.getByText("Choose how the week's driving goes; you can adjust it after.").waitFor();
+      // Beside the routine and again in the summary by the button.
+      await page.getByText("Choose how the week's driving goes; you can adjust it after.").first().waitFor();
       await page.getByTestId('routine-mostly-parked').click();
       await pick(page, 'compressor fridge 40', 'fridge-compressor-40l');
       await pick(page, 'cpap off', 'cpap-no-humidifier');

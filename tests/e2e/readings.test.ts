@@ -69,13 +69,14 @@ describe('the Readings screen', () => {
     // The traveller's case: 12.71 V rested, then 12.55 V two hours later with 0.8 A flowing. Rested starts off
     // again after the first save, and the drain is the measured 0.8 A, not 6.2 A from the fall in voltage.
     const form = page.getByTestId('spot-form');
-    const rested = form.getByTestId('field-rested').locator('input');
+    const rested = form.getByTestId('field-rested');
     await form.getByTestId('field-at').fill('2026-11-21T08:00');
     await form.getByTestId('field-voltageV').fill('12.71');
-    await rested.check();
+    await rested.click();
+    expect(await rested.getAttribute('aria-checked')).toBe('true');
     await page.getByTestId('save-reading').click();
     await page.getByText('12.71 V · 100 % · rested').waitFor();
-    expect(await rested.isChecked()).toBe(false);
+    expect(await rested.getAttribute('aria-checked')).toBe('false');
     await form.getByTestId('field-at').fill('2026-11-21T10:00');
     await form.getByTestId('field-voltageV').fill('12.55');
     await form.getByTestId('field-currentA').fill('0.8');
