@@ -22,8 +22,8 @@ export const outlookQueryOptions = (rigId: string) =>
   queryOptions({ queryKey: rigKeys.outlook(rigId), queryFn: () => apiFetch<Outlook>(`/api/rigs/${rigId}/outlook`) });
 export const useOutlookQuery = (rigId: string) => useQuery(outlookQueryOptions(rigId));
 
-/** Every change to a rig invalidates the rig, its Outlook and the Rigs list. */
-function useRigMutation<V, R>(rigId: string, fn: (v: V) => Promise<R>) {
+/** Every change to a rig (an edit, an applied or undone Fix) invalidates the rig, its Outlook, history, hook-up and the Rigs list. */
+export function useRigMutation<V, R>(rigId: string, fn: (v: V) => Promise<R>) {
   const client = useQueryClient();
   return useMutation({
     mutationFn: fn,
