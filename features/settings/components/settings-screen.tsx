@@ -23,6 +23,7 @@ const CHOICES: { key: keyof Units; label: string; options: { value: string; labe
 export function SettingsScreen({ isAdmin = false, energyOnAccount }: { isAdmin?: boolean; energyOnAccount?: { save: (energy: EnergyUnit) => void; error: string | null } }) {
   const { units, setUnits } = useUnits();
   const choose = (key: keyof Units, value: string) => {
+    if (units[key] === value) return;
     setUnits({ ...units, [key]: value } as Units);
     if (key === 'energy') energyOnAccount?.save(value as EnergyUnit);
   };
