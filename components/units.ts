@@ -1,8 +1,13 @@
 import { useSyncExternalStore } from 'react';
 
-/** The reader's units: kept on this device (localStorage on the web). */
-export type Units = { power: 'W' | 'A'; energy: 'Ah' | 'Wh'; temperature: 'C' | 'F'; wire: 'AWG' | 'mm2' };
-export const DEFAULT_UNITS: Units = { power: 'W', energy: 'Ah', temperature: 'C', wire: 'AWG' };
+import { type EnergyUnit, DEFAULT_ENERGY_UNIT, energyInText as energyInUnit, formatEnergy as formatEnergyIn } from '@/shared/units';
+
+/**
+ * The reader's units: kept on this device (localStorage on the web). The energy unit is also kept on the
+ * account when signed in (the e-mails use it): the session takes it from there.
+ */
+export type Units = { power: 'W' | 'A'; energy: EnergyUnit; temperature: 'C' | 'F'; wire: 'AWG' | 'mm2' };
+export const DEFAULT_UNITS: Units = { power: 'W', energy: DEFAULT_ENERGY_UNIT, temperature: 'C', wire: 'AWG' };
 const KEY = 'keyoff.units';
 
 function read(): Units {
@@ -24,7 +29,7 @@ const snapshot = () => (current ??= read());
 // The static page renders with the defaults, so hydration matches; the saved choice applies right after.
 const serverSnapshot = () => DEFAULT_UNITS;
 
-function setUnits(units: Units) {
+export function setUnits(units: Units) {
   current = units;
   try {
     localStorage.setItem(KEY, JSON.stringify(units));
@@ -34,13 +39,16 @@ function setUnits(units: Units) {
   listeners.forEach((l) => l());
 }
 
+/** The units on this device now, outside React. */
+export const currentUnits = () => snapshot();
+
 export function useUnits() {
   return { units: useSyncExternalStore(subscribe, snapshot, serverSnapshot), setUnits };
 }
 
-/** Amp-hours as the reader likes them: Ah, or Wh at the system voltage. */
+/** Amp-hours as the reader likes them: Ah, or Wh at the system voltage (shared/units.ts). */
 export function formatEnergy(ah: number, units: Units, systemVoltage = 12, digits = 1): string {
-  return units.energy === 'Wh' ? `${(ah * systemVoltage).toFixed(0)} Wh` : `${ah.toFixed(digits)} Ah`;
+  return formatEnergyIn(ah, units.energy, systemVoltage, digits);
 }
 
 /** A device's draw as W or as A at the battery. */
@@ -51,12 +59,7 @@ export function formatPower(watts: number, amps: number, units: Units): string {
 export const cToF = (c: number) => Math.round((c * 9) / 5 + 32);
 export const fToC = (f: number) => Math.round(((f - 32) * 5) / 9 * 10) / 10;
 
-/**
- * A server text (a warning, a Fix) in the reader's energy unit. The model states energy as "<number> Ah"
- * in every text it writes, whatever the wording around it; with Wh chosen each such figure is shown in
- * watt-hours at the system voltage, so reworded texts keep following the setting.
- */
+/** A server text (a warning, a Fix) in the reader's energy unit: the one conversion in shared/units.ts. */
 export function energyInText(text: string, units: Units, systemVoltage = 12): string {
-  if (units.energy === 'Ah') return text;
-  return text.replace(/(\d[\d,]*(?:\.\d+)?)\s?Ah\b/g, (_m, n: string) => `${Math.round(Number(n.replaceAll(',', '')) * systemVoltage).toLocaleString('en-US')} Wh`);
+  return energyInUnit(text, units.energy, systemVoltage);
 }

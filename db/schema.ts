@@ -150,6 +150,13 @@ export interface EmailPrefsTable {
   updated_at: Timestamp;
 }
 
+/** A person's energy unit for every text, e-mails included; no row is amp-hours. */
+export interface UnitPrefsTable {
+  user_id: string;
+  energy: Generated<'Ah' | 'Wh'>;
+  updated_at: Timestamp;
+}
+
 export interface RigMarginTable {
   rig_id: string;
   state: 'comfortable' | 'tight' | 'short';
@@ -239,6 +246,7 @@ export interface Database {
   note_reads: NoteReadTable;
   rig_history: RigHistoryTable;
   email_prefs: EmailPrefsTable;
+  unit_prefs: UnitPrefsTable;
   rig_margin: RigMarginTable;
   email_log: EmailLogTable;
   uploads: UploadTable;

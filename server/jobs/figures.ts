@@ -11,6 +11,8 @@ export type RigFigures = {
   rigId: string;
   rigName: string;
   version: number;
+  /** The rig's nominal voltage: watt-hours in an e-mail are amp-hours times this (shared/units.ts). */
+  systemVoltage: number;
   daysParked: number | null;
   daysOnRoutine: number | null;
   holds: boolean;
@@ -46,6 +48,7 @@ export function figuresOf(rig: RigRow, loads: ReturnType<typeof loadFromRow>[], 
     rigId: rig.id,
     rigName: rig.name,
     version: rig.version,
+    systemVoltage: input.systemVoltage,
     daysParked: p.parked.daysToCutoff,
     daysOnRoutine: p.routine.daysToCutoff,
     holds: p.routine.holds,

@@ -8,6 +8,7 @@ import { allRigIds, findRigForModel } from '../repositories/rigs';
 import { deliver, SendInFlight } from './deliver';
 import { daysText, figuresOfRigs, STATE_WORD, tripLines } from './figures';
 import type { Jobs } from './queue';
+import { energyFor } from './reports';
 import { type JobDeps, QUEUES } from './types';
 
 export const warningKey = (userId: string, rigId: string, fall: number) => `warning:${userId}:${rigId}:${fall}`;
@@ -42,8 +43,9 @@ export async function checkMargin(deps: JobDeps, rigId: string) {
     // Another check of this rig may be sending this very warning: it is its job then (and its retry's).
     const result = await deliverOnce(deps, { idempotencyKey: warningKey(person.id, rigId, transition.falls), kind: 'warning', userId: person.id, rigId }, async () => {
       const f = figures;
+      const { inText } = energyFor(person.energy, f);
       const what = changes.length
-        ? changes.map((c) => `${c.actor_name} ${c.summary}: days parked ${daysText(c.days_parked_before, f.horizonDays)} → ${daysText(c.days_parked_after, f.horizonDays)}.`)
+        ? changes.map((c) => `${c.actor_name} ${inText(c.summary)}: days parked ${daysText(c.days_parked_before, f.horizonDays)} → ${daysText(c.days_parked_after, f.horizonDays)}.`)
         : ['No one changed the rig since the last check; the projection moved with the routine, the planned stay or the season.'];
       const top = f.fixes[0];
       const { html, text } = await renderLetter({
@@ -58,7 +60,7 @@ export async function checkMargin(deps: JobDeps, rigId: string) {
         sections: [
           ...(f.trip ? [{ heading: `The trip: ${f.trip.name}`, lines: tripLines(f.trip) }] : []),
           { heading: 'What changed', lines: what },
-          ...(top ? [{ heading: 'The top Fix', lines: [`${top.summary} (${top.gain})`], caution: needsWiringCaution([top]) ? FIX_WIRING_CAUTION : undefined }] : []),
+          ...(top ? [{ heading: 'The top Fix', lines: [inText(`${top.summary} (${top.gain})`)], caution: needsWiringCaution([top]) ? FIX_WIRING_CAUTION : undefined }] : []),
         ],
         action: { label: 'See the Fixes', url: `${deps.config.KEYOFF_URL}/rigs/${rigId}` },
         footer: footerFor(deps.config, person.id, 'warnings'),

@@ -1,4 +1,5 @@
 import { FIX_WIRING_CAUTION, needsWiringCaution } from '@/shared/safety';
+import { type EnergyUnit, energyInText, formatEnergy } from '@/shared/units';
 import { weekChartPng } from '../emails/chart';
 import { renderLetter } from '../emails/render';
 import { footerFor, listHeaders } from '../emails/links';
@@ -72,16 +73,18 @@ export async function sendReport(deps: JobDeps, job: ReportJob) {
 
 /**
  * The weekly report's letter for one person: what sendReport mails, and what the Reports screen previews
- * before the first one goes out. The chart is the image `cid:week-ahead`.
+ * before the first one goes out. The chart is the image `cid:week-ahead`. Energy is in the person's unit
+ * (Wh at the rig's nominal voltage); the advisor's notes are quoted as written.
  */
 export async function reportLetter(
   config: JobDeps['config'],
-  user: { id: string; name: string },
+  user: { id: string; name: string; energy: EnergyUnit },
   job: Pick<ReportJob, 'rigId' | 'weekKey' | 'figures'>,
   lastState: RigFigures['marginState'] | undefined,
   notes: { author: string | null; body: string }[],
 ) {
   const f = job.figures;
+  const { amount, inText } = energyFor(user.energy, f);
   const change = !lastState ? 'your first weekly report for this rig' : lastState === f.marginState ? `unchanged since last week` : `${STATE_WORD[lastState]} last week`;
   const letter = await renderLetter({
     preview: `${f.rigName}: ${daysText(f.daysParked, f.horizonDays)} parked, margin ${STATE_WORD[f.marginState]}`,
@@ -100,11 +103,11 @@ export async function reportLetter(
       { heading: 'The week ahead', image: { cid: 'week-ahead', alt: `State of charge over the next 7 days; cut-off at ${f.cutoffSocPercent} %` } },
       {
         heading: 'Biggest drains',
-        rows: f.drains.map((d) => [d.kind === 'standby' ? `${d.name} (standby)` : d.name, `${d.ahPerDay.toFixed(1)} Ah a day, ${d.sharePercent} %`]),
+        rows: f.drains.map((d) => [d.kind === 'standby' ? `${d.name} (standby)` : d.name, `${amount(d.ahPerDay)} a day, ${d.sharePercent} %`]),
         lines: [`Standby (inverter idle, key-off draw, self-discharge) is ${f.standbySharePercent} % of what the rig uses.`],
       },
       ...(f.fixes.length
-        ? [{ heading: 'Top Fixes', lines: f.fixes.map((x) => `${x.summary} (${x.gain})`), caution: needsWiringCaution(f.fixes) ? FIX_WIRING_CAUTION : undefined }]
+        ? [{ heading: 'Top Fixes', lines: f.fixes.map((x) => inText(`${x.summary} (${x.gain})`)), caution: needsWiringCaution(f.fixes) ? FIX_WIRING_CAUTION : undefined }]
         : []),
       ...(notes.length ? [{ heading: 'Open notes from your advisor', lines: notes.map((n) => `${n.author ?? 'Advisor'}: ${n.body.length > 160 ? `${n.body.slice(0, 157)}…` : n.body}`) }] : []),
     ],
@@ -112,4 +115,13 @@ export async function reportLetter(
     footer: footerFor(config, user.id, 'reports'),
   });
   return { ...letter, subject: `${f.rigName}: ${daysText(f.daysParked, f.horizonDays)} parked, margin ${STATE_WORD[f.marginState]}` };
+}
+
+/**
+ * How a letter states energy for its reader: amounts and the model's texts in their unit at the rig's
+ * nominal voltage (shared/units.ts). A job queued before the figures carried the voltage stays in Ah.
+ */
+export function energyFor(energy: EnergyUnit, f: Pick<RigFigures, 'systemVoltage'>) {
+  const unit: EnergyUnit = f.systemVoltage ? energy : 'Ah';
+  return { amount: (ah: number) => formatEnergy(ah, unit, f.systemVoltage), inText: (text: string) => energyInText(text, unit, f.systemVoltage) };
 }

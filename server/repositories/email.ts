@@ -2,10 +2,14 @@ import { type Insertable, type Kysely, sql, type Transaction } from 'kysely';
 
 import type { Db } from '@/db/client';
 import type { Database, EmailKind, EmailPrefsTable } from '@/db/schema';
+import type { EnergyUnit } from '@/shared/units';
 
 type Exec = Db | Transaction<Database> | Kysely<Database>;
 
 // E-mail preferences: one row per person, written whole.
+
+/** The recipient's energy unit (unit_prefs, joined as such): amp-hours when they never chose. */
+const ENERGY = sql<EnergyUnit>`coalesce(unit_prefs.energy, 'Ah')`;
 
 export const findEmailPrefs = (db: Exec, userId: string) => db.selectFrom('email_prefs').selectAll().where('user_id', '=', userId).executeTakeFirst();
 
@@ -103,7 +107,8 @@ export function recipient(db: Exec, userId: string, list: 'reports' | 'notes') {
   return db
     .selectFrom('user')
     .leftJoin('email_prefs', 'email_prefs.user_id', 'user.id')
-    .select(['user.id', 'user.name', 'user.email', column.as('on')])
+    .leftJoin('unit_prefs', 'unit_prefs.user_id', 'user.id')
+    .select(['user.id', 'user.name', 'user.email', column.as('on'), ENERGY.as('energy')])
     .where('user.id', '=', userId)
     .executeTakeFirst();
 }
@@ -135,7 +140,8 @@ export function warningRecipients(db: Exec, rigId: string) {
     .innerJoin('rigs', 'rigs.household_id', 'member.organizationId')
     .innerJoin('user', 'user.id', 'member.userId')
     .leftJoin('email_prefs', 'email_prefs.user_id', 'member.userId')
-    .select(['user.id as id', 'user.name as name', 'user.email as email', sql<string>`coalesce(email_prefs.warn_at, 'tight')`.as('warnAt')])
+    .leftJoin('unit_prefs', 'unit_prefs.user_id', 'member.userId')
+    .select(['user.id as id', 'user.name as name', 'user.email as email', sql<string>`coalesce(email_prefs.warn_at, 'tight')`.as('warnAt'), ENERGY.as('energy')])
     .where('rigs.id', '=', rigId)
     .where(sql<boolean>`coalesce(email_prefs.warnings_on, true)`)
     .execute();

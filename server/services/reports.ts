@@ -10,6 +10,7 @@ import * as email from '../repositories/email';
 import { openAdvisorThreads } from '../repositories/notes';
 import { loadsOfRigs } from '../repositories/rigs';
 import { loadFromRow } from './rigs-model';
+import { unitsOf } from './units';
 
 const iso = (d: unknown) => new Date(d as Date).toISOString();
 
@@ -34,13 +35,15 @@ export async function failedEmails(db: Db) {
 
 /**
  * The next weekly report as the caller would get it, made now from the rig as it is: the same letter the
- * report job sends, with its chart inlined, for the Reports screen before anything has been sent.
+ * report job sends (in the caller's energy unit), with its chart inlined, for the Reports screen before
+ * anything has been sent.
  */
 export async function reportPreview(db: Db, config: Config, rig: RigAccess, user: { id: string; name: string }, now = new Date()) {
   const loads = (await loadsOfRigs(db, [rig.id])).map(loadFromRow);
   const figures = figuresOf(rig, loads);
   const notes = await openAdvisorThreads(db, rig.id);
-  const { html } = await reportLetter(config, user, { rigId: rig.id, weekKey: now.toISOString().slice(0, 10), figures }, undefined, notes);
+  const { energy } = await unitsOf(db, user.id);
+  const { html } = await reportLetter(config, { ...user, energy }, { rigId: rig.id, weekKey: now.toISOString().slice(0, 10), figures }, undefined, notes);
   const png = weekChartPng(figures.weekSocPercent, figures.cutoffSocPercent, figures.chartStartHourOfWeek);
   return html.replaceAll('cid:week-ahead', `data:image/png;base64,${png.toString('base64')}`);
 }

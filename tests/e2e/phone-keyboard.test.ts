@@ -168,7 +168,10 @@ describe.each(SIZES)('at %s size', (size, viewport) => {
     expect(await fix.textContent()).toMatch(/\d Ah/);
 
     await page.goto(`${BASE}/settings`);
+    // The choice goes to the account too (the e-mails follow it): the next page takes it from there.
+    const saved = page.waitForResponse((r) => r.url().endsWith('/api/me/units') && r.request().method() === 'PUT');
     await page.getByTestId('unit-energy-Wh').click();
+    expect((await saved).status()).toBe(200);
     await page.goto(`${BASE}/rigs/${made.body.id}`);
     await fix.waitFor();
     const text = (await fix.textContent())!;
@@ -178,6 +181,8 @@ describe.each(SIZES)('at %s size', (size, viewport) => {
 
     await page.getByTestId('tab-Try a load').click();
     await page.getByText('DC (24 V direct)').waitFor();
+    // The choice is on Ines's account now: back to amp-hours for the tests that sign in as her later.
+    expect((await page.request.put(BASE + '/api/me/units', { data: { energy: 'Ah' }, headers: { Origin: BASE } })).status()).toBe(200);
     await page.close();
   });
 

@@ -18,6 +18,12 @@ async function fill(page: Page, testId: string, value: string) {
   await input.blur();
 }
 
+/** The energy unit on the signed-in account, as Settings saves it (the e-mails and every device follow it). */
+async function setEnergyOnAccount(page: Page, energy: 'Ah' | 'Wh') {
+  const res = await page.request.put(BASE + '/api/me/units', { data: { energy }, headers: { Origin: BASE } });
+  expect(res.status()).toBe(200);
+}
+
 /** The chart is drawn: a canvas is there and its picture is not one flat colour (a flat PNG compresses to a few hundred bytes). */
 async function expectChartDrawn(page: Page) {
   const chart = page.getByTestId('soc-chart');
@@ -111,13 +117,42 @@ describe('the rig workspace', () => {
     // Units by the setting: watt-hours instead of amp-hours.
     expect(await page.getByTestId('load-Laptop').textContent()).toMatch(/Ah/);
     await page.goto(BASE + '/settings');
+    const saved = page.waitForResponse((r) => r.url().endsWith('/api/me/units') && r.request().method() === 'PUT');
     await page.getByTestId('unit-energy-Wh').click();
+    expect((await saved).status()).toBe(200);
     await page.goBack();
     await page.getByTestId('load-Laptop').waitFor();
     expect(await page.getByTestId('load-Laptop').textContent()).toMatch(/Wh/);
     await page.getByTestId('tab-Try a load').click();
     await page.getByTestId('try-screen').waitFor();
     await page.screenshot({ path: path.join(SHOTS, 'try-a-load-phone.png'), fullPage: true });
+    // The choice went to Tobi's account too: back to amp-hours for the tests that sign in as him later.
+    await setEnergyOnAccount(page, 'Ah');
+    await page.close();
+  });
+
+  it('keeps the energy unit on the account: signed out, then in again on a fresh device, it is still Wh', async () => {
+    const first = await browser.newPage({ viewport: PHONE });
+    await signInAs(first, 'tobi@example.org');
+    await first.goto(BASE + '/settings');
+    const saved = first.waitForResponse((r) => r.url().endsWith('/api/me/units') && r.request().method() === 'PUT');
+    await first.getByTestId('unit-energy-Wh').click();
+    expect((await saved).status()).toBe(200);
+    await first.getByTestId('sign-out').first().click();
+    await first.getByTestId('sign-in-screen').waitFor();
+    await first.close();
+
+    // A new browser context: nothing on this device, so the Wh can only come from the account.
+    const page = await browser.newPage({ viewport: PHONE });
+    await signInAs(page, 'tobi@example.org');
+    await page.goto(BASE + '/settings');
+    await page.locator('[data-testid="unit-energy-Wh"][aria-checked="true"]').waitFor();
+    await page.goto(BASE + '/');
+    await page.getByTestId('open-Wren').click();
+    await page.getByTestId('tab-Loads').click();
+    await page.getByTestId('load-Laptop').waitFor();
+    expect(await page.getByTestId('load-Laptop').textContent()).toMatch(/\d Wh/);
+    await setEnergyOnAccount(page, 'Ah');
     await page.close();
   });
 

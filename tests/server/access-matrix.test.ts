@@ -277,6 +277,7 @@ const MATRIX: Record<string, Entry> = {
   'GET /api/rigs/:rigId/emails/:emailId/chart.png': { send: async (a, c) => a.get(`/api/rigs/${c.rigId}/emails/${await sentEmailId()}/chart.png`), expect: readRig },
   'GET /api/me/email-prefs': { send: (a) => a.get('/api/me/email-prefs'), expect: { ...all(200), anonymous: 401 } },
   'PUT /api/me/email-prefs': { send: (a) => a.put('/api/me/email-prefs').set('Origin', TEST_ORIGIN).send(PREFS), expect: { ...all(200), anonymous: 401 } },
+  'PUT /api/me/units': { send: (a) => a.put('/api/me/units').set('Origin', TEST_ORIGIN).send({ energy: 'Ah' }), expect: { ...all(200), anonymous: 401 } },
   // Open: the signed token is the permission (here the outsider's own).
   'GET /api/email/unsubscribe': { send: (a) => a.get(`/api/email/unsubscribe?token=${unsubscribeToken(ctx.config.AUTH_SECRET, fx.users.outsider.id, 'notes')}`), expect: all(200) },
   'POST /api/email/unsubscribe': { send: (a) => a.post(`/api/email/unsubscribe?token=${unsubscribeToken(ctx.config.AUTH_SECRET, fx.users.outsider.id, 'notes')}`).set('Origin', TEST_ORIGIN), expect: all(200) },

@@ -5,13 +5,16 @@ import { type Href, Redirect, usePathname } from 'expo-router';
 import { Body, Button } from '@/components/ui';
 import { colors, space } from '@/shared/theme';
 import { type Me, useMeQuery } from '../api/session';
+import { useAccountUnits } from '../api/units';
 
 /**
  * Guards the signed-in part of the app: a signed-out visitor goes to sign in and comes back here after.
- * (A client guard only hides screens; the server checks every request.)
+ * (A client guard only hides screens; the server checks every request.) Signed in, this device's energy
+ * unit follows the account's.
  */
 export function SessionGate({ children }: { children: (me: Me) => ReactNode }) {
   const me = useMeQuery();
+  useAccountUnits(me.data);
   // While the session loads no screen is mounted and the router falls back to "/": remember where the
   // visitor was going from the first render.
   const [pathname] = useState(usePathname());

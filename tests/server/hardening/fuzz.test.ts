@@ -67,6 +67,7 @@ const routes = (): [string, Sender][] => {
     ['POST /api/rigs/:rigId/invitations', (b) => o.post(`${r}/invitations`).set('Origin', TEST_ORIGIN).type('json').send(JSON.stringify(b))],
     ['PATCH /api/rigs/:rigId/members/:memberId', (b, s) => o.patch(`${r}/members/${id(s)}`).set('Origin', TEST_ORIGIN).type('json').send(JSON.stringify(b))],
     ['PUT /api/me/email-prefs', (b) => o.put('/api/me/email-prefs').set('Origin', TEST_ORIGIN).type('json').send(JSON.stringify(b))],
+    ['PUT /api/me/units', (b) => o.put('/api/me/units').set('Origin', TEST_ORIGIN).type('json').send(JSON.stringify(b))],
     ['PUT /api/admin/users/:userId/role', (b, s) => fx.agents.admin.put(`/api/admin/users/${id(s)}/role`).set('Origin', TEST_ORIGIN).type('json').send(JSON.stringify(b))],
     ['GET /api/devices', (b, s) => o.get('/api/devices').query(typeof b === 'object' && b !== null && !Array.isArray(b) ? (b as Record<string, string>) : { q: s })],
     ['GET /api/rigs/:rigId/sheet.pdf', (_b, s) => o.get(`${r}/sheet.pdf`).query({ size: s })],
