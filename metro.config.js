@@ -5,14 +5,21 @@ const { getDefaultConfig } = require('expo/metro-config');
 const config = getDefaultConfig(__dirname);
 config.resolver.assetExts.push('woff2');
 
-// zod's list of every locale (reached from zod's core and classic modules) becomes lib/zod-locales.ts,
-// which has English only: the app never uses another, and the first screen would carry them all.
-const ZOD_LOCALES = /[\\/]node_modules[\\/]zod[\\/]v4[\\/]locales[\\/]index\.c?js$/;
-const englishOnly = path.join(__dirname, 'lib', 'zod-locales.ts');
+// Parts of zod the app never uses become the small modules in lib/zod-stand-ins/ (the same names), so the
+// first screen does not carry them: every locale but English (~40 KB compressed), the ahead-of-time
+// compiler and the JSON Schema reader. zod reaches them from its core and classic modules whatever we import.
+const zodModule = (file) => new RegExp(`[\\\\/]node_modules[\\\\/]zod[\\\\/]v4[\\\\/]${file}\\.c?js$`);
+const STAND_INS = [
+  [zodModule('locales[\\\\/]index'), 'locales.ts'],
+  [zodModule('core[\\\\/]compile'), 'compile.ts'],
+  [zodModule('classic[\\\\/]from-json-schema'), 'from-json-schema.ts'],
+].map(([test, file]) => [test, path.join(__dirname, 'lib', 'zod-stand-ins', file)]);
 const upstream = config.resolver.resolveRequest;
 config.resolver.resolveRequest = (context, moduleName, platform) => {
   const resolved = (upstream ?? context.resolveRequest)(context, moduleName, platform);
-  return resolved.type === 'sourceFile' && ZOD_LOCALES.test(resolved.filePath) ? { type: 'sourceFile', filePath: englishOnly } : resolved;
+  if (resolved.type !== 'sourceFile') return resolved;
+  const standIn = STAND_INS.find(([test]) => test.test(resolved.filePath));
+  return standIn ? { type: 'sourceFile', filePath: standIn[1] } : resolved;
 };
 
 module.exports = config;
