@@ -32,6 +32,9 @@ describe('Wire a circuit, the stand-alone calculator', () => {
     expect(await page.getByTestId('cautions').textContent()).toMatch(/auto electrician/);
     // The answer drawn: battery, the fuse at the battery, the cable with its size and drop, the device.
     expect(await page.getByTestId('circuit-drawing').getAttribute('aria-label')).toMatch(/20 A fuse at the battery, 4 AWG .* over 7\.62 m dropping 2\.57 %/);
+    // The drawing arrives in the drawings' lazy chunk, into the 150 px its space kept.
+    await page.locator('[data-testid="circuit-drawing"] svg').waitFor();
+    expect((await page.getByTestId('circuit-drawing').boundingBox())!.height).toBe(150);
     await page.screenshot({ path: path.join(SHOTS, 'cable-runs-wide.png'), fullPage: true });
     await page.getByTestId('circuit-drawing').screenshot({ path: path.join(SHOTS, 'wire-a-circuit-drawing-wide.png') });
     await page.close();

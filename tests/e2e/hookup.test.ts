@@ -29,10 +29,10 @@ describe('the Hook-up tab', () => {
     expect(conductor).toMatch(/^8 AWG/);
     expect(Number(/drop ([\d.]+) %/.exec(conductor)?.[1])).toBeCloseTo(dropPercent, 1);
     expect(await page.getByTestId('hookup-cautions').textContent()).toMatch(/qualified auto electrician/);
-    // The drawing itself is drawn: an SVG per part, inside the phone's width.
+    // The drawing itself is drawn (its symbols arrive in the drawings' lazy chunk): an SVG per part, inside the phone's width.
+    await expect.poll(() => page.locator('[data-testid="hookup-now-drawing"] svg').count()).toBeGreaterThanOrEqual(5);
     const box = await page.getByTestId('hookup-now-drawing').boundingBox();
     expect(box!.width).toBeLessThanOrEqual(390);
-    expect(await page.locator('[data-testid="hookup-now-drawing"] svg').count()).toBeGreaterThanOrEqual(5);
     await page.getByTestId('hookup-fix-ignition-relay').click();
     await page.getByTestId('hookup-fix-drawing').waitFor();
     expect(await page.locator('[data-testid="hookup-fix-drawing"] [data-testid="hookup-part-relay"]').textContent()).toMatch(/40 A contacts/);
