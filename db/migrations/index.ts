@@ -9,6 +9,7 @@ import * as m015 from './2026-12-02-015-invitation-sends';
 import * as m016 from './2026-12-02-016-essential-inverter-link';
 import * as m019 from './2026-12-02-019-history-undo';
 import * as m020 from './2026-12-02-020-trips';
+import * as m023 from './2026-12-03-023-cable-run-route-type';
 
 // A static provider: file discovery fails under vitest, an explicit list works everywhere.
 export const migrations: Record<string, Migration> = {
@@ -21,4 +22,5 @@ export const migrations: Record<string, Migration> = {
   '2026-12-02-016-essential-inverter-link': m016,
   '2026-12-02-019-history-undo': m019,
   '2026-12-02-020-trips': m020,
+  '2026-12-03-023-cable-run-route-type': m023,
 };
