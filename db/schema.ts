@@ -90,6 +90,10 @@ export interface CableRunTable {
   max_drop_percent: number;
   insulation_c: number;
   engine_space: boolean;
+  /** Where it runs; the engine bay sets engine_space. */
+  route: Generated<'cabin' | 'under-floor' | 'engine-bay'>;
+  /** The cable's type; it sets insulation_c. */
+  cable_type: Generated<'pvc' | 'xlpe' | 'marine' | 'welding' | 'other-60' | 'other-75' | 'high-temperature'>;
   return_path: 'cable' | 'chassis';
   continuous: boolean;
   purpose: 'general' | 'inverter';

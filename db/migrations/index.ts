@@ -10,6 +10,7 @@ import * as m016 from './2026-12-02-016-essential-inverter-link';
 import * as m019 from './2026-12-02-019-history-undo';
 import * as m020 from './2026-12-02-020-trips';
 import * as m021 from './2026-12-03-021-unit-prefs';
+import * as m023 from './2026-12-03-023-cable-run-route-type';
 
 // A static provider: file discovery fails under vitest, an explicit list works everywhere.
 export const migrations: Record<string, Migration> = {
@@ -23,4 +24,5 @@ export const migrations: Record<string, Migration> = {
   '2026-12-02-019-history-undo': m019,
   '2026-12-02-020-trips': m020,
   '2026-12-03-021-unit-prefs': m021,
+  '2026-12-03-023-cable-run-route-type': m023,
 };

@@ -2,9 +2,9 @@ import type { Db } from '@/db/client';
 import type { CableRunTable, HistoryKind } from '@/db/schema';
 import type { Selectable } from 'kysely';
 import { loadRunningCurrentA } from '@/shared/energy/profile';
-import { AWG_SIZES, type Awg, inverterFeedCurrentA, MM2_SIZES, NoConductorError, sizeCableRun } from '@/shared/energy/wiring';
+import { fittedWireWarnings, inverterFeedCurrentA, NoConductorError, sizeCableRun } from '@/shared/energy/wiring';
 import type { CableRunInput } from '@/shared/schemas/cable-run';
-import { cableRunSizeSchema } from '@/shared/schemas/cable-run';
+import { CABLE_TYPES, cableRunSizeSchema, CIRCUIT_ROUTES } from '@/shared/schemas/cable-run';
 import { HttpError } from '../errors';
 import { deleteCableRun, insertCableRun, listCableRuns, updateCableRun } from '../repositories/cable-runs';
 import type { RigAccess } from '../middleware/rig-access';
@@ -25,8 +25,10 @@ function toRow(run: CableRunInput) {
     load_id: run.loadId ?? null,
     inverter_link: run.inverterLink,
     max_drop_percent: run.maxDropPercent,
-    insulation_c: run.insulationC,
-    engine_space: run.engineSpace,
+    route: run.route,
+    cable_type: run.cableType,
+    insulation_c: CABLE_TYPES[run.cableType].insulationC,
+    engine_space: CIRCUIT_ROUTES[run.route].engineSpace,
     return_path: run.returnPath,
     continuous: run.continuous,
     purpose: run.purpose,
@@ -67,6 +69,8 @@ function describe(row: Row, power: Power, loads: Awaited<ReturnType<typeof readR
     inverterLink: row.inverter_link,
     loadName: load?.name ?? null,
     maxDropPercent: row.max_drop_percent,
+    route: row.route,
+    cableType: row.cable_type,
     insulationC: row.insulation_c,
     engineSpace: row.engine_space,
     returnPath: row.return_path,
@@ -83,6 +87,8 @@ function describe(row: Row, power: Power, loads: Awaited<ReturnType<typeof readR
     ...(fromInverter ? { inverterW: inverter!.ratedW, inverterEfficiencyPercent: inverter!.efficiencyPercent } : { currentA }),
     lengthM: row.length_m,
     maxDropPercent: row.max_drop_percent,
+    route: row.route,
+    cableType: row.cable_type,
     insulationC: row.insulation_c,
     engineSpace: row.engine_space,
     returnPath: row.return_path,
@@ -91,13 +97,7 @@ function describe(row: Row, power: Power, loads: Awaited<ReturnType<typeof readR
   });
   try {
     const sizing = sizeCableRun(input);
-    const warnings: string[] = [];
-    if (row.existing_awg && AWG_SIZES.indexOf(row.existing_awg as Awg) < AWG_SIZES.indexOf(sizing.awg)) {
-      warnings.push(`The fitted ${row.existing_awg} AWG is smaller than the ${sizing.awg} AWG this run needs.`);
-    }
-    if (row.existing_mm2 && MM2_SIZES.indexOf(row.existing_mm2 as (typeof MM2_SIZES)[number]) < MM2_SIZES.indexOf(sizing.mm2 as (typeof MM2_SIZES)[number])) {
-      warnings.push(`The fitted ${row.existing_mm2} mm² is smaller than the ${sizing.mm2} mm² this run needs.`);
-    }
+    const warnings = fittedWireWarnings(sizing, row.existing_awg, row.existing_mm2);
     return { ...base, sizing, warnings };
   } catch (err) {
     if (err instanceof NoConductorError) return { ...base, sizing: null, warnings: [err.message] };

@@ -315,3 +315,15 @@ export function sizeCableRun(input: CableRunSizeInput): CableRunResult {
     cautions,
   };
 }
+
+/** A warning for each fitted wire smaller than the size the run needs (a saved run's, or one typed into Wire a circuit). */
+export function fittedWireWarnings(sizing: Pick<CableRunResult, 'awg' | 'mm2'>, existingAwg?: string | null, existingMm2?: number | null): string[] {
+  const warnings: string[] = [];
+  if (existingAwg && AWG_SIZES.indexOf(existingAwg as Awg) < AWG_SIZES.indexOf(sizing.awg)) {
+    warnings.push(`The fitted ${existingAwg} AWG is smaller than the ${sizing.awg} AWG this run needs.`);
+  }
+  if (existingMm2 && MM2_SIZES.indexOf(existingMm2 as (typeof MM2_SIZES)[number]) < MM2_SIZES.indexOf(sizing.mm2 as (typeof MM2_SIZES)[number])) {
+    warnings.push(`The fitted ${existingMm2} mm² is smaller than the ${sizing.mm2} mm² this run needs.`);
+  }
+  return warnings;
+}

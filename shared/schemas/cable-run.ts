@@ -35,27 +35,68 @@ export const cableRunSizeSchema = cableRunSizeFields.superRefine((run, ctx) => {
 export type CableRunSizeInput = z.infer<typeof cableRunSizeSchema>;
 export type CableRunSizeForm = z.input<typeof cableRunSizeSchema>;
 
-/** A saved cable run on a rig: its own current, the current of one of the rig's loads, or the rig's inverter. */
-export const cableRunSchema = z
-  .strictObject({
+/** Where the cable runs sets the derating: the engine bay is hot (33 CFR 183.425's engine-space factor). */
+export const CIRCUIT_ROUTES = {
+  cabin: { label: 'Inside the cabin', engineSpace: false },
+  'under-floor': { label: 'Under the floor', engineSpace: false },
+  'engine-bay': { label: 'Through the engine bay', engineSpace: true },
+} as const;
+export type CircuitRoute = keyof typeof CIRCUIT_ROUTES;
+
+/**
+ * The cable's type sets its insulation rating, one of 33 CFR 183.425 Table 5's columns (ratings from memory of
+ * the cable standards). Every column has one type, so a run saved with only a rating reads back as its type.
+ */
+export const CABLE_TYPES = {
+  pvc: { label: 'PVC automotive (GPT)', insulationC: 80 },
+  xlpe: { label: 'Cross-linked automotive (GXL, TXL)', insulationC: 125 },
+  marine: { label: 'Tinned marine cable', insulationC: 105 },
+  welding: { label: 'Welding cable', insulationC: 90 },
+  'other-60': { label: 'Other cable', insulationC: 60 },
+  'other-75': { label: 'Other cable', insulationC: 75 },
+  'high-temperature': { label: 'High-temperature cable (silicone, PTFE)', insulationC: 200 },
+} as const;
+export type CableType = keyof typeof CABLE_TYPES;
+const cableTypeKeys = Object.keys(CABLE_TYPES) as [CableType, ...CableType[]];
+const routeKeys = Object.keys(CIRCUIT_ROUTES) as [CircuitRoute, ...CircuitRoute[]];
+
+/** The cable type whose rating this is (runs saved before cable types were stored). */
+export const cableTypeOf = (insulationC: number): CableType => cableTypeKeys.find((k) => CABLE_TYPES[k].insulationC === insulationC) ?? 'marine';
+
+export const AWG_CHOICES = ['18', '16', '14', '12', '10', '8', '6', '4', '2', '1', '1/0', '2/0', '3/0', '4/0'] as const;
+
+/**
+ * The one field list of a circuit, shared by Wire a circuit (the calculator), a rig's saved runs and the
+ * server: what is at the end of the wire, its current, where it runs, the cable, its length, the return, the
+ * drop it may lose, whether it runs for hours, and the wire already fitted (to check it).
+ */
+export const cableRunFields = z.object({
+  /** The device at the end of the wire, in the owner's words (drawn at the end of the cable). */
+  to: z.string().trim().max(80).default(''),
+  currentA: cableRunSizeFields.shape.currentA,
+  route: z.enum(routeKeys, 'Choose where it runs: the cabin, under the floor or the engine bay.').default('cabin'),
+  cableType: z.enum(cableTypeKeys, 'Choose one of the cable types.').default('marine'),
+  lengthM: cableRunSizeFields.shape.lengthM,
+  returnPath: z.enum(['cable', 'chassis']).default('cable'),
+  /** 3 % for electronics and feeds, 10 % for other loads (ABYC E-11). */
+  maxDropPercent: cableRunSizeFields.shape.maxDropPercent,
+  continuous: z.boolean().default(false),
+  existingAwg: z.enum(AWG_CHOICES).optional(),
+});
+export type CableRunFields = z.input<typeof cableRunFields>;
+
+/** A saved cable run on a rig: the circuit's fields, a name, and its current typed in, from one of the rig's loads, or from the rig's inverter. */
+export const cableRunSchema = cableRunFields
+  .extend({
     label: z.string().trim().min(1, 'Name the run.').max(80),
     from: z.string().trim().max(80).default('Battery'),
-    to: z.string().trim().max(80).default(''),
-    lengthM: cableRunSizeFields.shape.lengthM,
-    currentA: cableRunSizeFields.shape.currentA,
     loadId: z.uuid().optional(),
     /** The run feeds the rig's inverter: sized from its rating at its low-voltage cut-out. */
     inverterLink: z.boolean().default(false),
-    maxDropPercent: cableRunSizeFields.shape.maxDropPercent,
-    insulationC: cableRunSizeFields.shape.insulationC,
-    engineSpace: z.boolean().default(false),
-    returnPath: z.enum(['cable', 'chassis']).default('cable'),
-    continuous: z.boolean().default(false),
     purpose: z.enum(['general', 'inverter']).default('general'),
-    /** The wire already fitted, if any, to check against the size the run needs. */
-    existingAwg: z.enum(['18', '16', '14', '12', '10', '8', '6', '4', '2', '1', '1/0', '2/0', '3/0', '4/0']).optional(),
     existingMm2: z.literal([1.5, 2.5, 4, 6, 10, 16, 25, 35, 50, 70, 95], 'Choose a standard size.').optional(),
   })
+  .strict()
   .superRefine((run, ctx) => {
     const given = [run.currentA !== undefined, run.loadId !== undefined, run.inverterLink].filter(Boolean).length;
     if (given !== 1) {

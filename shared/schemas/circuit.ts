@@ -1,71 +1,56 @@
 import { z } from 'zod';
 
 import { feedCurrentA } from '../energy/hookup/feed';
-import { cableRunSizeSchema, type CableRunSizeForm } from './cable-run';
+import { CABLE_TYPES, cableRunFields, cableRunSizeSchema, type CableRunSizeForm, CIRCUIT_ROUTES } from './cable-run';
 
-// Wire a circuit: the stand-alone calculator's form, starting from what is at the end of the wire. It
-// becomes a cable-run sizing (POST /api/cable-runs/size) through circuitToRun.
+// Wire a circuit: the stand-alone calculator. Its fields are the circuit's own (cableRunFields, the same
+// list a saved run has) plus what a rig would otherwise answer: the system voltage and, for an inverter at
+// the end of the wire, its rated watts and efficiency. It becomes a cable-run sizing (POST
+// /api/cable-runs/size) through circuitToRun.
 
-/** Where the cable runs sets the derating: the engine bay is hot (33 CFR 183.425's engine-space factor). */
-export const CIRCUIT_ROUTES = {
-  cabin: { label: 'Inside the cabin', engineSpace: false },
-  'under-floor': { label: 'Under the floor', engineSpace: false },
-  'engine-bay': { label: 'Through the engine bay', engineSpace: true },
-} as const;
+export { CABLE_TYPES, CIRCUIT_ROUTES } from './cable-run';
 
-/** The cable's type sets its insulation rating, one of Table 5's columns (ratings from memory of the cable standards). */
-export const CABLE_TYPES = {
-  pvc: { label: 'PVC automotive (GPT)', insulationC: 80 },
-  xlpe: { label: 'Cross-linked automotive (GXL, TXL)', insulationC: 125 },
-  marine: { label: 'Tinned marine cable', insulationC: 105 },
-  welding: { label: 'Welding cable', insulationC: 90 },
-} as const;
-
-/** The words both circuit forms use (Wire a circuit and a rig's saved runs), so their labels cannot drift. */
+/** The words of the one circuit form (Wire a circuit and a rig's saved runs). */
 export const CIRCUIT_LABELS = {
   end: 'At the end of the wire',
+  to: 'Device',
+  toHint: 'What the wire feeds, in your words; drawn at the end of the cable.',
   current: 'Current the device draws',
+  currentHint: 'The most it draws from the battery.',
+  inverterW: "Inverter's rated output",
+  inverterHint: 'Its feed is sized at full output near the 10.5 V cut-out, as a continuous load.',
+  efficiency: "Inverter's efficiency",
   length: 'Length, battery to device',
   lengthHint: 'One way; the return is counted for you.',
   route: 'Where it runs',
-  routeHint: 'The engine bay\'s heat lowers what a cable may carry.',
-  engineBay: 'Runs through the engine bay',
+  routeHint: "The engine bay's heat lowers what a cable may carry.",
   cableType: 'Cable type',
   return: 'Return',
+  allowedDrop: 'Drop it may lose',
+  allowedDropHint: '3 % for electronics and feeds, 10 % for other loads (ABYC E-11).',
   continuous: 'Runs 3 hours or more at a time',
+  existingAwg: 'Wire already fitted (to check it)',
+  systemVoltage: 'System voltage',
 } as const;
 export const RETURN_OPTIONS = [
   { value: 'cable' as const, label: 'Its own negative cable' },
   { value: 'chassis' as const, label: 'Through the chassis' },
 ];
-/** Cable types as choices of an insulation rating, with Table 5's other columns for runs saved before. */
-export const INSULATION_OPTIONS = [
-  ...Object.values(CABLE_TYPES).map((c) => ({ value: c.insulationC as number, label: `${c.label}, ${c.insulationC} °C` })),
-  { value: 60, label: 'Other cable, 60 °C' },
-  { value: 75, label: 'Other cable, 75 °C' },
-];
+export const ROUTE_OPTIONS = Object.entries(CIRCUIT_ROUTES).map(([value, r]) => ({ value: value as keyof typeof CIRCUIT_ROUTES, label: r.label }));
+export const CABLE_TYPE_OPTIONS = Object.entries(CABLE_TYPES).map(([value, c]) => ({ value: value as keyof typeof CABLE_TYPES, label: `${c.label}, ${c.insulationC} °C` }));
 
-// Messages for a missing or non-numeric figure come from the plain error map (error-map.ts), naming the field.
 const number = () => z.number().finite();
 
-export const circuitSchema = z
-  .object({
+export const circuitSchema = cableRunFields
+  .extend({
     systemVoltage: cableRunSizeSchema.shape.systemVoltage,
     end: z.enum(['device', 'inverter']).default('device'),
-    currentA: number().gt(0, 'The current must be more than 0 A.').max(1000).optional(),
-    inverterW: number().gt(0, 'The inverter\'s rating must be more than 0 W.').max(10_000).optional(),
+    inverterW: number().gt(0, "The inverter's rating must be more than 0 W.").max(10_000).optional(),
     efficiencyPercent: number().min(50).max(100).default(90),
-    route: z.enum(['cabin', 'under-floor', 'engine-bay']).default('cabin'),
-    cableType: z.enum(['pvc', 'xlpe', 'marine', 'welding']).default('xlpe'),
-    lengthM: cableRunSizeSchema.shape.lengthM,
-    /** Critical (electronics, an inverter feed) allows 3 %, anything else 10 % (ABYC E-11). */
-    critical: z.boolean().default(true),
-    returnPath: z.enum(['cable', 'chassis']).default('cable'),
-    continuous: z.boolean().default(false),
   })
   .superRefine((c, ctx) => {
     if (c.end === 'device' && c.currentA === undefined) ctx.addIssue({ code: 'custom', path: ['currentA'], message: 'Give the current the device draws.' });
-    if (c.end === 'inverter' && c.inverterW === undefined) ctx.addIssue({ code: 'custom', path: ['inverterW'], message: 'Give the inverter\'s rated watts.' });
+    if (c.end === 'inverter' && c.inverterW === undefined) ctx.addIssue({ code: 'custom', path: ['inverterW'], message: "Give the inverter's rated watts." });
   });
 export type CircuitInput = z.infer<typeof circuitSchema>;
 export type CircuitForm = z.input<typeof circuitSchema>;
@@ -77,7 +62,7 @@ export function circuitToRun(c: CircuitInput): CableRunSizeForm {
     systemVoltage: c.systemVoltage,
     currentA: inverter ? Math.round(feedCurrentA(c.inverterW!, c.efficiencyPercent, c.systemVoltage) * 100) / 100 : c.currentA!,
     lengthM: c.lengthM,
-    maxDropPercent: c.critical || inverter ? 3 : 10,
+    maxDropPercent: c.maxDropPercent,
     insulationC: CABLE_TYPES[c.cableType].insulationC,
     engineSpace: CIRCUIT_ROUTES[c.route].engineSpace,
     returnPath: c.returnPath,

@@ -210,9 +210,9 @@ describe('cable runs on a rig', () => {
     // 20 A over 25 ft one way at 3 %: 4 AWG (REFERENCES.md, NEC Table 8 worked example).
     await expect.poll(() => page.getByTestId('run-size-Inverter feed').textContent()).toMatch(/^4 AWG/);
     expect(await page.getByTestId('run-Inverter feed').textContent()).toMatch(/fitted 10 AWG is smaller/);
-    expect(await page.getByTestId('run-cautions').textContent()).toMatch(/auto electrician/);
+    expect(await page.getByTestId('run-Inverter feed-cautions').textContent()).toMatch(/auto electrician/);
     // Drawn as Wire a circuit draws it: battery, fuse at the battery, cable with size and drop, device.
-    expect(await page.getByTestId('run-drawing-Inverter feed').getAttribute('aria-label')).toMatch(/20 A fuse at the battery, 4 AWG over 7\.62 m dropping 2\.57 %, to Inverter/);
+    expect(await page.getByTestId('run-Inverter feed-drawing').getAttribute('aria-label')).toMatch(/20 A fuse at the battery, 4 AWG over 7\.62 m dropping 2\.57 %, to Inverter/);
     await page.screenshot({ path: path.join(SHOTS, 'rig-cable-runs-wide.png'), fullPage: true });
     await page.goto(BASE + '/settings');
     await page.getByTestId('unit-wire-mm2').click();
@@ -221,7 +221,7 @@ describe('cable runs on a rig', () => {
     // A run linked to the inverter is sized from its rating: 300 W / (10.5 V × 0.9) = 31.75 A (common practice).
     await page.getByTestId('add-run').click();
     await fill(page, 'field-label', 'Feed from rating');
-    await page.getByTestId('run-from-inverter').click();
+    await page.getByTestId('circuit-end-inverter').click();
     await page.getByTestId('run-submit').click();
     await expect.poll(() => page.getByTestId('run-Feed from rating').textContent()).toMatch(/31\.75 A \(the inverter at its 10\.5 V cut-out, continuous\)/);
     await page.close();

@@ -77,7 +77,7 @@ async function throwawayTrip() {
   const res = await fx.agents.owner.post(`/api/rigs/${fx.rigId}/trips`).set('Origin', TEST_ORIGIN).send({ ...TRIP_PLAN, active: false });
   return res.body.id as string;
 }
-const RUN = { label: 'Fridge feed', to: 'Fridge', lengthM: 3, currentA: 5, maxDropPercent: 3, insulationC: 105 };
+const RUN = { label: 'Fridge feed', to: 'Fridge', lengthM: 3, currentA: 5, maxDropPercent: 3, cableType: 'marine' };
 async function throwawayNote(agent: ReturnType<typeof request.agent> | ReturnType<typeof request>, own: boolean) {
   const household = [fx.agents.owner, fx.agents.member, fx.agents.advisor] as unknown[];
   const author = own && household.includes(agent) ? (agent as typeof fx.agents.owner) : fx.agents.owner;

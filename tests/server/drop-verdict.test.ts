@@ -28,7 +28,7 @@ describe('the voltage-drop test\'s verdict', () => {
     const run = await fx.agents.owner
       .post(`/api/rigs/${fx.rigId}/cable-runs`)
       .set('Origin', TEST_ORIGIN)
-      .send({ label: 'Inverter feed', lengthM: 2, currentA: 30, maxDropPercent: 3, insulationC: 105, purpose: 'inverter' })
+      .send({ label: 'Inverter feed', lengthM: 2, currentA: 30, maxDropPercent: 3, cableType: 'marine', purpose: 'inverter' })
       .expect(201);
     // 12.60 V at the battery, 12.033 V at the inverter: 0.567 V, 4.5 % of 12.6 V.
     const res = await fx.agents.member.post(`/api/rigs/${fx.rigId}/voltage-drop`).set('Origin', TEST_ORIGIN).send({ batteryV: 12.6, pointV: 12.033, currentA: 30, cableRunId: run.body.id }).expect(200);

@@ -29,7 +29,7 @@ describe('rig history', () => {
 
   it('records cable runs added, edited and removed, without moving the forecast', async () => {
     const days = await daysParked();
-    const run = { label: 'Fan feed', to: 'Roof fan', lengthM: 3, currentA: 2, maxDropPercent: 3, insulationC: 105 };
+    const run = { label: 'Fan feed', to: 'Roof fan', lengthM: 3, currentA: 2, maxDropPercent: 3, cableType: 'marine' };
     const added = await fx.agents.member.post(`/api/rigs/${fx.rigId}/cable-runs`).set('Origin', TEST_ORIGIN).send(run).expect(201);
     let [top] = await history();
     expect(top).toMatchObject({ kind: 'cable-run-added', actor: { name: 'member' }, summary: 'added the cable run Fan feed (Battery → Roof fan, 3 m, 2 A)', daysParkedBefore: days, daysParkedAfter: days });

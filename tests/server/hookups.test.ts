@@ -69,7 +69,7 @@ describe('GET /api/rigs/:rigId/hookup', () => {
     const run = await fx.agents.owner
       .post(`/api/rigs/${fx.rigId}/cable-runs`)
       .set('Origin', TEST_ORIGIN)
-      .send({ label: 'Inverter feed', lengthM: 3.5, currentA: 32, maxDropPercent: 3, insulationC: 105, purpose: 'inverter', continuous: true })
+      .send({ label: 'Inverter feed', lengthM: 3.5, currentA: 32, maxDropPercent: 3, cableType: 'marine', purpose: 'inverter', continuous: true })
       .expect(201);
     const res = await fx.agents.owner.get(`/api/rigs/${fx.rigId}/hookup`).expect(200);
     expect(res.body.feed.lengthM).toBe(3.5);

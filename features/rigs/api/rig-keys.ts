@@ -7,7 +7,6 @@ export const rigKeys = {
   outlook: (rigId: string) => [...rigKeys.all, 'outlook', rigId] as const,
   trips: (rigId: string) => [...rigKeys.all, 'trips', rigId] as const,
   tripOutlook: (rigId: string, tripId: string) => [...rigKeys.all, 'trips', rigId, tripId, 'outlook'] as const,
-  cableRuns: (rigId: string) => [...rigKeys.all, 'cable-runs', rigId] as const,
   hookups: (rigId: string) => [...rigKeys.all, 'hookup', rigId] as const,
   hookup: (rigId: string, control: string | null) => [...rigKeys.hookups(rigId), control ?? 'now'] as const,
   history: (rigId: string) => [...rigKeys.all, 'history', rigId] as const,

@@ -1,8 +1,8 @@
 import { useLocalSearchParams } from 'expo-router';
 import { ActivityIndicator } from 'react-native';
 
+import { useCableRunsQuery } from '@/features/cable-runs/api/cable-runs';
 import { ReadingsScreen } from '@/features/readings/components/readings-screen';
-import { useCableRunsQuery } from '@/features/rigs/api/cable-runs';
 import { useRigQuery, useRigUpdateMutation } from '@/features/rigs/api/rig';
 
 export default function Readings() {

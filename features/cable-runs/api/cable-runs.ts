@@ -2,8 +2,10 @@ import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 
 import { apiFetch } from '@/lib/api-client';
 import type { CableRunResult } from '@/shared/energy/wiring';
-import type { CableRunInput } from '@/shared/schemas/cable-run';
-import { rigKeys } from './rig-keys';
+import type { CableRunInput, CableType, CircuitRoute } from '@/shared/schemas/cable-run';
+
+/** Saved runs sit under the rig's keys (['rigs', ...]), so whatever refreshes a whole rig refreshes them too. */
+export const cableRunKeys = { rig: (rigId: string) => ['rigs', 'cable-runs', rigId] as const };
 
 export type SavedCableRun = {
   id: string;
@@ -17,6 +19,8 @@ export type SavedCableRun = {
   inverterLink: boolean;
   loadName: string | null;
   maxDropPercent: number;
+  route: CircuitRoute;
+  cableType: CableType;
   insulationC: number;
   engineSpace: boolean;
   returnPath: 'cable' | 'chassis';
@@ -29,11 +33,11 @@ export type SavedCableRun = {
 };
 
 export const useCableRunsQuery = (rigId: string) =>
-  useQuery({ queryKey: rigKeys.cableRuns(rigId), queryFn: () => apiFetch<{ cableRuns: SavedCableRun[] }>(`/api/rigs/${rigId}/cable-runs`).then((r) => r.cableRuns) });
+  useQuery({ queryKey: cableRunKeys.rig(rigId), queryFn: () => apiFetch<{ cableRuns: SavedCableRun[] }>(`/api/rigs/${rigId}/cable-runs`).then((r) => r.cableRuns) });
 
 function useRunMutation<V>(rigId: string, fn: (v: V) => Promise<unknown>) {
   const client = useQueryClient();
-  return useMutation({ mutationFn: fn, onSuccess: () => client.invalidateQueries({ queryKey: rigKeys.cableRuns(rigId) }) });
+  return useMutation({ mutationFn: fn, onSuccess: () => client.invalidateQueries({ queryKey: cableRunKeys.rig(rigId) }) });
 }
 
 export const useCableRunCreateMutation = (rigId: string) => useRunMutation(rigId, (run: CableRunInput) => apiFetch(`/api/rigs/${rigId}/cable-runs`, { method: 'POST', json: run }));
