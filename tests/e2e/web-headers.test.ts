@@ -26,6 +26,7 @@ describe('the web build over HTTP', () => {
     { kind: 'a page of a dynamic route', url: '/rigs/some-rig/try', type: /text\/html/, cache: 'no-cache' },
     { kind: 'the entry script', url: find('_expo/static/js/web', /^entry-.*\.js$/), type: /javascript/, cache: IMMUTABLE },
     { kind: "the chart's lazy chunk", url: find('_expo/static/js/web', /^charts-impl-.*\.js$/), type: /javascript/, cache: IMMUTABLE },
+    { kind: "the drawings' lazy chunk", url: find('_expo/static/js/web', /^drawings-impl-.*\.js$/), type: /javascript/, cache: IMMUTABLE },
     { kind: 'CanvasKit', url: find('', /^canvaskit\.[0-9a-f]{16}\.wasm$/), type: /application\/wasm/, cache: IMMUTABLE },
     { kind: 'the service worker', url: '/sw.js', type: /javascript/, cache: 'no-cache' },
     { kind: 'the manifest', url: '/manifest.webmanifest', type: /application\/manifest\+json/, cache: 'no-cache' },
