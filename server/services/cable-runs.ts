@@ -111,7 +111,7 @@ async function checkLoad(db: Db, rig: RigAccess, run: CableRunInput) {
   if (!dto.loads.some((l) => l.id === run.loadId)) throw new HttpError(400, 'validation_failed', 'That load is not on this rig.', [{ path: 'loadId', message: 'Choose one of this rig\'s loads.' }]);
 }
 
-const wordsOf = (row: Row) => ({ label: row.label, from: row.from_point, to: row.to_point, lengthM: row.length_m, currentA: row.current_a ?? undefined, loadId: row.load_id ?? undefined, maxDropPercent: row.max_drop_percent });
+const wordsOf = (row: Row) => ({ label: row.label, from: row.from_point, to: row.to_point, lengthM: row.length_m, currentA: row.current_a ?? undefined, loadId: row.load_id ?? undefined, maxDropPercent: row.max_drop_percent, route: row.route, cableType: row.cable_type });
 
 /** A History entry for a cable run (the forecast does not move: before and after are the same). */
 async function record(db: Db, rig: RigAccess, actor: Actor, kind: HistoryKind, summary: string) {

@@ -1,7 +1,7 @@
 import type { Db } from '@/db/client';
 import type { HistoryKind } from '@/db/schema';
 import { project } from '@/shared/energy/project';
-import type { CableRunInput } from '@/shared/schemas/cable-run';
+import { CABLE_TYPES, type CableRunInput, CIRCUIT_ROUTES } from '@/shared/schemas/cable-run';
 import type { Load, RigPower } from '@/shared/schemas/projection';
 import { routineOf as namedRoutine } from '@/shared/routines';
 import { insertHistory, listHistory } from '../repositories/history';
@@ -45,7 +45,7 @@ export function describeNewRig(input: { name: string; power: RigPower; loads: Lo
 }
 
 /** What changed in a cable run, in words: "Fridge feed: 3 m → 4 m, 5 A → 6 A". */
-type RunWords = Pick<CableRunInput, 'label' | 'from' | 'to' | 'lengthM' | 'currentA' | 'loadId' | 'maxDropPercent'>;
+type RunWords = Pick<CableRunInput, 'label' | 'from' | 'to' | 'lengthM' | 'currentA' | 'loadId' | 'maxDropPercent'> & Partial<Pick<CableRunInput, 'route' | 'cableType'>>;
 
 export const describeCableRun = (r: RunWords) => `${r.label} (${r.from} → ${r.to || 'device'}, ${r.lengthM} m${r.currentA !== undefined ? `, ${r.currentA} A` : ''})`;
 
@@ -56,6 +56,8 @@ export function describeCableRunEdit(before: RunWords, after: RunWords): string 
   if ((before.currentA ?? null) !== (after.currentA ?? null) || (before.loadId ?? null) !== (after.loadId ?? null)) parts.push(after.currentA !== undefined ? `now ${after.currentA} A` : 'now follows its load');
   if (before.to !== after.to || before.from !== after.from) parts.push(`${after.from} → ${after.to}`);
   if (before.maxDropPercent !== after.maxDropPercent) parts.push(`drop allowed ${before.maxDropPercent} % → ${after.maxDropPercent} %`);
+  if (before.route !== after.route && after.route) parts.push(`now runs ${CIRCUIT_ROUTES[after.route].label.toLowerCase()}`);
+  if (before.cableType !== after.cableType && after.cableType) parts.push(`now in ${CABLE_TYPES[after.cableType].label}, ${CABLE_TYPES[after.cableType].insulationC} °C`);
   return `${before.label}: ${parts.length ? parts.join(', ') : 'saved without size-changing edits'}`;
 }
 

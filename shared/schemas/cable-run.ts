@@ -45,7 +45,7 @@ export type CircuitRoute = keyof typeof CIRCUIT_ROUTES;
 
 /**
  * The cable's type sets its insulation rating, one of 33 CFR 183.425 Table 5's columns (ratings from memory of
- * the cable standards). Every column has one type, so a run saved with only a rating reads back as its type.
+ * the cable standards). Every column has one type, so a run saved with only a rating has its type (migration 023).
  */
 export const CABLE_TYPES = {
   pvc: { label: 'PVC automotive (GPT)', insulationC: 80 },
@@ -59,9 +59,6 @@ export const CABLE_TYPES = {
 export type CableType = keyof typeof CABLE_TYPES;
 const cableTypeKeys = Object.keys(CABLE_TYPES) as [CableType, ...CableType[]];
 const routeKeys = Object.keys(CIRCUIT_ROUTES) as [CircuitRoute, ...CircuitRoute[]];
-
-/** The cable type whose rating this is (runs saved before cable types were stored). */
-export const cableTypeOf = (insulationC: number): CableType => cableTypeKeys.find((k) => CABLE_TYPES[k].insulationC === insulationC) ?? 'marine';
 
 export const AWG_CHOICES = ['18', '16', '14', '12', '10', '8', '6', '4', '2', '1', '1/0', '2/0', '3/0', '4/0'] as const;
 

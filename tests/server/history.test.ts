@@ -36,6 +36,10 @@ describe('rig history', () => {
     await fx.agents.owner.patch(`/api/rigs/${fx.rigId}/cable-runs/${added.body.id}`).set('Origin', TEST_ORIGIN).send({ ...run, lengthM: 4.5 }).expect(200);
     [top] = await history();
     expect(top).toMatchObject({ kind: 'cable-run-edited', actor: { name: 'owner' }, summary: 'edited the cable run Fan feed: 3 m → 4.5 m' });
+    // Where it runs and the cable change its size, so History names them.
+    await fx.agents.owner.patch(`/api/rigs/${fx.rigId}/cable-runs/${added.body.id}`).set('Origin', TEST_ORIGIN).send({ ...run, lengthM: 4.5, route: 'engine-bay', cableType: 'pvc' }).expect(200);
+    [top] = await history();
+    expect(top).toMatchObject({ kind: 'cable-run-edited', summary: 'edited the cable run Fan feed: now runs through the engine bay, now in PVC automotive (GPT), 80 °C' });
     await fx.agents.owner.delete(`/api/rigs/${fx.rigId}/cable-runs/${added.body.id}`).set('Origin', TEST_ORIGIN).expect(204);
     [top] = await history();
     expect(top).toMatchObject({ kind: 'cable-run-removed', summary: 'removed the cable run Fan feed (Battery → Roof fan, 4.5 m, 2 A)' });

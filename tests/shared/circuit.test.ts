@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 
 import { sizeCableRun } from '@/shared/energy/wiring';
-import { cableRunSizeSchema } from '@/shared/schemas/cable-run';
+import { CABLE_TYPES, cableRunFields, cableRunSchema, cableRunSizeSchema } from '@/shared/schemas/cable-run';
 import { circuitSchema, circuitToRun } from '@/shared/schemas/circuit';
 
 describe('Wire a circuit, as a cable run to size', () => {
@@ -24,5 +24,25 @@ describe('Wire a circuit, as a cable run to size', () => {
     const res = circuitSchema.safeParse({ end: 'inverter', lengthM: 2 });
     expect(res.success).toBe(false);
     expect(res.error!.issues.map((i) => i.path.join('.'))).toContain('inverterW');
+  });
+});
+
+describe('one field list for both circuit forms', () => {
+  it('gives Wire a circuit and a saved run every field of cableRunFields, and the server the same schema', () => {
+    const fields = Object.keys(cableRunFields.shape);
+    expect(fields).toEqual(['to', 'currentA', 'route', 'cableType', 'lengthM', 'returnPath', 'maxDropPercent', 'continuous', 'existingAwg']);
+    for (const f of fields) {
+      expect(Object.keys(circuitSchema.shape)).toContain(f);
+      expect(Object.keys(cableRunSchema.shape)).toContain(f);
+    }
+    // A saved run's extras are only what saving needs; the calculator's only what a rig would otherwise say.
+    expect(Object.keys(cableRunSchema.shape).filter((k) => !fields.includes(k))).toEqual(['label', 'from', 'loadId', 'inverterLink', 'purpose', 'existingMm2']);
+    expect(Object.keys(circuitSchema.shape).filter((k) => !fields.includes(k))).toEqual(['systemVoltage', 'end', 'inverterW', 'efficiencyPercent']);
+  });
+
+  it('has one cable type per insulation column, so a run saved with only a rating has its type (migration 023)', () => {
+    // The columns of 33 CFR 183.425 Table 5, the ratings the sizing schema takes.
+    const ratings = Object.values(CABLE_TYPES).map((c) => c.insulationC);
+    expect([...ratings].sort((a, b) => a - b)).toEqual([60, 75, 80, 90, 105, 125, 200]);
   });
 });

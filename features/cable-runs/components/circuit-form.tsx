@@ -1,5 +1,5 @@
 import { zodResolver } from '@hookform/resolvers/zod';
-import { type ReactNode, useState } from 'react';
+import { useState } from 'react';
 import { type Resolver, useForm } from 'react-hook-form';
 import { StyleSheet, Text } from 'react-native';
 
@@ -17,7 +17,7 @@ export type CircuitSource = 'current' | 'load' | 'inverter';
 /** Every field either variant can hold: the circuit's own (cableRunFields) and each variant's few extras. */
 type Values = CableRunFields & Partial<Omit<CalculatorForm, keyof CableRunFields>> & Partial<Omit<CableRunForm, keyof CableRunFields>>;
 
-type Common = { busy: boolean; error?: string; heading?: string; children?: ReactNode };
+type Common = { busy: boolean; error?: string; heading?: string };
 /** Wire a circuit: answers without saving; it has no rig, so it asks the system voltage and an inverter's watts. */
 type CalculatorProps = Common & { variant: 'calculator'; initial: CalculatorForm; onSubmit: (circuit: CircuitInput) => void };
 /** A rig's saved run: adds a name, the rig's loads and inverter as sources, and Save and Cancel. */
@@ -114,7 +114,6 @@ export function CircuitForm(props: CalculatorProps | SavedProps) {
         ) : (
           <SubmitButton testID="size-run" label="Wire it" />
         )}
-        {props.children}
       </Card>
     </Form>
   );
