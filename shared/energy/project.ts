@@ -5,7 +5,7 @@ import { type Margin, coverHoursOf, marginOf } from './margin';
 import { buildDemandProfile } from './profile';
 import { repeatingWeek } from './repeating-week';
 import { resolve } from './resolve';
-import { round, toDays } from './round';
+import * as rounding from './round';
 import { run } from './run';
 import { type BreakdownItem, breakdownOf, type SeriesPoint, seriesOf } from './series';
 import { collectWarnings, type Warning } from './warnings';
@@ -19,6 +19,9 @@ export { fixGainText } from './fixes';
 export { type MarginState, marginState } from './margin';
 export type { BreakdownItem } from './series';
 export type { Warning } from './warnings';
+
+// Module-level copies: imported bindings are getters once compiled, and the answer rounds a few dozen figures.
+const { round, toDays } = rounding;
 
 export type DaysFigure = { daysToCutoff: number | null; daysToFlat: number | null };
 
