@@ -1,6 +1,7 @@
 import { DeleteObjectCommand, GetObjectCommand, HeadBucketCommand, PutObjectCommand, S3Client } from '@aws-sdk/client-s3';
 import { getSignedUrl } from '@aws-sdk/s3-request-presigner';
 
+import type { Db } from '@/db/client';
 import type { Config } from './config';
 import { HttpError } from './errors';
 
@@ -50,4 +51,25 @@ export function createStorage(config: Config): Storage {
       }
     },
   };
+}
+
+export type StoredObject = { key: string; body: Buffer; contentType: string };
+
+/**
+ * Puts the objects in the store, then saves their rows in one database transaction; if a put or the
+ * transaction fails, the objects already stored are removed again (a removal that fails is left to the
+ * store's own clean-up) and the error goes on: no row without its object, no object without its row.
+ */
+export async function storeThenSave<T>(ctx: { db: Db; storage: Storage }, objects: StoredObject[], save: (trx: Db) => Promise<T>): Promise<T> {
+  const stored: string[] = [];
+  try {
+    for (const o of objects) {
+      await ctx.storage.put(o.key, o.body, o.contentType);
+      stored.push(o.key);
+    }
+    return await ctx.db.transaction().execute(save);
+  } catch (err) {
+    for (const key of stored) await ctx.storage.remove(key).catch(() => undefined);
+    throw err;
+  }
 }

@@ -1,6 +1,7 @@
 import { Router } from 'express';
 
-import { compare, project } from '@/shared/energy/project';
+import { compare } from '@/shared/energy/compare';
+import { project } from '@/shared/energy/project';
 import { compareInputSchema, projectionInputSchema } from '@/shared/schemas/projection';
 import { HttpError } from '../errors';
 import { parsed, validate } from '../middleware/validate';

@@ -3,6 +3,7 @@ import type { CableRunTable, HistoryKind } from '@/db/schema';
 import type { Selectable } from 'kysely';
 import { loadRunningCurrentA } from '@/shared/energy/profile';
 import { fittedWireWarnings, inverterFeedCurrentA, NoConductorError, sizeCableRun } from '@/shared/energy/wiring';
+import { MAINS_WIRING_WARNING } from '@/shared/safety';
 import type { CableRunInput } from '@/shared/schemas/cable-run';
 import { CABLE_TYPES, cableRunSizeSchema, CIRCUIT_ROUTES } from '@/shared/schemas/cable-run';
 import { HttpError } from '../errors';
@@ -43,10 +44,6 @@ export async function cableRunsOf(db: Db, rig: RigAccess) {
   const rows = await listCableRuns(db, rig.id);
   return rows.map((row) => describe(row, dto.power, dto.loads));
 }
-
-/** The AC side of an inverter is mains wiring: these 12 V tables do not size it. */
-export const MAINS_WIRING_WARNING =
-  "This load runs on the inverter's AC output: its circuit is mains wiring, outside these 12 V tables. Have it wired to local code by a qualified electrician, and size the inverter's own feed instead (link a run to the inverter).";
 
 type Power = Awaited<ReturnType<typeof readRig>>['power'];
 

@@ -1,6 +1,7 @@
 import { isDeepStrictEqual } from 'node:util';
 
 import type { Db } from '@/db/client';
+import { FIX_NAMES } from '@/shared/control-labels';
 import { type FixKind, type Projection, project } from '@/shared/energy/project';
 import { type Load, type RigPower, rigPowerSchema } from '@/shared/schemas/projection';
 import { HttpError } from '../errors';
@@ -10,16 +11,6 @@ import { updateRigIfVersion } from '../repositories/rigs';
 import { type Actor, daysParkedOf } from './history';
 import { readRig } from './rigs';
 import { modelInput, stripLoad } from './rigs-model';
-
-const FIX_NAMES: Record<FixKind, string> = {
-  'cutoff-switch': 'cut-off switch',
-  'ignition-relay': 'ignition-keyed relay',
-  'low-voltage-disconnect': 'low-voltage disconnect',
-  'more-driving': 'more driving',
-  'more-battery': 'more battery',
-  solar: 'solar',
-  'house-battery': 'separate house battery',
-};
 
 /** A Fix's change merged into the power system, section by section ({ inverter: { control } } and so on). */
 function withChange(power: RigPower, change: Record<string, unknown>): RigPower {

@@ -2,7 +2,8 @@ import { isDeepStrictEqual } from 'node:util';
 import { gzipSync } from 'node:zlib';
 
 import type { Db } from '@/db/client';
-import { compare, project } from '@/shared/energy/project';
+import { compare } from '@/shared/energy/compare';
+import { project } from '@/shared/energy/project';
 import { can, type HouseholdRole } from '@/shared/permissions';
 import { type Load, projectionInputSchema, type RigPower, rigPowerSchema } from '@/shared/schemas/projection';
 import { loadFromRow, loadToRow, modelInput, type SavedLoad, stripLoad } from './rigs-model';

@@ -1,6 +1,7 @@
 import { createRequire } from 'node:module';
 import PDFDocument from 'pdfkit';
 
+import { FIX_TITLES } from '@/shared/control-labels';
 import type { Assumption } from '@/shared/energy/assumptions';
 import type { Projection } from '@/shared/energy/project';
 import { FIX_WIRING_CAUTION, GENERAL_CAUTIONS, needsWiringCaution } from '@/shared/safety';
@@ -26,14 +27,6 @@ export type SheetData = {
 };
 
 const STATE = { comfortable: 'Comfortable', tight: 'Tight', short: 'Short' } as const;
-const FIX_TITLE: Record<string, string> = {
-  'cutoff-switch': 'Cut-off switch on the inverter',
-  'ignition-relay': 'Ignition-keyed relay',
-  'low-voltage-disconnect': 'Low-voltage disconnect',
-  'more-driving': 'More driving',
-  'more-battery': 'More battery',
-  solar: 'Solar',
-};
 const days = (d: number | null, horizon: number) => (d === null ? `more than ${horizon} days` : `${d.toFixed(1)} days`);
 const draw = (l: Load) => (l.amps !== undefined ? `${l.amps} A` : `${l.watts} W`);
 
@@ -160,7 +153,7 @@ export function renderSheet(data: SheetData, size: SheetSize): Promise<Buffer> {
   heading('Fixes');
   if (!p.fixes.length) para('Nothing to fix: no change gains days.');
   p.fixes.forEach((f) => {
-    para(`${FIX_TITLE[f.kind] ?? f.kind}: ${f.holds ? 'the routine holds' : `+${f.daysGainedRoutine.toFixed(1)} days on your routine`}${f.daysGainedParked > 0 ? `, +${f.daysGainedParked.toFixed(1)} days parked` : ''}`, { bold: true });
+    para(`${FIX_TITLES[f.kind] ?? f.kind}: ${f.holds ? 'the routine holds' : `+${f.daysGainedRoutine.toFixed(1)} days on your routine`}${f.daysGainedParked > 0 ? `, +${f.daysGainedParked.toFixed(1)} days parked` : ''}`, { bold: true });
     para(`${f.summary} Cost in convenience: ${f.convenience}`, { size: 9 });
     doc.moveDown(0.3);
   });

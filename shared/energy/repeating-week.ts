@@ -1,7 +1,7 @@
 import { MODEL_DEFAULTS } from './defaults';
 import type { DemandProfile } from './profile';
 import type { Resolved } from './resolve';
-import { run, type RunTotals } from './simulate';
+import { run, type RunTotals } from './run';
 
 const HOURS_PER_WEEK = 168;
 

@@ -3,7 +3,8 @@ import type { Trip } from '../schemas/trip';
 import { calendarHours } from './calendar';
 import { buildDemandProfile, zeros } from './profile';
 import { type Fix, type MarginState, project, type Warning } from './project';
-import { resolve, run } from './simulate';
+import { resolve } from './resolve';
+import { run } from './run';
 import { addDays } from './solar';
 
 /** Defaults of a trip's model, each a model choice or from memory (docs/model.md). */

@@ -1,10 +1,10 @@
 import type { ProjectionInput } from '../schemas/projection';
 import { LEAD_ACID_FREEZING_CURVE, MODEL_DEFAULTS, temperatureFactor } from './defaults';
-import { listNames } from './fixes';
+import { listNames } from './words';
 import { socketOverloadWarning } from './hookup/socket';
 import type { DemandProfile } from './profile';
 import type { Resolved } from './resolve';
-import { round } from './simulate';
+import { round } from './round';
 
 /** A warning: its code, its message, and the figures in the message (for texts that follow the unit setting). */
 export type Warning = { code: string; message: string; figures?: Record<string, number | string | null> };

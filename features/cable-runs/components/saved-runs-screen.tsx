@@ -4,7 +4,7 @@ import { ActivityIndicator, Pressable, StyleSheet, Text, View } from 'react-nati
 import { Body, Button, Card, Heading, Small } from '@/components/ui';
 import { useUnits } from '@/components/units';
 import { useIsWide } from '@/components/use-layout';
-import { CABLE_CAUTIONS } from '@/shared/energy/wiring';
+import { CABLE_CAUTIONS } from '@/shared/safety';
 import type { CableRunForm, CableRunInput } from '@/shared/schemas/cable-run';
 import { colors, space, type } from '@/shared/theme';
 import { type SavedCableRun, useCableRunCreateMutation, useCableRunDeleteMutation, useCableRunsQuery, useCableRunUpdateMutation } from '../api/cable-runs';

@@ -2,6 +2,7 @@ import { ActivityIndicator, View } from 'react-native';
 
 import { Body, Small } from '@/components/ui';
 import { useIsWide } from '@/components/use-layout';
+import { MEASURING_CAUTION } from '@/shared/safety';
 import { colors, space } from '@/shared/theme';
 import { useReadingsQuery } from '../api/readings';
 import { AnalysisCard } from './analysis-card';
@@ -12,9 +13,6 @@ import { SpotList } from './spot-list';
 import { SpotReadingCard } from './spot-reading-card';
 import { styles } from './styles';
 import { UploadsCard } from './uploads-card';
-
-export const MEASURING_CAUTION =
-  'Measuring safely: clip the meter to the battery posts themselves; for a rested reading leave the battery two hours with no charging and nothing switched on. Under load, keep hands and leads clear of the fan and belts, never bridge the terminals with a probe, wear eye protection near a lead-acid battery (it can vent explosive gas), and leave a lithium battery\'s protection system alone. If in doubt, ask a qualified auto electrician. Figures are estimates, not a guarantee.';
 
 type Props = {
   rigId: string;

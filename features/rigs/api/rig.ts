@@ -1,7 +1,8 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 
 import { ApiError, apiFetch } from '@/lib/api-client';
-import type { Comparison, Projection } from '@/shared/energy/project';
+import type { Comparison } from '@/shared/energy/compare';
+import type { Projection } from '@/shared/energy/project';
 import type { TripOutlook } from '@/shared/energy/trip';
 import type { Load, LoadInput, RigPower } from '@/shared/schemas/projection';
 import type { RigHeader, RigUpdateForm } from '@/shared/schemas/rig';

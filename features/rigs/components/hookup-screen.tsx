@@ -3,33 +3,16 @@ import { ActivityIndicator, Pressable, StyleSheet, Text, View } from 'react-nati
 
 import { Body, Card, Heading, Small } from '@/components/ui';
 import { useIsWide } from '@/components/use-layout';
+import { CONTROL_PHRASES, FIX_CONTROL, INVERTER_FIX_NAMES } from '@/shared/control-labels';
 import type { FixKind } from '@/shared/energy/project';
 import { FIX_WIRING_CAUTION } from '@/shared/safety';
-import type { InverterControl } from '@/shared/schemas/projection';
 import { colors, radius, space, type } from '@/shared/theme';
 import { type RigHookup, useHookupQuery } from '../api/hookup';
 import { useOutlookQuery } from '../api/rig';
 import { FixActions } from './hookup/fix-actions';
 import { Schematic } from './hookup/schematic';
 
-/** The inverter Fixes and the control each would give the inverter. */
-export const FIX_CONTROL: Partial<Record<FixKind, InverterControl>> = {
-  'cutoff-switch': 'manual-switch',
-  'ignition-relay': 'ignition-relay',
-  'low-voltage-disconnect': 'low-voltage-disconnect',
-};
 const FIX_KINDS: FixKind[] = ['cutoff-switch', 'ignition-relay', 'low-voltage-disconnect', 'more-driving', 'more-battery', 'solar'];
-const FIX_NAME: Partial<Record<FixKind, string>> = {
-  'cutoff-switch': 'Cut-off switch',
-  'ignition-relay': 'Ignition-keyed relay',
-  'low-voltage-disconnect': 'Low-voltage disconnect',
-};
-const CONTROL_NAME: Record<InverterControl, string> = {
-  'always-on': 'always on',
-  'manual-switch': 'on a manual switch',
-  'ignition-relay': 'on an ignition-keyed relay',
-  'low-voltage-disconnect': 'on a low-voltage disconnect',
-};
 
 /** Hook-up: the inverter's circuit drawn with every part rated, now and as a chosen Fix would change it. */
 export function HookupScreen({ rigId, fix }: { rigId: string; fix: FixKind | null }) {
@@ -61,7 +44,7 @@ export function HookupScreen({ rigId, fix }: { rigId: string; fix: FixKind | nul
             return (
               <Link key={kind ?? 'none'} href={fixLink(kind)} asChild>
                 <Pressable role="tab" aria-selected={on} style={StyleSheet.flatten([styles.chip, on && styles.chipOn])} testID={`hookup-fix-${kind ?? 'none'}`}>
-                  <Text style={[styles.chipLabel, on && styles.chipLabelOn]}>{kind ? FIX_NAME[kind] : 'None'}</Text>
+                  <Text style={[styles.chipLabel, on && styles.chipLabelOn]}>{kind ? INVERTER_FIX_NAMES[kind] : 'None'}</Text>
                 </Pressable>
               </Link>
             );
@@ -69,11 +52,11 @@ export function HookupScreen({ rigId, fix }: { rigId: string; fix: FixKind | nul
         </View>
       ) : null}
       <View style={[{ gap: space.lg }, wide && { flexDirection: 'row', alignItems: 'flex-start' }]}>
-        <PlanCard title={`Now: ${CONTROL_NAME[now.data.control]}, ${now.data.connection === 'socket' ? 'plugged into a socket' : 'wired to the battery'}`} plan={now.data} testID="hookup-now" wide={wide} />
+        <PlanCard title={`Now: ${CONTROL_PHRASES[now.data.control]}, ${now.data.connection === 'socket' ? 'plugged into a socket' : 'wired to the battery'}`} plan={now.data} testID="hookup-now" wide={wide} />
         {chosen ? (
           withFix.data ? (
             <View style={[{ gap: space.lg }, wide && { flex: 1 }]}>
-              <PlanCard title={`With this Fix: ${FIX_NAME[chosen]}`} plan={withFix.data} testID="hookup-fix" wide={wide} />
+              <PlanCard title={`With this Fix: ${INVERTER_FIX_NAMES[chosen]}`} plan={withFix.data} testID="hookup-fix" wide={wide} />
               <FixActions rigId={rigId} kind={chosen} />
             </View>
           ) : (

@@ -9,6 +9,7 @@ import { PageTitle } from '@/components/page-title';
 import { Toggle } from '@/components/toggle';
 import { Body, Card, Heading, Small, Title } from '@/components/ui';
 import { useIsWide } from '@/components/use-layout';
+import { CONTROL_PLAIN_LABELS, controlOptions } from '@/shared/control-labels';
 import type { Device } from '@/shared/devices';
 import { ROUTINE_PRESETS, type RoutineKey } from '@/shared/routines';
 import { type RigSetupForm, type RigSetupInput, rigSetupSchema } from '@/shared/schemas/rig';
@@ -92,7 +93,7 @@ export function NewRigScreen({ onCreated }: { onCreated: (rigId: string) => void
               <NumberField control={form.control} name="power.inverter.ratedW" label="Rating" unit="W" />
               <NumberField control={form.control} name="power.inverter.idleA" label="Idle draw" unit="A" hint="With nothing plugged in; small inverters draw 0.2 to 0.8 A (common practice)." />
               <InverterConnectionFields control={form.control} prefix="power." />
-              <ChoiceField control={form.control} name="power.inverter.control" label="Switched" options={[{ value: 'always-on', label: 'Left on' }, { value: 'manual-switch', label: 'By hand when needed' }, { value: 'ignition-relay', label: 'Ignition relay' }, { value: 'low-voltage-disconnect', label: 'Low-voltage disconnect' }]} />
+              <ChoiceField control={form.control} name="power.inverter.control" label="Switched" options={controlOptions(CONTROL_PLAIN_LABELS)} />
             </>
           ) : (
             <Small>No inverter: only DC devices can be added.</Small>

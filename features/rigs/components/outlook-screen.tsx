@@ -7,6 +7,7 @@ import { OfflineNotice } from '@/components/offline-notice';
 import { Body, Button, Card, Heading, Small } from '@/components/ui';
 import { energyInText, formatEnergy, useUnits } from '@/components/units';
 import { useIsWide } from '@/components/use-layout';
+import { FIX_TITLES } from '@/shared/control-labels';
 import { fixGainText } from '@/shared/energy/project';
 import { FIX_WIRING_CAUTION, needsWiringCaution } from '@/shared/safety';
 import { colors, linkTarget, radius, space, type } from '@/shared/theme';
@@ -16,16 +17,6 @@ import { OutlookBasis } from './outlook/outlook-basis';
 import { SheetButton } from './outlook/sheet-button';
 import { WorkedOut } from './outlook/worked-out';
 import { TripStays } from './trip-stays';
-
-const FIX_TITLE: Record<string, string> = {
-  'cutoff-switch': 'Cut-off switch on the inverter',
-  'ignition-relay': 'Ignition-keyed relay',
-  'low-voltage-disconnect': 'Low-voltage disconnect',
-  'more-driving': 'More driving',
-  'more-battery': 'More battery',
-  'house-battery': 'A separate house battery',
-  solar: 'Solar',
-};
 
 /** Outlook: the headline figures, margin, the charge chart, the biggest drains, warnings and Fixes. */
 /** `narrow`: lay out as on a phone even on a wide screen (the Outlook shares the width with Notes on Clients). */
@@ -164,7 +155,7 @@ function Fixes({ outlook }: { outlook: Outlook }) {
       {outlook.fixes.map((f) => (
         <View key={f.kind} style={styles.fix} testID={`fix-${f.kind}`}>
           <Text style={styles.fixTitle}>
-            {FIX_TITLE[f.kind] ?? f.kind}: {fixGainText(f)}
+            {FIX_TITLES[f.kind] ?? f.kind}: {fixGainText(f)}
           </Text>
           <Body>{energyInText(f.summary, units, V)}</Body>
           {f.stops ? (

@@ -9,6 +9,7 @@ import { Body, Button, Card, Heading, Small } from '@/components/ui';
 import { cToF, fToC, useUnits } from '@/components/units';
 import { useIsWide } from '@/components/use-layout';
 import { ApiError } from '@/lib/api-client';
+import { CONTROL_LABELS, controlOptions } from '@/shared/control-labels';
 import { type RigPower, type RigPowerInput, rigPowerSchema } from '@/shared/schemas/projection';
 import { colors, space, type } from '@/shared/theme';
 import { useRouter } from 'expo-router';
@@ -84,7 +85,7 @@ function PowerForm({ rig }: { rig: Rig }) {
                 control={form.control}
                 name="inverter.control"
                 label="How it is switched"
-                options={[{ value: 'always-on', label: 'Always on' }, { value: 'manual-switch', label: 'Manual switch' }, { value: 'ignition-relay', label: 'Ignition relay' }, { value: 'low-voltage-disconnect', label: 'Low-voltage disconnect' }]}
+                options={controlOptions(CONTROL_LABELS)}
               />
             </>
           ) : null}

@@ -6,7 +6,7 @@ import { MarginBadge } from '@/components/margin-badge';
 import { Body, Button, Card, Heading, Small } from '@/components/ui';
 import { energyInText, formatEnergy, useUnits } from '@/components/units';
 import { useIsWide } from '@/components/use-layout';
-import type { CompareSide } from '@/shared/energy/project';
+import type { CompareSide } from '@/shared/energy/compare';
 import type { Load } from '@/shared/schemas/projection';
 import { colors, space, type } from '@/shared/theme';
 import { useLoadCreateMutation, useRigQuery, useTryLoadsMutation } from '../api/rig';

@@ -1,4 +1,4 @@
-import { type Comparison, compare } from '@/shared/energy/project';
+import { type Comparison, compare } from '@/shared/energy/compare';
 import { type LoadInput, projectionInputSchema } from '@/shared/schemas/projection';
 import { tryLoadsSchema } from '@/shared/schemas/rig';
 import type { Rig } from '../api/rig';

@@ -1,4 +1,4 @@
-import { minimumProtectionA, STANDARD_RATINGS } from '../wiring';
+import { minimumProtectionA, STANDARD_RATINGS } from '../protection';
 
 /**
  * The inverter feed's figures from the inverter's own: the current it draws at full output near its
@@ -43,8 +43,3 @@ export const SAE_J553 = {
   typeII: 'SAE J553 type II (modified reset): stays open while powered, resets when power is removed.',
   typeIII: 'SAE J553 type III (manual reset, trip-free): stays open until reset by hand and cannot be held closed against a fault.',
 };
-
-export const WHY_NOT_TYPE_I =
-  'Never an automatic-reset (SAE J553 type I) breaker here: it recloses by itself while a fault lasts, heating a shorted feed again and again, and it can restart the inverter unattended. Use a fuse or a manual-reset, trip-free (type III) breaker.';
-
-export const MAKER_FIRST = 'The inverter maker\'s own fuse and cable instructions come first: where its manual names a fuse or a cable size, fit that.';

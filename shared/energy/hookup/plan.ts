@@ -1,33 +1,20 @@
 import type { HookupInput } from '../../schemas/hookup';
 import { cableRunSizeSchema } from '../../schemas/cable-run';
 import type { InverterConnection, InverterControl } from '../../schemas/projection';
-import { HOOKUP_CAUTIONS } from '../../safety';
+import { HOOKUP_CAUTIONS, MAKER_FIRST, WHY_NOT_TYPE_I } from '../../safety';
 import { CHEMISTRY_DEFAULTS, MODEL_DEFAULTS } from '../defaults';
 import { type Awg, CHASSIS_GROUND_ALLOWANCE_OHM, NoConductorError, sizeCableRun } from '../wiring';
-import { continuousFeedA, cutOutVoltage, feedCurrentA, MAKER_FIRST, ratingAtLeast, SAE_J553, WHY_NOT_TYPE_I } from './feed';
+import { continuousFeedA, cutOutVoltage, feedCurrentA, ratingAtLeast, SAE_J553 } from './feed';
 import { socketPlanWarnings } from './socket';
 import { controlParts } from './switching';
+import type { HookupPart, HookupWarning } from './parts';
+
+export type { HookupPart, HookupPartKind, HookupWarning } from './parts';
 
 /**
  * The inverter's hook-up: every part from battery to inverter and back, each rated from the inverter's
  * own figures. Pure: the same plan for POST /api/hookups, a saved rig, and a rig as a Fix would change it.
  */
-
-export type HookupPartKind =
-  | 'battery'
-  | 'protection'
-  | 'switching-breaker'
-  | 'switch'
-  | 'relay'
-  | 'remote-switch'
-  | 'coil-fuse'
-  | 'low-voltage-disconnect'
-  | 'socket'
-  | 'conductor'
-  | 'inverter'
-  | 'return';
-export type HookupPart = { kind: HookupPartKind; label: string; ratingA: number | null; notes: string[] };
-export type HookupWarning = { code: string; message: string };
 
 export type HookupPlan = {
   control: InverterControl;

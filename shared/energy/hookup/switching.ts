@@ -1,6 +1,6 @@
 import type { InverterControl } from '../../schemas/projection';
 import { coilFuseA, ISO_RELAY_CONTACTS_A, RELAY_COIL_A, SOLENOID_COIL_A, switchRatingFor } from './feed';
-import type { HookupPart, HookupWarning } from './plan';
+import type { HookupPart, HookupWarning } from './parts';
 
 /** The part (or parts) that switch the inverter, by its control, rated for the feed's protection. */
 export function controlParts(

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 
 import { project } from '@/shared/energy/project';
-import { chargeFor } from '@/shared/energy/simulate';
+import { chargeFor } from '@/shared/energy/charge';
 import { projectionInputSchema } from '@/shared/schemas/projection';
 import { bareRig } from './rigs';
 

@@ -13,7 +13,8 @@ import {
   loadRunningCurrentA,
   PARKED,
 } from '@/shared/energy/profile';
-import { resolve, run } from '@/shared/energy/simulate';
+import { resolve } from '@/shared/energy/resolve';
+import { run } from '@/shared/energy/run';
 import { type Load, loadSchema, projectionInputSchema } from '@/shared/schemas/projection';
 
 // The model keeps a load's schedule as its daily window and adds loads spread over the day per day, for

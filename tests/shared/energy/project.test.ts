@@ -2,7 +2,8 @@ import { describe, expect, it } from 'vitest';
 
 import { CHEMISTRY_DEFAULTS, peukertEffectiveCurrent, peukertHours, temperatureFactor } from '@/shared/energy/defaults';
 import { loadRunningCurrentA } from '@/shared/energy/profile';
-import { compare, marginState, project } from '@/shared/energy/project';
+import { compare } from '@/shared/energy/compare';
+import { marginState, project } from '@/shared/energy/project';
 import { STOAT, WREN } from '@/shared/demo/scenario';
 import { loadSchema, type ProjectionInputRaw, projectionInputSchema } from '@/shared/schemas/projection';
 

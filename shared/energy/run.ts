@@ -3,71 +3,14 @@ import * as layout from './profile';
 import { type DemandProfile, peukertExtras, peukertFactor, zeros } from './profile';
 import type { Resolved } from './resolve';
 import { perLoadAmpHours } from './per-load';
+import type { RunOptions, RunResult, RunTotals, Trace } from './run-types';
 
-export { resolve, type Resolved } from './resolve';
-export { chargeFor } from './charge';
+export type { RunOptions, RunResult, RunTotals, Trace } from './run-types';
 
 // Module-level copies: imported bindings are getters once compiled, too slow for the hot loop.
 const { HOURS_PER_WEEK, HOUR_STRIDE, PARKED, DRIVING, DC_A, AC_A, AC_ACTIVE, AC_WATTS } = layout;
 const chargeFor = charge.chargeFor;
 const timeToReach = charge.timeToReach;
-
-/**
- * Per hour: the charge at its end (Ah), and 1 where the inverter was on (else 0). The state of charge,
- * the net change and the minutes driven follow from these and the input (see seriesOf in project.ts).
- */
-export type Trace = { ah: number[]; inverterOn: number[] };
-
-export type RunTotals = {
-  /** Loads, Peukert's extra included. */
-  loadAh: number;
-  inverterIdleAh: number;
-  keyOffAh: number;
-  selfDischargeAh: number;
-  /** Put back: what the charging sources supplied to the loads or stored in the battery. */
-  chargeAh: number;
-  /** What the charging sources offered; the rest of it was not stored (battery full, acceptance, frost, losses). */
-  offeredAh: number;
-  /** Of the offer, what a self-heating battery's heater used while it warmed. */
-  heatingAh: number;
-  /** Ah of AC loads that were scheduled but could not run because the inverter was off. */
-  acNotServedAh: number;
-  perLoadAh: number[];
-  hours: number;
-};
-
-export type RunResult = {
-  hoursToCutoff: number | null;
-  hoursToFlat: number | null;
-  /** When a low-voltage disconnect first opened, in hours from the start. */
-  hoursToLvdOpen: number | null;
-  minSoc: number;
-  maxAcWatts: number;
-  /** Per hour, on request: the charge (Ah) and whether the inverter was on. */
-  trace: Trace | null;
-  week: RunTotals | null;
-  /** The charge at the end, the highest charge, and the disconnect's state at the end (for the next week). */
-  endAh: number;
-  maxAh: number;
-  lvdOn: boolean;
-};
-
-export type RunOptions = {
-  withDriving: boolean;
-  record?: boolean;
-  trackWeek?: boolean;
-  hours?: number;
-  /** Stop as soon as the cut-off is reached (for the Fixes' searches). */
-  untilCutoff?: boolean;
-  /** With trackWeek: also the amp-hours of each load (for the breakdown). */
-  perLoad?: boolean;
-  /** Start here instead of the input's start: charge (Ah), hour of the week, the disconnect's state. */
-  startAh?: number;
-  startHow?: number;
-  lvdOn?: boolean;
-  /** Steps per hour (1 by default): for the check that a finer step changes no figure. */
-  substeps?: number;
-};
 
 /**
  * One run of the model, hour by hour (each hour split into its driving part before the alternator
@@ -323,11 +266,4 @@ export function run(r: Resolved, demand: DemandProfile, opts: RunOptions): RunRe
   }
   const trace: Trace | null = record ? { ah: ahs, inverterOn: inverterOns } : null;
   return { hoursToCutoff, hoursToFlat, hoursToLvdOpen, minSoc, maxAcWatts, trace, week, endAh: ah, maxAh, lvdOn };
-}
-
-const SCALES = [1, 10, 100, 1000, 10_000, 100_000, 1_000_000];
-
-export function round(x: number, digits: number): number {
-  const m = digits >= 0 && digits < SCALES.length ? SCALES[digits] : 10 ** digits;
-  return Math.round(x * m) / m;
 }
