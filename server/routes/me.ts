@@ -4,7 +4,7 @@ import type { AppContext } from '../context';
 import { session } from '../middleware/session';
 import { householdsOfUser } from '../repositories/rigs';
 import { emailPrefsSchema } from '@/shared/schemas/email-prefs';
-import { parsed, validate } from '../middleware/validate';
+import { handler } from '../http/handler';
 import { prefsOf, savePrefs } from '../services/email-prefs';
 
 /** /api/me: who is signed in, with their account role and households. */
@@ -20,8 +20,8 @@ export function meRouter({ db }: AppContext) {
   router.get('/email-prefs', async (_req, res) => {
     res.json(await prefsOf(db, session(res).user.id));
   });
-  router.put('/email-prefs', validate(emailPrefsSchema), async (_req, res) => {
-    res.json(await savePrefs(db, session(res).user.id, parsed(res, emailPrefsSchema)));
-  });
+  router.put('/email-prefs', handler({ body: emailPrefsSchema }, async ({ body, res }) => {
+    res.json(await savePrefs(db, session(res).user.id, body));
+  }));
   return router;
 }

@@ -17,6 +17,7 @@ import type { Storage } from '../storage';
 import { cableRunsOf } from './cable-runs';
 import { type Actor, daysParkedOf } from './history';
 import { parseLog, previewText, requireText } from './log-parse';
+import { rigChanged, type WriteCtx } from './rig-changed';
 import { loadFromRow } from './rigs-model';
 
 /** A file name safe to show and to put in a header: letters, digits, dot, dash, underscore and spaces. */
@@ -27,9 +28,10 @@ export function cleanName(name: string): string {
 }
 
 /** A line in the rig's History: readings do not move the forecast, so Days parked shows no change. */
-async function recordReadingChange(db: Db, rig: RigAccess, actor: Actor, kind: HistoryKind, summary: string) {
-  const days = daysParkedOf(rigPowerSchema.parse(rig.power), (await loadsOfRigs(db, [rig.id])).map(loadFromRow));
-  await insertHistory(db, { rigId: rig.id, actor, kind, summary, daysParkedBefore: days, daysParkedAfter: days });
+async function recordReadingChange(ctx: WriteCtx, rig: RigAccess, actor: Actor, kind: HistoryKind, summary: string) {
+  const days = daysParkedOf(rigPowerSchema.parse(rig.power), (await loadsOfRigs(ctx.db, [rig.id])).map(loadFromRow));
+  await insertHistory(ctx.db, { rigId: rig.id, actor, kind, summary, daysParkedBefore: days, daysParkedAfter: days });
+  rigChanged(ctx, rig.id);
 }
 
 const when = (d: Date) => d.toISOString().slice(0, 16).replace('T', ' ') + ' UTC';
@@ -38,7 +40,8 @@ const when = (d: Date) => d.toISOString().slice(0, 16).replace('T', ' ') + ' UTC
  * A typed reading. One marked rested with more than a trickle flowing is refused, naming the field: a
  * battery with current flowing is not resting, and its voltage would read as a wrong state of charge.
  */
-export async function addSpotReading(db: Db, rig: RigAccess, actor: Actor, r: ReadingInputParsed) {
+export async function addSpotReading(ctx: WriteCtx, rig: RigAccess, actor: Actor, r: ReadingInputParsed) {
+  const { db } = ctx;
   const power = rigPowerSchema.parse(rig.power);
   const trickle = trickleA(power.battery.capacityAh);
   if (r.rested && r.currentA !== undefined && Math.abs(r.currentA) > trickle) {
@@ -48,7 +51,7 @@ export async function addSpotReading(db: Db, rig: RigAccess, actor: Actor, r: Re
   }
   const row: NewReadingRow = { at: new Date(r.at), voltage_v: r.voltageV, current_a: r.currentA ?? null, soc_percent: r.socPercent ?? null, rested: r.rested, place: r.place, note: r.note };
   await insertReadings(db, rig.id, null, actor.id, [row]);
-  await recordReadingChange(db, rig, actor, 'reading-added', `added a reading: ${r.voltageV} V${r.currentA !== undefined ? `, ${r.currentA} A` : ''}${r.rested ? ', rested' : ''} at ${when(row.at)}`);
+  await recordReadingChange(ctx, rig, actor, 'reading-added', `added a reading: ${r.voltageV} V${r.currentA !== undefined ? `, ${r.currentA} A` : ''}${r.rested ? ', rested' : ''} at ${when(row.at)}`);
 }
 
 /** Who added something, or the owner, may delete it. */
@@ -56,12 +59,13 @@ function mayDelete(rig: RigAccess, actor: Actor, createdBy: string | null) {
   if (rig.role !== 'owner' && createdBy !== actor.id) throw new HttpError(403, 'forbidden', 'Only the person who added it, or the owner of the rig, can delete it.');
 }
 
-export async function removeSpotReading(db: Db, rig: RigAccess, actor: Actor, readingId: string) {
+export async function removeSpotReading(ctx: WriteCtx, rig: RigAccess, actor: Actor, readingId: string) {
+  const { db } = ctx;
   const reading = await findSpotReading(db, rig.id, readingId);
   if (!reading) throw new HttpError(404, 'not_found', 'No such reading on this rig (a row of an uploaded log goes with its upload).');
   mayDelete(rig, actor, reading.created_by);
   if (!(await deleteReading(db, rig.id, readingId))) throw new HttpError(404, 'not_found', 'No such reading on this rig.');
-  await recordReadingChange(db, rig, actor, 'reading-removed', `deleted a reading: ${reading.voltage_v} V${reading.current_a !== null ? `, ${reading.current_a} A` : ''} at ${when(new Date(reading.at as unknown as Date))}`);
+  await recordReadingChange(ctx, rig, actor, 'reading-removed', `deleted a reading: ${reading.voltage_v} V${reading.current_a !== null ? `, ${reading.current_a} A` : ''} at ${when(new Date(reading.at as unknown as Date))}`);
 }
 
 /** The header, a few rows and a first guess at the mapping (or the rig's remembered one). */
@@ -86,7 +90,8 @@ const GUESS = { time: /time|date|stamp|zeit|datum/i, voltage: /volt|^v$|\(v\)|sp
  * LOG_LIMITS.rigRows readings: a log that would pass it is refused whole. The file goes to object storage
  * first; if the database then fails, the object is removed again.
  */
-export async function uploadLog(db: Db, storage: Storage, rig: RigAccess, actor: Actor, file: { buffer: Buffer; originalname: string }, opts: { mapping: ColumnMapping; allOrNothing: boolean; rested: boolean; timeZone: string }) {
+export async function uploadLog(ctx: WriteCtx, storage: Storage, rig: RigAccess, actor: Actor, file: { buffer: Buffer; originalname: string }, opts: { mapping: ColumnMapping; allOrNothing: boolean; rested: boolean; timeZone: string }) {
+  const { db } = ctx;
   const { rows, errors, total } = await parseLog(await requireText(file.buffer), opts.mapping, opts.timeZone);
   const listed = errors.slice(0, 100).map((e) => ({ path: `line ${e.line}`, message: e.reason }));
   if (errors.length && opts.allOrNothing) throw new HttpError(422, 'unprocessable', `${errors.length} of ${total} rows are not valid; nothing was stored (all or nothing).`, listed);
@@ -119,7 +124,7 @@ export async function uploadLog(db: Db, storage: Storage, rig: RigAccess, actor:
       await saveLogMapping(trx, rig.id, opts.mapping);
       return row;
     });
-    await recordReadingChange(db, rig, actor, 'reading-added', `uploaded the log ${upload.file_name} (${upload.row_count.toLocaleString('en-US')} readings)`);
+    await recordReadingChange(ctx, rig, actor, 'reading-added', `uploaded the log ${upload.file_name} (${upload.row_count.toLocaleString('en-US')} readings)`);
     const notes = notRested ? [`${notRested.toLocaleString('en-US')} rows marked rested carried more than a trickle (over ${twoFigures(trickle)} A) and are kept as not rested.`] : [];
     return { upload: { id: upload.id, fileName: upload.file_name, rowCount: upload.row_count, errorCount: upload.error_count }, errors: errors.slice(0, 100), notes };
   } catch (err) {
@@ -133,7 +138,8 @@ const yieldToLoop = () => new Promise<void>((r) => setImmediate(r));
 const PHOTO_TYPES = new Set(['image/jpeg', 'image/png']);
 
 /** An install photo: JPEG or PNG by its bytes (HEIC refused with what to do), metadata stripped, a thumbnail made. */
-export async function uploadPhoto(db: Db, storage: Storage, rig: RigAccess, actor: Actor, file: { buffer: Buffer; originalname: string }, caption: string) {
+export async function uploadPhoto(ctx: WriteCtx, storage: Storage, rig: RigAccess, actor: Actor, file: { buffer: Buffer; originalname: string }, caption: string) {
+  const { db } = ctx;
   const detected = await fileTypeFromBuffer(file.buffer);
   if (detected && ['image/heic', 'image/heif', 'image/heic-sequence', 'image/heif-sequence', 'image/avif'].includes(detected.mime)) {
     throw new HttpError(415, 'unsupported_media_type', 'HEIC photos are not taken yet: export the photo as JPEG (on most phones: share it, or set the camera to "most compatible").', [{ path: 'file', message: 'HEIC is not supported; use JPEG or PNG.' }]);
@@ -158,7 +164,7 @@ export async function uploadPhoto(db: Db, storage: Storage, rig: RigAccess, acto
   try {
     await storage.put(thumbKey, thumb, 'image/jpeg');
     const row = await insertUpload(db, { id, rig_id: rig.id, kind: 'photo', file_name: cleanName(file.originalname), content_type: detected.mime, size_bytes: cleaned.length, object_key: key, thumb_key: thumbKey, caption, created_by: actor.id, created_at: new Date() });
-    await recordReadingChange(db, rig, actor, 'reading-added', `added the photo ${row.file_name}${caption ? ` (${caption})` : ''}`);
+    await recordReadingChange(ctx, rig, actor, 'reading-added', `added the photo ${row.file_name}${caption ? ` (${caption})` : ''}`);
     return { id: row.id };
   } catch (err) {
     await storage.remove(key).catch(() => undefined);
@@ -176,14 +182,15 @@ export async function photoUrls(db: Db, storage: Storage, rig: RigAccess, photoI
 }
 
 /** A log (with its rows) or a photo, and its objects in the store; by who added it or the owner. */
-export async function removeUpload(db: Db, storage: Storage, rig: RigAccess, actor: Actor, uploadId: string, kind: 'log' | 'photo') {
+export async function removeUpload(ctx: WriteCtx, storage: Storage, rig: RigAccess, actor: Actor, uploadId: string, kind: 'log' | 'photo') {
+  const { db } = ctx;
   const upload = await findUpload(db, rig.id, uploadId, kind);
   if (!upload) throw new HttpError(404, 'not_found', kind === 'log' ? 'No such log on this rig.' : 'No such photo on this rig.');
   mayDelete(rig, actor, upload.created_by);
   await deleteUpload(db, upload.id);
   // The rows are gone; an object the store fails to delete now is left for the store's own clean-up, not an error here.
   for (const key of [upload.object_key, upload.thumb_key]) if (key) await storage.remove(key).catch(() => undefined);
-  await recordReadingChange(db, rig, actor, 'reading-removed', kind === 'log' ? `deleted the log ${upload.file_name} (${upload.row_count.toLocaleString('en-US')} readings)` : `deleted the photo ${upload.file_name}`);
+  await recordReadingChange(ctx, rig, actor, 'reading-removed', kind === 'log' ? `deleted the log ${upload.file_name} (${upload.row_count.toLocaleString('en-US')} readings)` : `deleted the photo ${upload.file_name}`);
 }
 
 /** The drop test on a rig: against a cable run's expected resistance (its conductor at 20 °C plus the return) when one is named. */
