@@ -1,9 +1,18 @@
 import { useRouter } from 'expo-router';
 
+import { RigNotes } from '@/features/notes/components/rig-notes';
+import { useReadingNoteTargets } from '@/features/readings/api/note-targets';
+import { useNoteTargets } from '@/features/rigs/api/note-targets';
 import { ClientsScreen } from '@/features/rigs/components/clients-screen';
-import { RigNotes } from './rigs/[rigId]/notes';
+
+/** A client's Notes, opened inside their row. */
+function ClientNotes({ rigId }: { rigId: string }) {
+  const rig = useNoteTargets(rigId);
+  const readings = useReadingNoteTargets(rigId);
+  return <RigNotes rigId={rigId} rig={rig} readings={readings} />;
+}
 
 export default function Clients() {
   const router = useRouter();
-  return <ClientsScreen onOpen={(rigId) => router.push({ pathname: '/rigs/[rigId]/notes', params: { rigId } })} renderNotes={(rigId) => <RigNotes rigId={rigId} />} />;
+  return <ClientsScreen onOpen={(rigId) => router.push({ pathname: '/rigs/[rigId]/notes', params: { rigId } })} renderNotes={(rigId) => <ClientNotes rigId={rigId} />} />;
 }
