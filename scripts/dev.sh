@@ -8,7 +8,7 @@ trap 'exit 130' INT TERM
 ensure_deps
 start_db
 export DATABASE_URL=${DATABASE_URL:-postgres://keyoff@127.0.0.1:54329/keyoff}
-(cd "$ROOT" && npx tsx db/seed-cli.ts)
+(cd "$ROOT" && npx tsx scripts/seed.ts)
 start_maildev
 start_s3
 cd "$ROOT"

@@ -13,7 +13,7 @@ export DATABASE_URL=postgres://keyoff@127.0.0.1:54329/keyoff_test
 "$(ls -d /usr/lib/postgresql/*/bin | sort -V | tail -1)/psql" -qX -h 127.0.0.1 -p 54329 -U keyoff -d keyoff_test \
   -c "drop schema if exists public cascade; create schema public;" \
   -c "do \$\$ declare s text; begin for s in select nspname from pg_namespace where nspname like 'pgboss%' loop execute format('drop schema %I cascade', s); end loop; end \$\$;" >/dev/null
-(cd "$ROOT" && npx tsx db/seed-cli.ts)
+(cd "$ROOT" && npx tsx scripts/seed.ts)
 start_maildev
 start_s3
 

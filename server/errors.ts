@@ -1,3 +1,5 @@
+import type { z } from 'zod';
+
 /** The closed set of error codes the API answers with. */
 export type ErrorCode =
   | 'bad_request'
@@ -30,4 +32,9 @@ export class HttpError extends Error {
     super(message);
     this.name = 'HttpError';
   }
+}
+
+/** A zod error as the API's field list: each issue's path (an unknown key names itself) and message. */
+export function issuesToFields(error: z.ZodError): FieldError[] {
+  return error.issues.map((i) => ({ path: [...i.path, ...(i.code === 'unrecognized_keys' ? [i.keys.join(', ')] : [])].join('.') || '(body)', message: i.message }));
 }

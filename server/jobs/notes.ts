@@ -2,17 +2,9 @@ import { footerFor, listHeaders } from '../emails/links';
 import { renderLetter } from '../emails/render';
 import { newestNoteEmailed, recipient } from '../repositories/email';
 import { notesForDigest } from '../repositories/notes';
-import { membersOf, rigOfMember } from '../repositories/rigs';
+import { rigOfMember } from '../repositories/rigs';
 import { deliver } from './deliver';
 import type { JobDeps } from './types';
-
-/** Who hears of a new note: the other side. An advisor's note goes to the household; the household's to its advisors. */
-export async function noteRecipients(deps: Pick<JobDeps, 'db'>, householdId: string, authorId: string) {
-  const members = await membersOf(deps.db, householdId);
-  const author = members.find((m) => m.userId === authorId);
-  const authorIsAdvisor = author?.role === 'advisor';
-  return members.filter((m) => m.userId !== authorId && (m.role === 'advisor') !== authorIsAdvisor).map((m) => m.userId);
-}
 
 /**
  * One e-mail with every note on the rig the person has not been told of (written by someone else since

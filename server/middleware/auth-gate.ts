@@ -1,8 +1,7 @@
 import type { NextFunction, Request, Response } from 'express';
 import { z } from 'zod';
 
-import { HttpError } from '../errors';
-import { issuesToFields } from './validate';
+import { HttpError, issuesToFields } from '../errors';
 
 const id = z.string().min(1).max(64);
 const count = (max: number) => z.coerce.number().int().min(0).max(max);

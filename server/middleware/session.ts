@@ -59,3 +59,6 @@ export function requireAdmin(req: Request, res: Response, next: NextFunction) {
   if (session(res).user.role !== 'admin') return next(new HttpError(403, 'forbidden', 'Only an admin can do this.'));
   next();
 }
+
+/** The signed-in person as services record them (history entries, who added a load). */
+export const actorOf = (res: Response) => ({ id: session(res).user.id, name: session(res).user.name });

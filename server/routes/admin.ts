@@ -5,7 +5,7 @@ import { accountRoleBodySchema, userParamsSchema } from '@/shared/schemas/people
 import { viaAuth } from '../auth-errors';
 import type { AppContext } from '../context';
 import { forgetCachedSessions, requireAdmin } from '../middleware/session';
-import { parsed, validate } from '../middleware/validate';
+import { handler } from '../http/handler';
 import { failedEmails } from '../services/reports';
 
 /** /api/admin: account roles. An admin sees accounts, never a budget they were not invited to. */
@@ -16,13 +16,12 @@ export function adminRouter({ auth, db }: AppContext) {
     const result = await viaAuth(() => auth.api.listUsers({ headers: fromNodeHeaders(req.headers), query: { limit: 200, sortBy: 'createdAt' } }));
     res.json({ users: result.users.map((u) => ({ id: u.id, name: u.name, email: u.email, role: u.role ?? 'traveller', emailVerified: u.emailVerified })) });
   });
-  router.put('/users/:userId/role', validate(userParamsSchema, 'params'), validate(accountRoleBodySchema), async (req, res) => {
-    const { userId } = parsed(res, userParamsSchema, 'params');
-    await viaAuth(() => auth.api.setRole({ headers: fromNodeHeaders(req.headers), body: { userId, role: parsed(res, accountRoleBodySchema).role } }), 'role');
+  router.put('/users/:userId/role', handler({ params: userParamsSchema, body: accountRoleBodySchema }, async ({ params: { userId }, body, req, res }) => {
+    await viaAuth(() => auth.api.setRole({ headers: fromNodeHeaders(req.headers), body: { userId, role: body.role } }), 'role');
     // The account's sessions carry its role: the next read looks them up again.
     forgetCachedSessions();
     res.status(204).end();
-  });
+  }));
   // E-mails that failed to render or send (pg-boss retries them; the last error stays here until one works).
   router.get('/email-failures', async (_req, res) => {
     res.json({ failures: await failedEmails(db) });

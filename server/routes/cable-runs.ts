@@ -1,23 +1,51 @@
 import { Router } from 'express';
 
 import { NoConductorError, sizeCableRun } from '@/shared/energy/wiring';
-import { cableRunSizeSchema } from '@/shared/schemas/cable-run';
+import { cableRunParamsSchema, cableRunSchema, cableRunSizeSchema } from '@/shared/schemas/cable-run';
+import type { AppContext } from '../context';
 import { HttpError } from '../errors';
-import { parsed, validate } from '../middleware/validate';
+import { handler } from '../http/handler';
+import { rigAccess, rigOf } from '../middleware/rig-access';
+import { actorOf } from '../middleware/session';
+import * as cableRuns from '../services/cable-runs';
 
-/** Open: sizing a run stores nothing. */
+/** /api/cable-runs, open: sizing a run stores nothing. */
 export function cableRunsRouter() {
   const router = Router();
-  router.post('/size', validate(cableRunSizeSchema), (_req, res) => {
-    const input = parsed(res, cableRunSizeSchema);
+  router.post('/size', handler({ body: cableRunSizeSchema }, ({ body, res }) => {
     try {
-      res.json(sizeCableRun(input));
+      res.json(sizeCableRun(body));
     } catch (err) {
       if (err instanceof NoConductorError) {
         throw new HttpError(422, 'no_conductor', err.message, [{ path: 'currentA', message: 'No conductor in the table carries this current within the limits.' }]);
       }
       throw err;
     }
+  }));
+  return router;
+}
+
+/** /api/rigs/:rigId/cable-runs: the rig's saved cable runs. */
+export function rigCableRunsRouter(ctx: AppContext) {
+  const { db } = ctx;
+  const router = Router({ mergeParams: true });
+
+  router.get('/cable-runs', rigAccess(db, { rig: ['read'] }), async (_req, res) => {
+    res.json({ cableRuns: await cableRuns.cableRunsOf(db, rigOf(res)) });
   });
+
+  router.post('/cable-runs', rigAccess(db, { cableRun: ['create'] }), handler({ body: cableRunSchema }, async ({ body, res }) => {
+    res.status(201).json(await cableRuns.addCableRun(ctx, rigOf(res), actorOf(res), body));
+  }));
+
+  router.patch('/cable-runs/:runId', rigAccess(db, { cableRun: ['update'] }), handler({ params: cableRunParamsSchema, body: cableRunSchema }, async ({ params, body, res }) => {
+    res.json(await cableRuns.editCableRun(ctx, rigOf(res), actorOf(res), params.runId, body));
+  }));
+
+  router.delete('/cable-runs/:runId', rigAccess(db, { cableRun: ['delete'] }), handler({ params: cableRunParamsSchema }, async ({ params, res }) => {
+    await cableRuns.removeCableRun(ctx, rigOf(res), actorOf(res), params.runId);
+    res.status(204).end();
+  }));
+
   return router;
 }

@@ -3,19 +3,19 @@ import { fromNodeHeaders } from 'better-auth/node';
 
 import { invitationIdParamsSchema } from '@/shared/schemas/people';
 import type { AppContext } from '../context';
-import { session } from '../middleware/session';
-import { parsed, validate } from '../middleware/validate';
+import { actorOf, session } from '../middleware/session';
+import { handler } from '../http/handler';
 import { acceptInvitation, invitationForInvitee } from '../services/people';
 
 /** /api/invitations: the invitee's side (after requireSession). */
 export function invitationsRouter({ db, auth }: AppContext) {
   const router = Router();
-  router.get('/:invitationId', validate(invitationIdParamsSchema, 'params'), async (_req, res) => {
-    res.json(await invitationForInvitee(db, parsed(res, invitationIdParamsSchema, 'params').invitationId, session(res).user.email));
-  });
-  router.post('/:invitationId/accept', validate(invitationIdParamsSchema, 'params'), async (req, res) => {
-    await acceptInvitation(db, auth, fromNodeHeaders(req.headers), parsed(res, invitationIdParamsSchema, 'params').invitationId, session(res).user.email, { id: session(res).user.id, name: session(res).user.name });
+  router.get('/:invitationId', handler({ params: invitationIdParamsSchema }, async ({ params, res }) => {
+    res.json(await invitationForInvitee(db, params.invitationId, session(res).user.email));
+  }));
+  router.post('/:invitationId/accept', handler({ params: invitationIdParamsSchema }, async ({ params, req, res }) => {
+    await acceptInvitation(db, auth, fromNodeHeaders(req.headers), params.invitationId, session(res).user.email, actorOf(res));
     res.status(204).end();
-  });
+  }));
   return router;
 }

@@ -4,7 +4,7 @@ import type { AppContext } from '../context';
 import { session } from '../middleware/session';
 import { householdsOfUser } from '../repositories/rigs';
 import { emailPrefsSchema } from '@/shared/schemas/email-prefs';
-import { parsed, validate } from '../middleware/validate';
+import { handler } from '../http/handler';
 import { prefsOf, savePrefs } from '../services/email-prefs';
 import { unitsSchema } from '@/shared/schemas/units';
 import { saveUnits, unitsOf } from '../services/units';
@@ -21,14 +21,14 @@ export function meRouter({ db }: AppContext) {
     });
   });
   // The energy unit on the account: the e-mails state their figures in it, and a signed-in device takes it.
-  router.put('/units', validate(unitsSchema), async (_req, res) => {
-    res.json(await saveUnits(db, session(res).user.id, parsed(res, unitsSchema)));
-  });
+  router.put('/units', handler({ body: unitsSchema }, async ({ body, res }) => {
+    res.json(await saveUnits(db, session(res).user.id, body));
+  }));
   router.get('/email-prefs', async (_req, res) => {
     res.json(await prefsOf(db, session(res).user.id));
   });
-  router.put('/email-prefs', validate(emailPrefsSchema), async (_req, res) => {
-    res.json(await savePrefs(db, session(res).user.id, parsed(res, emailPrefsSchema)));
-  });
+  router.put('/email-prefs', handler({ body: emailPrefsSchema }, async ({ body, res }) => {
+    res.json(await savePrefs(db, session(res).user.id, body));
+  }));
   return router;
 }

@@ -13,6 +13,7 @@ import { readRig } from './rigs';
 import { stripLoad } from './rigs-model';
 import { type Actor, daysParkedOf, describeCableRun, describeCableRunEdit } from './history';
 import { insertHistory } from '../repositories/history';
+import { rigChanged, type WriteCtx } from './rig-changed';
 
 type Row = Selectable<CableRunTable>;
 
@@ -117,7 +118,8 @@ async function record(db: Db, rig: RigAccess, actor: Actor, kind: HistoryKind, s
   return (trx: Db) => insertHistory(trx, { rigId: rig.id, actor, kind, summary, daysParkedBefore: days, daysParkedAfter: days });
 }
 
-export async function addCableRun(db: Db, rig: RigAccess, actor: Actor, run: CableRunInput) {
+export async function addCableRun(ctx: WriteCtx, rig: RigAccess, actor: Actor, run: CableRunInput) {
+  const { db } = ctx;
   await checkLoad(db, rig, run);
   const history = await record(db, rig, actor, 'cable-run-added', `added the cable run ${describeCableRun(run)}`);
   const row = await db.transaction().execute(async (trx) => {
@@ -125,10 +127,12 @@ export async function addCableRun(db: Db, rig: RigAccess, actor: Actor, run: Cab
     await history(trx);
     return saved;
   });
+  rigChanged(ctx, rig.id);
   return (await cableRunsOf(db, rig)).find((r) => r.id === row.id)!;
 }
 
-export async function editCableRun(db: Db, rig: RigAccess, actor: Actor, runId: string, run: CableRunInput) {
+export async function editCableRun(ctx: WriteCtx, rig: RigAccess, actor: Actor, runId: string, run: CableRunInput) {
+  const { db } = ctx;
   await checkLoad(db, rig, run);
   const before = (await listCableRuns(db, rig.id)).find((r) => r.id === runId);
   if (!before) throw new HttpError(404, 'not_found', 'No such cable run on this rig.');
@@ -139,10 +143,12 @@ export async function editCableRun(db: Db, rig: RigAccess, actor: Actor, runId: 
     await history(trx);
     return updated;
   });
+  rigChanged(ctx, rig.id);
   return (await cableRunsOf(db, rig)).find((r) => r.id === row.id)!;
 }
 
-export async function removeCableRun(db: Db, rig: RigAccess, actor: Actor, runId: string) {
+export async function removeCableRun(ctx: WriteCtx, rig: RigAccess, actor: Actor, runId: string) {
+  const { db } = ctx;
   const before = (await listCableRuns(db, rig.id)).find((r) => r.id === runId);
   if (!before) throw new HttpError(404, 'not_found', 'No such cable run on this rig.');
   const history = await record(db, rig, actor, 'cable-run-removed', `removed the cable run ${describeCableRun(wordsOf(before))}`);
@@ -150,4 +156,5 @@ export async function removeCableRun(db: Db, rig: RigAccess, actor: Actor, runId
     if (!(await deleteCableRun(trx, rig.id, runId))) throw new HttpError(404, 'not_found', 'No such cable run on this rig.');
     await history(trx);
   });
+  rigChanged(ctx, rig.id);
 }

@@ -9,6 +9,7 @@ import type { RigAccess } from '../middleware/rig-access';
 import { findHistoryEntry, insertHistory, markUndone } from '../repositories/history';
 import { updateRigIfVersion } from '../repositories/rigs';
 import { type Actor, daysParkedOf } from './history';
+import { rigChanged, type WriteCtx } from './rig-changed';
 import { readRig } from './rigs';
 import { modelInput, stripLoad } from './rigs-model';
 
@@ -50,9 +51,10 @@ export async function previewFix(db: Db, rig: RigAccess, kind: FixKind) {
 }
 
 /** Applies a Fix: the new power system and its history entry in one transaction, against the version the owner saw. */
-export async function applyFix(db: Db, rig: RigAccess, actor: Actor, kind: FixKind, version: number) {
+export async function applyFix(ctx: WriteCtx, rig: RigAccess, actor: Actor, kind: FixKind, version: number) {
+  const { db } = ctx;
   const { dto, loads, fix, power } = await planFix(db, rig, kind);
-  return db.transaction().execute(async (trx) => {
+  const applied = await db.transaction().execute(async (trx) => {
     const updated = await updateRigIfVersion(trx, rig.id, version, { power });
     if (!updated) throw new HttpError(409, 'conflict', 'Someone changed this rig since you opened it. Reload, then apply the Fix again.', [{ path: 'version', message: `This rig is now at version ${rig.version}.` }]);
     await insertHistory(trx, {
@@ -66,10 +68,13 @@ export async function applyFix(db: Db, rig: RigAccess, actor: Actor, kind: FixKi
     });
     return updated;
   });
+  rigChanged(ctx, rig.id);
+  return applied;
 }
 
 /** Undoes an applied Fix, once, while the power system is still as the Fix left it. */
-export async function undoFix(db: Db, rig: RigAccess, actor: Actor, entryId: string) {
+export async function undoFix(ctx: WriteCtx, rig: RigAccess, actor: Actor, entryId: string) {
+  const { db } = ctx;
   const entry = await findHistoryEntry(db, rig.id, entryId);
   if (!entry) throw new HttpError(404, 'not_found', 'No such history entry on this rig.');
   if (!entry.undo || entry.undone_at) throw new HttpError(409, 'conflict', entry.undo ? 'This Fix has already been undone.' : 'Only an applied Fix can be undone from History.');
@@ -80,7 +85,7 @@ export async function undoFix(db: Db, rig: RigAccess, actor: Actor, entryId: str
     throw new HttpError(409, 'conflict', 'The power system has changed since this Fix was applied: change it back under Power instead.');
   }
   const loads = (await readRig(db, rig)).loads.map(stripLoad);
-  return db.transaction().execute(async (trx) => {
+  const undone = await db.transaction().execute(async (trx) => {
     if (!(await markUndone(trx, entry.id))) throw new HttpError(409, 'conflict', 'This Fix has already been undone.');
     const updated = await updateRigIfVersion(trx, rig.id, rig.version, { power: before });
     if (!updated) throw new HttpError(409, 'conflict', 'Someone changed this rig a moment ago. Reload and try again.');
@@ -94,4 +99,6 @@ export async function undoFix(db: Db, rig: RigAccess, actor: Actor, entryId: str
     });
     return updated;
   });
+  rigChanged(ctx, rig.id);
+  return undone;
 }

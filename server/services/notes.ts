@@ -5,7 +5,8 @@ import { HttpError } from '../errors';
 import type { RigAccess } from '../middleware/rig-access';
 import { listCableRuns } from '../repositories/cable-runs';
 import { deleteNote, findNote, insertNote, listNotes, markRead, setNoteBody, setResolved, unreadCount } from '../repositories/notes';
-import { loadsOfRigs } from '../repositories/rigs';
+import { loadsOfRigs, membersOf } from '../repositories/rigs';
+import type { WriteCtx } from './rig-changed';
 import { readingOrUploadOf, uploadNamesOf } from '../repositories/readings';
 
 type LoadSnapshot = { name: string; watts: number | null; amps: number | null; hours_per_day: number; duty_percent: number };
@@ -61,7 +62,16 @@ export async function notesOf(db: Db, rig: RigAccess, userId: string) {
   return { threads, unread };
 }
 
-export async function addNote(db: Db, rig: RigAccess, userId: string, input: NoteCreateInput) {
+/** Who hears of a new note: the other side. An advisor's note goes to the household; the household's to its advisors. */
+export async function noteRecipients(db: Db, householdId: string, authorId: string) {
+  const members = await membersOf(db, householdId);
+  const author = members.find((m) => m.userId === authorId);
+  const authorIsAdvisor = author?.role === 'advisor';
+  return members.filter((m) => m.userId !== authorId && (m.role === 'advisor') !== authorIsAdvisor).map((m) => m.userId);
+}
+
+/** Saves a note (or a reply) and tells the other side (an e-mail gathered over a few minutes). Notes move no forecast: no margin check. */
+export async function addNote({ db, jobs }: WriteCtx, rig: RigAccess, userId: string, input: NoteCreateInput) {
   let targetKind = input.targetKind;
   let targetId = input.targetId ?? null;
   if (input.parentId) {
@@ -83,6 +93,7 @@ export async function addNote(db: Db, rig: RigAccess, userId: string, input: Not
   }
   const row = await insertNote(db, { rig_id: rig.id, parent_id: input.parentId ?? null, target_kind: targetKind, target_id: targetId, author_id: userId, body: input.body, rig_version: rig.version, target_snapshot: snapshot });
   await markRead(db, userId, rig.id);
+  await jobs.noteWritten(rig.id, await noteRecipients(db, rig.household_id, userId));
   return row.id;
 }
 

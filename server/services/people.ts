@@ -5,10 +5,13 @@ import { HttpError } from '../errors';
 import { countOwners, findInvitation, findMember, householdPeople } from '../repositories/rigs';
 import { type Actor, recordMembership } from './history';
 import { findUser } from '../repositories/users';
+import { rigChanged, type WriteCtx } from './rig-changed';
 import { insertInvitationSend, invitationSendsSince, lockInvitationSends } from '../repositories/invitations';
 
 type Headers = globalThis.Headers;
 const isOwner = (role: string) => role.split(',').includes('owner');
+/** The rig the change was asked on: membership is the household's, and this rig's margin is checked after (who is warned may have changed). */
+type OnRig = { id: string; household_id: string };
 
 export async function listPeople(db: Db, householdId: string) {
   const { members, invitations } = await householdPeople(db, householdId);
@@ -66,7 +69,9 @@ export async function revokeInvitation(db: Db, auth: Auth, headers: Headers, hou
   await viaAuth(() => auth.api.cancelInvitation({ headers, body: { invitationId } }));
 }
 
-export async function changeRole(db: Db, auth: Auth, headers: Headers, householdId: string, memberId: string, role: string, actor: Actor) {
+export async function changeRole(ctx: WriteCtx, auth: Auth, headers: Headers, rig: OnRig, memberId: string, role: string, actor: Actor) {
+  const { db } = ctx;
+  const householdId = rig.household_id;
   const member = await findMember(db, householdId, memberId);
   if (!member) throw new HttpError(404, 'not_found', 'No such person in this household.');
   if (isOwner(member.role) && role !== 'owner' && (await countOwners(db, householdId)) <= 1) {
@@ -74,11 +79,14 @@ export async function changeRole(db: Db, auth: Auth, headers: Headers, household
   }
   await viaAuth(() => auth.api.updateMemberRole({ headers, body: { memberId, role: role as 'member', organizationId: householdId } }), 'role');
   await recordMembership(db, householdId, actor, 'role-changed', `made ${await nameOf(db, member.userId)} ${role}`);
+  rigChanged(ctx, rig.id);
 }
 
 const nameOf = async (db: Db, userId: string) => (await findUser(db, userId))?.name ?? 'someone';
 
-export async function removePerson(db: Db, auth: Auth, headers: Headers, householdId: string, memberId: string, actor: Actor) {
+export async function removePerson(ctx: WriteCtx, auth: Auth, headers: Headers, rig: OnRig, memberId: string, actor: Actor) {
+  const { db } = ctx;
+  const householdId = rig.household_id;
   const member = await findMember(db, householdId, memberId);
   if (!member) throw new HttpError(404, 'not_found', 'No such person in this household.');
   if (isOwner(member.role) && (await countOwners(db, householdId)) <= 1) {
@@ -86,14 +94,18 @@ export async function removePerson(db: Db, auth: Auth, headers: Headers, househo
   }
   await viaAuth(() => auth.api.removeMember({ headers, body: { memberIdOrEmail: memberId, organizationId: householdId } }));
   await recordMembership(db, householdId, actor, 'member-removed', `removed ${await nameOf(db, member.userId)} (${member.role}) from the household`);
+  rigChanged(ctx, rig.id);
 }
 
-export async function leave(db: Db, auth: Auth, headers: Headers, householdId: string, role: string, actor: Actor) {
+export async function leave(ctx: WriteCtx, auth: Auth, headers: Headers, rig: OnRig, role: string, actor: Actor) {
+  const { db } = ctx;
+  const householdId = rig.household_id;
   if (isOwner(role) && (await countOwners(db, householdId)) <= 1) {
     throw new HttpError(409, 'conflict', 'The last owner cannot leave: make someone else owner first.');
   }
   await viaAuth(() => auth.api.leaveOrganization({ headers, body: { organizationId: householdId } }));
   await recordMembership(db, householdId, actor, 'member-left', `left the household (was ${role})`);
+  rigChanged(ctx, rig.id);
 }
 
 /** An invitation as its invitee sees it: only to the address it was sent to, only once, only in time. */

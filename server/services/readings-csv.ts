@@ -11,6 +11,7 @@ import { type Storage, storeThenSave } from '../storage';
 import type { Actor } from './history';
 import { parseLog, previewText, requireText } from './log-parse';
 import { cleanName, recordReadingChange } from './readings-shared';
+import { rigChanged, type WriteCtx } from './rig-changed';
 
 const GUESS = { time: /time|date|stamp|zeit|datum/i, voltage: /volt|^v$|\(v\)|spannung/i, current: /curr|amp|^a$|\(a\)|strom/i, soc: /soc|state.*charge|%/i };
 
@@ -36,7 +37,8 @@ const yieldToLoop = () => new Promise<void>((r) => setImmediate(r));
  * keeps at most LOG_LIMITS.rigRows readings: a log that would pass it is refused whole. The file goes to
  * object storage first, and is removed again if the transaction fails (storeThenSave).
  */
-export async function uploadLog(db: Db, storage: Storage, rig: RigAccess, actor: Actor, file: { buffer: Buffer; originalname: string }, opts: { mapping: ColumnMapping; allOrNothing: boolean; rested: boolean; timeZone: string }) {
+export async function uploadLog(ctx: WriteCtx, storage: Storage, rig: RigAccess, actor: Actor, file: { buffer: Buffer; originalname: string }, opts: { mapping: ColumnMapping; allOrNothing: boolean; rested: boolean; timeZone: string }) {
+  const { db } = ctx;
   const { rows, errors, total } = await parseLog(await requireText(file.buffer), opts.mapping, opts.timeZone);
   const listed = errors.slice(0, 100).map((e) => ({ path: `line ${e.line}`, message: e.reason }));
   if (errors.length && opts.allOrNothing) throw new HttpError(422, 'unprocessable', `${errors.length} of ${total} rows are not valid; nothing was stored (all or nothing).`, listed);
@@ -67,6 +69,7 @@ export async function uploadLog(db: Db, storage: Storage, rig: RigAccess, actor:
     await recordReadingChange(trx, rig, actor, 'reading-added', `uploaded the log ${row.file_name} (${row.row_count.toLocaleString('en-US')} readings)`);
     return row;
   });
+  rigChanged(ctx, rig.id);
   const notes = notRested ? [`${notRested.toLocaleString('en-US')} rows marked rested carried more than a trickle (over ${twoFigures(trickle)} A) and are kept as not rested.`] : [];
   return { upload: { id: upload.id, fileName: upload.file_name, rowCount: upload.row_count, errorCount: upload.error_count }, errors: errors.slice(0, 100), notes };
 }

@@ -9,6 +9,7 @@ import { findUpload, insertUpload } from '../repositories/readings';
 import { type Storage, storeThenSave } from '../storage';
 import type { Actor } from './history';
 import { cleanName, recordReadingChange } from './readings-shared';
+import { rigChanged, type WriteCtx } from './rig-changed';
 
 const PHOTO_TYPES = new Set(['image/jpeg', 'image/png']);
 const HEIC_TYPES = ['image/heic', 'image/heif', 'image/heic-sequence', 'image/heif-sequence', 'image/avif'];
@@ -17,7 +18,8 @@ const HEIC_TYPES = ['image/heic', 'image/heif', 'image/heic-sequence', 'image/he
  * An install photo: JPEG or PNG by its bytes (HEIC refused with what to do), metadata stripped, a thumbnail
  * made. Both go to object storage first, and are removed again if the row cannot be saved (storeThenSave).
  */
-export async function uploadPhoto(db: Db, storage: Storage, rig: RigAccess, actor: Actor, file: { buffer: Buffer; originalname: string }, caption: string) {
+export async function uploadPhoto(ctx: WriteCtx, storage: Storage, rig: RigAccess, actor: Actor, file: { buffer: Buffer; originalname: string }, caption: string) {
+  const { db } = ctx;
   const detected = await fileTypeFromBuffer(file.buffer);
   if (detected && HEIC_TYPES.includes(detected.mime)) {
     throw new HttpError(415, 'unsupported_media_type', 'HEIC photos are not taken yet: export the photo as JPEG (on most phones: share it, or set the camera to "most compatible").', [{ path: 'file', message: 'HEIC is not supported; use JPEG or PNG.' }]);
@@ -42,11 +44,13 @@ export async function uploadPhoto(db: Db, storage: Storage, rig: RigAccess, acto
     { key, body: cleaned, contentType: detected.mime },
     { key: thumbKey, body: thumb, contentType: 'image/jpeg' },
   ];
-  return storeThenSave({ db, storage }, objects, async (trx) => {
+  const saved = await storeThenSave({ db, storage }, objects, async (trx) => {
     const row = await insertUpload(trx, { id, rig_id: rig.id, kind: 'photo', file_name: cleanName(file.originalname), content_type: detected.mime, size_bytes: cleaned.length, object_key: key, thumb_key: thumbKey, caption, created_by: actor.id, created_at: new Date() });
     await recordReadingChange(trx, rig, actor, 'reading-added', `added the photo ${row.file_name}${caption ? ` (${caption})` : ''}`);
     return { id: row.id };
   });
+  rigChanged(ctx, rig.id);
+  return saved;
 }
 
 /** Short-lived addresses of a photo and its thumbnail. */

@@ -10,6 +10,7 @@ import type { Storage } from '../storage';
 import { cableRunsOf } from './cable-runs';
 import type { Actor } from './history';
 import { mayDelete, recordReadingChange } from './readings-shared';
+import { rigChanged, type WriteCtx } from './rig-changed';
 
 // The readings service: spot readings, removing a log or a photo, and the drop test. Logs are in
 // readings-csv.ts and photos in readings-photos.ts; both are served from here too, for the routes.
@@ -22,7 +23,8 @@ const when = (d: Date) => d.toISOString().slice(0, 16).replace('T', ' ') + ' UTC
  * A typed reading. One marked rested with more than a trickle flowing is refused, naming the field: a
  * battery with current flowing is not resting, and its voltage would read as a wrong state of charge.
  */
-export async function addSpotReading(db: Db, rig: RigAccess, actor: Actor, r: ReadingInputParsed) {
+export async function addSpotReading(ctx: WriteCtx, rig: RigAccess, actor: Actor, r: ReadingInputParsed) {
+  const { db } = ctx;
   const power = rigPowerSchema.parse(rig.power);
   const trickle = trickleA(power.battery.capacityAh);
   if (r.rested && r.currentA !== undefined && Math.abs(r.currentA) > trickle) {
@@ -33,18 +35,22 @@ export async function addSpotReading(db: Db, rig: RigAccess, actor: Actor, r: Re
   const row: NewReadingRow = { at: new Date(r.at), voltage_v: r.voltageV, current_a: r.currentA ?? null, soc_percent: r.socPercent ?? null, rested: r.rested, place: r.place, note: r.note };
   await insertReadings(db, rig.id, null, actor.id, [row]);
   await recordReadingChange(db, rig, actor, 'reading-added', `added a reading: ${r.voltageV} V${r.currentA !== undefined ? `, ${r.currentA} A` : ''}${r.rested ? ', rested' : ''} at ${when(row.at)}`);
+  rigChanged(ctx, rig.id);
 }
 
-export async function removeSpotReading(db: Db, rig: RigAccess, actor: Actor, readingId: string) {
+export async function removeSpotReading(ctx: WriteCtx, rig: RigAccess, actor: Actor, readingId: string) {
+  const { db } = ctx;
   const reading = await findSpotReading(db, rig.id, readingId);
   if (!reading) throw new HttpError(404, 'not_found', 'No such reading on this rig (a row of an uploaded log goes with its upload).');
   mayDelete(rig, actor, reading.created_by);
   if (!(await deleteReading(db, rig.id, readingId))) throw new HttpError(404, 'not_found', 'No such reading on this rig.');
   await recordReadingChange(db, rig, actor, 'reading-removed', `deleted a reading: ${reading.voltage_v} V${reading.current_a !== null ? `, ${reading.current_a} A` : ''} at ${when(new Date(reading.at as unknown as Date))}`);
+  rigChanged(ctx, rig.id);
 }
 
 /** A log (with its rows) or a photo, and its objects in the store; by who added it or the owner. */
-export async function removeUpload(db: Db, storage: Storage, rig: RigAccess, actor: Actor, uploadId: string, kind: 'log' | 'photo') {
+export async function removeUpload(ctx: WriteCtx, storage: Storage, rig: RigAccess, actor: Actor, uploadId: string, kind: 'log' | 'photo') {
+  const { db } = ctx;
   const upload = await findUpload(db, rig.id, uploadId, kind);
   if (!upload) throw new HttpError(404, 'not_found', kind === 'log' ? 'No such log on this rig.' : 'No such photo on this rig.');
   mayDelete(rig, actor, upload.created_by);
@@ -52,6 +58,7 @@ export async function removeUpload(db: Db, storage: Storage, rig: RigAccess, act
   // The rows are gone; an object the store fails to delete now is left for the store's own clean-up, not an error here.
   for (const key of [upload.object_key, upload.thumb_key]) if (key) await storage.remove(key).catch(() => undefined);
   await recordReadingChange(db, rig, actor, 'reading-removed', kind === 'log' ? `deleted the log ${upload.file_name} (${upload.row_count.toLocaleString('en-US')} readings)` : `deleted the photo ${upload.file_name}`);
+  rigChanged(ctx, rig.id);
 }
 
 /** The drop test on a rig: against a cable run's expected resistance (its conductor at 20 °C plus the return) when one is named. */

@@ -15,6 +15,7 @@ import type { Auth } from '../auth';
 import type { Storage } from '../storage';
 import { viaAuth } from '../auth-errors';
 import { HttpError } from '../errors';
+import { rigChanged, type WriteCtx } from './rig-changed';
 import { deleteLoad, deleteRig, householdRole, insertLoad, insertRig, listRigsForUser, loadsOfRigs, updateLoad, updateRigIfVersion } from '../repositories/rigs';
 
 /** What the role may do, for the client to hide controls (the server checks every request anyway). */
@@ -161,9 +162,10 @@ export async function tryLoads(db: Db, rig: RigRowWithRole, candidates: Load[]) 
 
 /**
  * Saves a change to the rig's name, vehicle or power system. A save that changes nothing keeps the rig as
- * it is: no new version, no history entry (and the route queues no margin check): `changed` says which.
+ * it is: no new version, no history entry, no margin check: `changed` says which.
  */
-export async function changeRig(db: Db, rig: RigRowWithRole, actor: Actor, input: RigUpdateInput) {
+export async function changeRig(ctx: WriteCtx, rig: RigRowWithRole, actor: Actor, input: RigUpdateInput) {
+  const { db } = ctx;
   const loads = (await loadsOfRigs(db, [rig.id])).map(loadFromRow).map(stripLoad);
   if (input.power) validateModel(input.power, loads, 'power.');
   const before = rigPowerSchema.parse(rig.power);
@@ -177,7 +179,7 @@ export async function changeRig(db: Db, rig: RigRowWithRole, actor: Actor, input
     if (input.version !== rig.version) throw conflict();
     return { id: rig.id, version: rig.version, changed: false };
   }
-  return db.transaction().execute(async (trx) => {
+  const saved = await db.transaction().execute(async (trx) => {
     const updated = await updateRigIfVersion(trx, rig.id, input.version, { name: input.name, vehicle: input.vehicle, power: input.power });
     if (!updated) throw conflict();
     const change = powerChanged ? describePowerChange(before, input.power!) : null;
@@ -193,6 +195,8 @@ export async function changeRig(db: Db, rig: RigRowWithRole, actor: Actor, input
     }
     return { ...updated, changed: true };
   });
+  rigChanged(ctx, rig.id);
+  return saved;
 }
 
 /** A member may change only the loads they added; an owner any load (shared/permissions.ts). */
@@ -202,12 +206,13 @@ function mayChangeLoad(rig: RigRowWithRole, actor: Actor, load: SavedLoad, verb:
   throw new HttpError(403, 'forbidden', `Only ${load.addedBy?.name || 'the person who added it'} or an owner can ${verb === 'update' ? 'edit' : 'delete'} ${load.name}.`);
 }
 
-export async function addLoad(db: Db, rig: RigRowWithRole, actor: Actor, load: Load) {
+export async function addLoad(ctx: WriteCtx, rig: RigRowWithRole, actor: Actor, load: Load) {
+  const { db } = ctx;
   const dto = await readRig(db, rig);
   const current = dto.loads.map(stripLoad);
   validateModel(dto.power, [...current, load].map((l) => ({ ...l, status: 'installed' as const })));
   const { position: _p, ...row } = loadToRow(load, 0, actor.id);
-  return db.transaction().execute(async (trx) => {
+  const added = await db.transaction().execute(async (trx) => {
     const saved = loadFromRow(await insertLoad(trx, rig.id, row));
     await insertHistory(trx, {
       rigId: rig.id,
@@ -219,9 +224,12 @@ export async function addLoad(db: Db, rig: RigRowWithRole, actor: Actor, load: L
     });
     return saved;
   });
+  rigChanged(ctx, rig.id);
+  return added;
 }
 
-export async function editLoad(db: Db, rig: RigRowWithRole, actor: Actor, loadId: string, load: Load) {
+export async function editLoad(ctx: WriteCtx, rig: RigRowWithRole, actor: Actor, loadId: string, load: Load) {
+  const { db } = ctx;
   const dto = await readRig(db, rig);
   const old = dto.loads.find((l) => l.id === loadId);
   if (!old) throw new HttpError(404, 'not_found', 'No such load on this rig.');
@@ -232,7 +240,7 @@ export async function editLoad(db: Db, rig: RigRowWithRole, actor: Actor, loadId
   const next = dto.loads.map((l) => (l.id === loadId ? load : stripLoad(l)));
   validateModel(dto.power, next.map((l) => ({ ...l, status: 'installed' as const })));
   const { position: _p, added_by: _a, ...row } = loadToRow(load, 0, null);
-  return db.transaction().execute(async (trx) => {
+  const edited = await db.transaction().execute(async (trx) => {
     const updated = await updateLoad(trx, rig.id, loadId, row);
     if (!updated) throw new HttpError(404, 'not_found', 'No such load on this rig.');
     await insertHistory(trx, {
@@ -245,9 +253,12 @@ export async function editLoad(db: Db, rig: RigRowWithRole, actor: Actor, loadId
     });
     return { load: loadFromRow(updated), changed: true };
   });
+  rigChanged(ctx, rig.id);
+  return edited;
 }
 
-export async function removeLoad(db: Db, rig: RigRowWithRole, actor: Actor, loadId: string) {
+export async function removeLoad(ctx: WriteCtx, rig: RigRowWithRole, actor: Actor, loadId: string) {
+  const { db } = ctx;
   const dto = await readRig(db, rig);
   const old = dto.loads.find((l) => l.id === loadId);
   if (!old) throw new HttpError(404, 'not_found', 'No such load on this rig.');
@@ -267,9 +278,10 @@ export async function removeLoad(db: Db, rig: RigRowWithRole, actor: Actor, load
       ),
     });
   });
+  rigChanged(ctx, rig.id);
 }
 
-/** Deletes the rig, then its logs and photos from object storage; returns the keys the store would not delete (left for the log). */
+/** Deletes the rig (no margin check: there is nothing left to check), then its logs and photos from object storage; returns the keys the store would not delete (left for the log). */
 export async function removeRig(db: Db, storage: Storage, rigId: string): Promise<string[]> {
   const keys = await deleteRig(db, rigId);
   const left: string[] = [];

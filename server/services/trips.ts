@@ -8,6 +8,7 @@ import { HttpError } from '../errors';
 import type { RigAccess } from '../middleware/rig-access';
 import { touchRig } from '../repositories/rigs';
 import { clearActive, deleteTrip, findTrip, insertTrip, listTrips, updateTrip } from '../repositories/trips';
+import { rigChanged, type WriteCtx } from './rig-changed';
 import { readRig } from './rigs';
 import { modelInput } from './rigs-model';
 import { tripFromRow } from './trip-model';
@@ -39,15 +40,17 @@ export async function tripsOf(db: Db, rig: RigAccess) {
 }
 
 /** Writes a trip and moves the rig on a version (the cached Outlook follows the active trip). */
-async function save(db: Db, rig: RigAccess, trip: Trip, write: (trx: Transaction<Database>) => Promise<Row | undefined>) {
+async function save(ctx: WriteCtx, rig: RigAccess, trip: Trip, write: (trx: Transaction<Database>) => Promise<Row | undefined>) {
   try {
-    return await db.transaction().execute(async (trx) => {
+    const saved = await ctx.db.transaction().execute(async (trx) => {
       const row = await write(trx);
       if (!row) throw new HttpError(404, 'not_found', 'No such trip on this rig.');
       if (trip.active) await clearActive(trx, rig.id, row.id);
       await touchRig(trx, rig.id);
       return tripFromRow(row);
     });
+    rigChanged(ctx, rig.id);
+    return saved;
   } catch (err) {
     // Two trips made active at the same moment: the unique index keeps one; the other is told to retry.
     if ((err as { code?: string }).code === '23505') throw new HttpError(409, 'conflict', 'Another trip was made active at the same moment; reload and try again.');
@@ -55,25 +58,26 @@ async function save(db: Db, rig: RigAccess, trip: Trip, write: (trx: Transaction
   }
 }
 
-export async function addTrip(db: Db, rig: RigAccess, userId: string, trip: Trip) {
-  return save(db, rig, trip, async (trx) => {
+export async function addTrip(ctx: WriteCtx, rig: RigAccess, userId: string, trip: Trip) {
+  return save(ctx, rig, trip, async (trx) => {
     if (trip.active) await clearActive(trx, rig.id);
     return insertTrip(trx, rig.id, userId, toValues(trip));
   });
 }
 
-export async function editTrip(db: Db, rig: RigAccess, tripId: string, trip: Trip) {
-  return save(db, rig, trip, async (trx) => {
+export async function editTrip(ctx: WriteCtx, rig: RigAccess, tripId: string, trip: Trip) {
+  return save(ctx, rig, trip, async (trx) => {
     if (trip.active) await clearActive(trx, rig.id, tripId);
     return updateTrip(trx, rig.id, tripId, toValues(trip));
   });
 }
 
-export async function removeTrip(db: Db, rig: RigAccess, tripId: string) {
-  await db.transaction().execute(async (trx) => {
+export async function removeTrip(ctx: WriteCtx, rig: RigAccess, tripId: string) {
+  await ctx.db.transaction().execute(async (trx) => {
     if (!(await deleteTrip(trx, rig.id, tripId))) throw new HttpError(404, 'not_found', 'No such trip on this rig.');
     await touchRig(trx, rig.id);
   });
+  rigChanged(ctx, rig.id);
 }
 
 export async function tripOutlook(db: Db, rig: RigAccess, tripId: string) {

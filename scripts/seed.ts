@@ -1,7 +1,7 @@
 // `npm run db:seed`: migrates, then seeds the demo scenario into DATABASE_URL.
 import { createContext } from '@/server/context';
 import { migrateAll } from '@/server/migrate';
-import { seedDemo } from './seed';
+import { seedDemo } from '@/server/seed';
 
 async function main() {
   // Demo accounts are created verified: no e-mail goes out while seeding.

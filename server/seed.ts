@@ -1,10 +1,10 @@
-// `npm run db:seed`: the demo scenario of PRODUCT.md: its people (who sign in with DEMO_PASSWORD), the
-// Halloran-Okafor household and the rigs Wren and Stoat. Keyed by e-mail, slug and seed_key, so running it
-// twice duplicates nothing.
+// The demo scenario of PRODUCT.md, seeded by `npm run db:seed` (scripts/seed.ts): its people (who sign in
+// with DEMO_PASSWORD), the Halloran-Okafor household and the rigs Wren and Stoat. Keyed by e-mail, slug and
+// seed_key, so running it twice duplicates nothing.
 import { DEMO_HOUSEHOLD, DEMO_PASSWORD, DEMO_PEOPLE, type DemoPersonKey, STOAT, WREN, WREN_ADDED_BY } from '@/shared/demo/scenario';
 import { loadSchema, type ProjectionInputRaw } from '@/shared/schemas/projection';
-import type { AppContext } from '@/server/context';
-import { loadToRow } from '@/server/services/rigs-model';
+import type { AppContext } from './context';
+import { loadToRow } from './services/rigs-model';
 
 const rigs: { seedKey: string; name: string; vehicle: string; input: ProjectionInputRaw }[] = [
   { seedKey: 'demo-wren', name: 'Wren', vehicle: '2011 long-wheelbase panel van', input: WREN },
