@@ -1,6 +1,5 @@
 import { randomUUID } from 'node:crypto';
 
-import type { Db } from '@/db/client';
 import { trickleA, twoFigures } from '@/shared/energy/readings';
 import { rigPowerSchema } from '@/shared/schemas/projection';
 import { type ColumnMapping, LOG_LIMITS } from '@/shared/schemas/reading';
