@@ -21,6 +21,7 @@ import { healthRouter } from './routes/health';
 import { hookupsRouter } from './routes/hookups';
 import { invitationsRouter } from './routes/invitations';
 import { meRouter } from './routes/me';
+import { openApiRouter } from './routes/openapi';
 import { projectionsRouter } from './routes/projections';
 import { readingsAnalyzeRouter, rigReadingsRouter } from './routes/readings';
 import { rigsRouter } from './routes/rigs';
@@ -86,6 +87,7 @@ export function createApp(ctx: AppContext): Express {
   app.use('/api/health', healthRouter(db, APP_VERSION));
   // One budget per client across every open route (not one each).
   const openLimit = rateLimitedOpen(config.RATE_LIMIT_PER_MINUTE);
+  app.use('/api/openapi.json', openLimit, openApiRouter(APP_VERSION));
   app.use('/api/projections', openLimit, projectionsRouter());
   app.use('/api/solar', openLimit, solarRouter());
   app.use('/api/cable-runs', openLimit, cableRunsRouter());

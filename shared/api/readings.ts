@@ -49,8 +49,11 @@ export const readingsViewSchema = z.strictObject({
 });
 export type Readings = z.infer<typeof readingsViewSchema>;
 
-/** POST /api/readings/analyze */
-export const analysisAnswerSchema = readingsAnalysisSchema;
+/** POST /api/readings/analyze: each reading's state of charge and where it came from, and the drain. */
+export const analysisAnswerSchema = z.strictObject({
+  readings: z.array(z.strictObject({ at: z.string(), socPercent: nn, source: z.enum(['monitor', 'voltage']).nullable() })),
+  ...readingsAnalysisSchema.shape,
+});
 export type ReadingsAnalysis = z.infer<typeof readingsAnalysisSchema>;
 
 /** POST /api/rigs/:rigId/readings */
