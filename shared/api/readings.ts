@@ -1,7 +1,7 @@
 import { z } from 'zod';
 
 import { chemistrySchema } from '../schemas/projection';
-import { columnMappingSchema } from '../schemas/reading';
+import { columnMappingSchema, readingPlaceSchema } from '../schemas/reading';
 import { dropTestSchema, readingsAnalysisSchema } from './model';
 
 export { analyzeSchema, logUploadFieldsSchema, photoFieldsSchema, photoParamsSchema, readingParamsSchema, readingSchema, readingsQuerySchema, uploadParamsSchema, voltageDropSchema } from '../schemas/reading';
@@ -33,7 +33,7 @@ export const readingsViewSchema = z.strictObject({
     model: z.array(z.strictObject({ at: z.iso.datetime(), socPercent: z.number() })),
   }),
   spot: z.array(
-    z.strictObject({ id: z.uuid(), at: z.iso.datetime(), voltageV: z.number(), currentA: nn, socPercent: nn, rested: z.boolean(), place: z.string(), note: z.string(), by: z.string().nullable(), canDelete: z.boolean() }),
+    z.strictObject({ id: z.uuid(), at: z.iso.datetime(), voltageV: z.number(), currentA: nn, socPercent: nn, rested: z.boolean(), place: readingPlaceSchema, note: z.string(), by: z.string().nullable(), canDelete: z.boolean() }),
   ),
   uploads: z.array(
     z.strictObject({ id: z.uuid(), fileName: z.string(), rowCount: z.number().int(), errorCount: z.number().int(), errors: z.array(rowError), by: z.string().nullable(), createdAt: z.iso.datetime(), canDelete: z.boolean() }),

@@ -18,7 +18,7 @@ export const historyEntrySchema = z.strictObject({
   id: z.uuid(),
   at: z.iso.datetime(),
   actor: z.strictObject({ id: z.string().nullable(), name: z.string() }),
-  kind: z.string(),
+  kind: z.enum(['rig-created', 'fix', 'cable-run-added', 'cable-run-edited', 'cable-run-removed', 'load-added', 'load-edited', 'load-removed', 'reading-added', 'reading-removed', 'battery', 'inverter', 'charging', 'routine', 'stay', 'rig', 'member-joined', 'member-left', 'member-removed', 'role-changed']),
   summary: z.string(),
   daysParkedBefore: z.number().nullable(),
   daysParkedAfter: z.number().nullable(),
