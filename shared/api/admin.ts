@@ -10,6 +10,7 @@ export type AccountRole = z.infer<typeof accountRoleSchema>;
 
 /** GET /api/admin/users */
 export const accountListSchema = z.strictObject({ users: z.array(accountSchema) });
+export type AccountList = z.infer<typeof accountListSchema>;
 
 /** An e-mail whose last attempt failed, with the error; no budget figures. */
 export const emailFailureSchema = z.strictObject({ id: z.string(), kind: z.string(), key: z.string(), attempts: z.number().int(), error: z.string().nullable(), to: z.string().nullable(), createdAt: z.iso.datetime() });
@@ -17,3 +18,4 @@ export type EmailFailure = z.infer<typeof emailFailureSchema>;
 
 /** GET /api/admin/email-failures */
 export const emailFailureListSchema = z.strictObject({ failures: z.array(emailFailureSchema) });
+export type EmailFailureList = z.infer<typeof emailFailureListSchema>;

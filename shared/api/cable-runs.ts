@@ -35,3 +35,4 @@ export type SavedCableRun = z.infer<typeof savedCableRunSchema>;
 
 /** GET /api/rigs/:rigId/cable-runs */
 export const cableRunListSchema = z.strictObject({ cableRuns: z.array(savedCableRunSchema) });
+export type CableRunList = z.infer<typeof cableRunListSchema>;

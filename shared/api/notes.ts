@@ -1,9 +1,9 @@
 import { z } from 'zod';
 
-export { noteCreateSchema, noteEditSchema, noteParamsSchema } from '../schemas/note';
+import { noteTargetKindSchema } from '../schemas/note';
 
-/** What a note can be about: the whole rig, a load, a cable run or a reading (a log or photo). */
-export const noteTargetKindSchema = z.enum(['rig', 'load', 'cable-run', 'reading']);
+export { noteCreateSchema, noteEditSchema, noteParamsSchema, noteTargetKindSchema } from '../schemas/note';
+
 export type NoteTargetKind = z.infer<typeof noteTargetKindSchema>;
 export const NOTE_TARGET_KINDS = noteTargetKindSchema.options;
 
@@ -33,3 +33,4 @@ export type Notes = z.infer<typeof notesSchema>;
 
 /** POST /api/rigs/:rigId/notes */
 export const noteCreatedSchema = z.strictObject({ id: z.uuid() });
+export type NoteCreated = z.infer<typeof noteCreatedSchema>;

@@ -22,6 +22,7 @@ export type People = z.infer<typeof peopleSchema>;
 
 /** POST /api/rigs/:rigId/invitations, and .../resend */
 export const invitationSentSchema = z.strictObject({ id: z.string(), email: z.string(), role: z.string().nullable(), status: z.string(), expiresAt: z.iso.datetime() });
+export type InvitationSent = z.infer<typeof invitationSentSchema>;
 
 /** GET /api/invitations/:invitationId: the invitation as its invitee sees it. */
 export const invitationViewSchema = z.strictObject({ id: z.string(), householdName: z.string(), inviterName: z.string().nullable(), role: z.string().nullable(), expiresAt: z.iso.datetime() });

@@ -58,6 +58,7 @@ export type ReadingsAnalysis = z.infer<typeof readingsAnalysisSchema>;
 
 /** POST /api/rigs/:rigId/readings */
 export const readingAddedSchema = z.strictObject({ ok: z.literal(true) });
+export type ReadingAdded = z.infer<typeof readingAddedSchema>;
 
 /** POST /api/rigs/:rigId/uploads/preview: the header, a few rows and a first guess at the mapping. */
 export const logPreviewSchema = z.strictObject({
@@ -81,9 +82,11 @@ export type UploadResult = z.infer<typeof uploadResultSchema>;
 
 /** POST /api/rigs/:rigId/photos */
 export const photoAddedSchema = z.strictObject({ id: z.uuid() });
+export type PhotoAdded = z.infer<typeof photoAddedSchema>;
 
 /** GET /api/rigs/:rigId/photos/:photoId: fresh signed addresses (they expire after a few minutes). */
 export const photoUrlsSchema = z.strictObject({ id: z.uuid(), url: z.string(), thumbUrl: z.string(), expiresAt: z.iso.datetime(), caption: z.string(), fileName: z.string() });
+export type PhotoUrls = z.infer<typeof photoUrlsSchema>;
 
 export const dropVerdictSchema = z.strictObject({ allowedPercent: z.number(), within: z.boolean(), message: z.string() });
 

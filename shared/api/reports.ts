@@ -13,6 +13,7 @@ export type SentEmail = z.infer<typeof sentEmailSchema>;
 
 /** GET /api/rigs/:rigId/emails: the reports, warnings and note e-mails sent about a rig, newest first. */
 export const sentEmailListSchema = z.strictObject({ emails: z.array(sentEmailSchema) });
+export type SentEmailList = z.infer<typeof sentEmailListSchema>;
 
 export const historyEntrySchema = z.strictObject({
   id: z.uuid(),
@@ -29,3 +30,4 @@ export type HistoryEntry = z.infer<typeof historyEntrySchema>;
 
 /** GET /api/rigs/:rigId/history */
 export const historySchema = z.strictObject({ history: z.array(historyEntrySchema) });
+export type History = z.infer<typeof historySchema>;

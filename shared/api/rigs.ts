@@ -37,6 +37,10 @@ export const rigHeaderShape = {
   updatedAt: z.iso.datetime(),
 };
 
+export const rigHeaderSchema = z.strictObject(rigHeaderShape);
+export type RigHeader = z.infer<typeof rigHeaderSchema>;
+export type RigPermissions = z.infer<typeof rigPermissionsSchema>;
+
 /** A rig in the Rigs list: its header and the figures of its card. */
 export const rigSummarySchema = z.strictObject({
   ...rigHeaderShape,
@@ -51,11 +55,13 @@ export type RigSummary = z.infer<typeof rigSummarySchema>;
 
 /** GET /api/rigs */
 export const rigListSchema = z.strictObject({ rigs: z.array(rigSummarySchema) });
+export type RigList = z.infer<typeof rigListSchema>;
 
 /** GET /api/clients: the rigs shared with an advisor, with their unread notes. */
 export const clientSchema = z.strictObject({ ...rigSummarySchema.shape, unreadNotes: z.number().int() });
 export type Client = z.infer<typeof clientSchema>;
 export const clientListSchema = z.strictObject({ clients: z.array(clientSchema) });
+export type ClientList = z.infer<typeof clientListSchema>;
 
 /** GET /api/rigs/:rigId: the rig with its power system and loads. */
 export const rigSchema = z.strictObject({ ...rigHeaderShape, power: rigPowerSchema, loads: z.array(savedLoadSchema) });
@@ -63,8 +69,10 @@ export type Rig = z.infer<typeof rigSchema>;
 
 /** POST /api/rigs */
 export const rigCreatedSchema = z.strictObject({ id: z.uuid() });
+export type RigCreated = z.infer<typeof rigCreatedSchema>;
 /** PATCH /api/rigs/:rigId, POST fixes/apply, POST history/:entryId/undo: the rig's new version. */
 export const rigVersionSchema = z.strictObject({ id: z.uuid(), version: z.number().int() });
+export type RigVersion = z.infer<typeof rigVersionSchema>;
 
 /** A trip's outlook as the API sends it: the trip's id and name beside the model's answer. */
 export const tripOutlookAnswerSchema = z.strictObject({ tripId: z.uuid(), name: z.string(), ...tripOutlookSchema.shape });
@@ -76,3 +84,4 @@ export type Outlook = z.infer<typeof outlookSchema>;
 
 /** POST /api/rigs/:rigId/try */
 export const tryResultSchema = comparisonSchema;
+export type TryAnswer = z.infer<typeof tryResultSchema>;

@@ -15,3 +15,4 @@ export type RecentPlace = z.infer<typeof recentPlaceSchema>;
 
 /** GET /api/rigs/:rigId/trips */
 export const tripListSchema = z.strictObject({ trips: z.array(savedTripSchema), recentPlaces: z.array(recentPlaceSchema) });
+export type TripList = z.infer<typeof tripListSchema>;

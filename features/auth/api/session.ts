@@ -2,11 +2,9 @@ import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/r
 
 import { ApiError, apiFetch } from '@/lib/api-client';
 import { clearOfflineAnswers } from '@/lib/offline';
+import type { Me } from '@/shared/api/me';
 
-export type Me = {
-  user: { id: string; name: string; email: string; role: 'traveller' | 'advisor' | 'admin' };
-  households: { id: string; name: string; role: string }[];
-};
+export type { Me } from '@/shared/api/me';
 
 export const sessionKeys = { all: ['session'] as const, me: () => [...sessionKeys.all, 'me'] as const };
 
