@@ -25,6 +25,7 @@ import { loadsRouter } from './routes/loads';
 import { meRouter } from './routes/me';
 import { notesRouter } from './routes/notes';
 import { peopleRouter } from './routes/people';
+import { openApiRouter } from './routes/openapi';
 import { projectionsRouter } from './routes/projections';
 import { readingsAnalyzeRouter, rigReadingsRouter } from './routes/readings';
 import { reportsRouter } from './routes/reports';
@@ -91,6 +92,7 @@ export function createApp(ctx: AppContext): Express {
   app.use('/api/health', healthRouter(db, APP_VERSION));
   // One budget per client across every open route (not one each).
   const openLimit = rateLimitedOpen(config.RATE_LIMIT_PER_MINUTE);
+  app.use('/api/openapi.json', openLimit, openApiRouter(APP_VERSION));
   app.use('/api/projections', openLimit, projectionsRouter());
   app.use('/api/solar', openLimit, solarRouter());
   app.use('/api/cable-runs', openLimit, cableRunsRouter());

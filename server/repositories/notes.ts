@@ -1,3 +1,4 @@
+import type { NoteTargetKind } from '@/shared/api/notes';
 import type { Db } from '@/db/client';
 
 export const listNotes = (db: Db, rigId: string) =>
@@ -13,7 +14,7 @@ export const listNotes = (db: Db, rigId: string) =>
 export const findNote = async (db: Db, rigId: string, noteId: string) =>
   (await db.selectFrom('notes').selectAll().where('rig_id', '=', rigId).where('id', '=', noteId).executeTakeFirst()) ?? null;
 
-export const insertNote = (db: Db, note: { rig_id: string; parent_id: string | null; target_kind: 'rig' | 'load' | 'cable-run' | 'reading'; target_id: string | null; author_id: string; body: string; rig_version: number; target_snapshot: string | null }) =>
+export const insertNote = (db: Db, note: { rig_id: string; parent_id: string | null; target_kind: NoteTargetKind; target_id: string | null; author_id: string; body: string; rig_version: number; target_snapshot: string | null }) =>
   db.insertInto('notes').values(note).returningAll().executeTakeFirstOrThrow();
 
 export const setNoteBody = (db: Db, noteId: string, body: string) => db.updateTable('notes').set({ body, edited_at: new Date() }).where('id', '=', noteId).execute();

@@ -1,7 +1,9 @@
 import type { LoadRow } from '@/db/schema';
 import { type Load, projectionInputSchema, type RigPower } from '@/shared/schemas/projection';
 
-export type SavedLoad = Load & { id: string; addedBy: { id: string; name: string } | null };
+import type { SavedLoad } from '@/shared/api/loads';
+
+export type { SavedLoad };
 
 export function loadFromRow(row: LoadRow & { added_by_name?: string | null }): SavedLoad {
   return {

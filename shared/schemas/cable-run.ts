@@ -57,8 +57,8 @@ export const CABLE_TYPES = {
   'high-temperature': { label: 'High-temperature cable (silicone, PTFE)', insulationC: 200 },
 } as const;
 export type CableType = keyof typeof CABLE_TYPES;
-const cableTypeKeys = Object.keys(CABLE_TYPES) as [CableType, ...CableType[]];
-const routeKeys = Object.keys(CIRCUIT_ROUTES) as [CircuitRoute, ...CircuitRoute[]];
+export const cableTypeKeys = Object.keys(CABLE_TYPES) as [CableType, ...CableType[]];
+export const routeKeys = Object.keys(CIRCUIT_ROUTES) as [CircuitRoute, ...CircuitRoute[]];
 
 export const AWG_CHOICES = ['18', '16', '14', '12', '10', '8', '6', '4', '2', '1', '1/0', '2/0', '3/0', '4/0'] as const;
 

@@ -2,10 +2,13 @@ import { z } from 'zod';
 
 import './error-map';
 
+/** What a note can be about: the whole rig, a load, a cable run or a reading (a log or photo). */
+export const noteTargetKindSchema = z.enum(['rig', 'load', 'cable-run', 'reading']);
+
 export const noteCreateSchema = z
   .strictObject({
     body: z.string().trim().min(1, 'Write something first.').max(4000),
-    targetKind: z.enum(['rig', 'load', 'cable-run', 'reading']).default('rig'),
+    targetKind: noteTargetKindSchema.default('rig'),
     targetId: z.uuid().optional(),
     parentId: z.uuid().optional(),
   })

@@ -2,39 +2,11 @@ import { z } from 'zod';
 
 import './error-map';
 
-import type { HouseholdRole } from '../permissions';
 import { ROUTINE_KEYS } from '../routines';
 import { batterySchema, loadSchema, rigPowerSchema } from './projection';
 
-/** What the caller may do with a rig, worked out on the server from their household role. */
-export type RigPermissions = {
-  edit: boolean;
-  delete: boolean;
-  /** Add loads, and edit or delete the ones this person added. */
-  manageLoads: boolean;
-  /** Edit or delete any load, whoever added it (the owner). */
-  editAnyLoad: boolean;
-  /** Plan and change trips. */
-  manageTrips: boolean;
-  managePeople: boolean;
-  comment: boolean;
-};
-
-/** What every answer about a rig carries (the rig, the Rigs list): which rig, whose, and what the caller may do. */
-export type RigHeader = {
-  id: string;
-  name: string;
-  vehicle: string;
-  householdId: string;
-  householdName: string;
-  role: HouseholdRole;
-  /** The caller's own user id, to tell their loads from the others'. */
-  viewerId: string;
-  permissions: RigPermissions;
-  version: number;
-  /** ISO 8601. */
-  updatedAt: string;
-};
+// What every answer about a rig carries, and what the caller may do with it: from the API's schema.
+export type { RigHeader, RigPermissions } from '../api/rigs';
 
 export const rigIdParamsSchema = z.object({ rigId: z.uuid() });
 

@@ -138,6 +138,7 @@ const PREFS = { reportsOn: true, reportWeekday: 6, reportHour: 18, timeZone: 'UT
 
 const MATRIX: Record<string, Entry> = {
   'GET /api/health/': { send: (a) => a.get('/api/health'), expect: all(200) },
+  'GET /api/openapi.json/': { send: (a) => a.get('/api/openapi.json'), expect: all(200) },
   'POST /api/projections/': { send: (a) => a.post('/api/projections').send({ battery: { chemistry: 'agm', capacityAh: 100 } }), expect: all(200) },
   'POST /api/projections/compare': {
     send: (a) => a.post('/api/projections/compare').send({ rig: { battery: { chemistry: 'agm', capacityAh: 100 } }, candidates: [{ name: 'Fan', supply: 'dc', watts: 20, hoursPerDay: 4 }] }),

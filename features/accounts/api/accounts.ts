@@ -1,15 +1,13 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 
 import { apiFetch } from '@/lib/api-client';
-import type { z } from 'zod';
-import type { accountRoleSchema } from '@/shared/schemas/people';
+import type { AccountList, AccountRole } from '@/shared/api/admin';
 
-export type AccountRole = z.infer<typeof accountRoleSchema>;
-export type Account = { id: string; name: string; email: string; role: AccountRole; emailVerified: boolean };
+export type { Account, AccountRole } from '@/shared/api/admin';
 
 export const accountKeys = { all: ['accounts'] as const, list: () => [...accountKeys.all, 'list'] as const };
 
-export const accountsQueryOptions = () => queryOptions({ queryKey: accountKeys.list(), queryFn: () => apiFetch<{ users: Account[] }>('/api/admin/users').then((r) => r.users) });
+export const accountsQueryOptions = () => queryOptions({ queryKey: accountKeys.list(), queryFn: () => apiFetch<AccountList>('/api/admin/users').then((r) => r.users) });
 export const useAccountsQuery = () => useQuery(accountsQueryOptions());
 
 export function useAccountRoleMutation() {

@@ -2,14 +2,9 @@ import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/r
 
 import { ApiError, apiFetch } from '@/lib/api-client';
 import { clearOfflineAnswers } from '@/lib/offline';
-import type { EnergyUnit } from '@/shared/units';
+import type { Me } from '@/shared/api/me';
 
-export type Me = {
-  user: { id: string; name: string; email: string; role: 'traveller' | 'advisor' | 'admin' };
-  households: { id: string; name: string; role: string }[];
-  /** The energy unit kept on the account (the e-mails use it); saved is false while never chosen. */
-  units: { energy: EnergyUnit; saved: boolean };
-};
+export type { Me } from '@/shared/api/me';
 
 export const sessionKeys = { all: ['session'] as const, me: () => [...sessionKeys.all, 'me'] as const };
 

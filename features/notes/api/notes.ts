@@ -1,25 +1,10 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 
 import { apiFetch } from '@/lib/api-client';
+import type { NoteCreated, Notes } from '@/shared/api/notes';
 import type { NoteCreateForm } from '@/shared/schemas/note';
 
-export type Note = {
-  id: string;
-  parentId: string | null;
-  targetKind: 'rig' | 'load' | 'cable-run' | 'reading';
-  targetId: string | null;
-  targetName: string | null;
-  author: { id: string; name: string } | null;
-  body: string;
-  rigVersion: number;
-  writtenWhen: string | null;
-  resolved: boolean;
-  edited: boolean;
-  createdAt: string;
-  mine: boolean;
-};
-export type Thread = Note & { replies: Note[] };
-export type Notes = { threads: Thread[]; unread: number };
+export type { Note, Notes, Thread } from '@/shared/api/notes';
 
 export const noteKeys = {
   all: ['notes'] as const,
@@ -34,7 +19,7 @@ function useNoteMutation<V>(rigId: string, fn: (v: V) => Promise<unknown>) {
   return useMutation({ mutationFn: fn, onSuccess: () => client.invalidateQueries({ queryKey: noteKeys.rig(rigId) }) });
 }
 
-export const useNoteCreateMutation = (rigId: string) => useNoteMutation(rigId, (form: NoteCreateForm) => apiFetch<{ id: string }>(`/api/rigs/${rigId}/notes`, { method: 'POST', json: form }));
+export const useNoteCreateMutation = (rigId: string) => useNoteMutation(rigId, (form: NoteCreateForm) => apiFetch<NoteCreated>(`/api/rigs/${rigId}/notes`, { method: 'POST', json: form }));
 export const useNoteEditMutation = (rigId: string) =>
   useNoteMutation(rigId, ({ id, body }: { id: string; body: string }) => apiFetch(`/api/rigs/${rigId}/notes/${id}`, { method: 'PATCH', json: { body } }));
 export const useNoteDeleteMutation = (rigId: string) => useNoteMutation(rigId, (id: string) => apiFetch(`/api/rigs/${rigId}/notes/${id}`, { method: 'DELETE' }));

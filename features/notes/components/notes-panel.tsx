@@ -8,11 +8,12 @@ import { ChoiceField, Form, showApiErrors, SubmitButton } from '@/components/for
 import { formatWhen } from '@/components/format';
 import { TextField } from '@/components/text-field';
 import { Body, Card, Heading, Small } from '@/components/ui';
+import type { NoteTargetKind } from '@/shared/api/notes';
 import { noteCreateSchema, noteEditSchema } from '@/shared/schemas/note';
 import { colors, pressTarget, radius, space, type } from '@/shared/theme';
 import { type Note, type Thread, useNoteCreateMutation, useNoteDeleteMutation, useNoteEditMutation, useNotesQuery, useNotesReadMutation, useThreadResolveMutation } from '../api/notes';
 
-export type NoteTarget = { kind: 'rig' | 'load' | 'cable-run' | 'reading'; id?: string; name: string };
+export type NoteTarget = { kind: NoteTargetKind; id?: string; name: string };
 export type NotePhoto = { id: string; thumbUrl: string; caption: string };
 type Props = { rigId: string; canComment: boolean; canDeleteAny: boolean; targets: NoteTarget[]; photos?: NotePhoto[]; onOpenPhoto?: (id: string) => void };
 

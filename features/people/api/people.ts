@@ -1,11 +1,10 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 
 import { apiFetch } from '@/lib/api-client';
+import type { InvitationSent, InvitationView, People } from '@/shared/api/people';
 import type { InvitationCreateForm } from '@/shared/schemas/people';
 
-export type Person = { id: string; userId: string; role: string; joinedAt: string; name: string; email: string };
-export type PendingInvitation = { id: string; email: string; role: string | null; status: string; expiresAt: string; expired: boolean };
-export type People = { members: Person[]; invitations: PendingInvitation[] };
+export type { InvitationView, PendingInvitation, People, Person } from '@/shared/api/people';
 
 export const peopleKeys = {
   all: ['people'] as const,
@@ -23,9 +22,9 @@ function usePeopleMutation<V>(rigId: string, fn: (v: V) => Promise<unknown>) {
 }
 
 export const useInvitationCreateMutation = (rigId: string) =>
-  usePeopleMutation(rigId, (form: InvitationCreateForm) => apiFetch(`/api/rigs/${rigId}/invitations`, { method: 'POST', json: form }));
+  usePeopleMutation(rigId, (form: InvitationCreateForm) => apiFetch<InvitationSent>(`/api/rigs/${rigId}/invitations`, { method: 'POST', json: form }));
 export const useInvitationResendMutation = (rigId: string) =>
-  usePeopleMutation(rigId, (id: string) => apiFetch(`/api/rigs/${rigId}/invitations/${id}/resend`, { method: 'POST', json: {} }));
+  usePeopleMutation(rigId, (id: string) => apiFetch<InvitationSent>(`/api/rigs/${rigId}/invitations/${id}/resend`, { method: 'POST', json: {} }));
 export const useInvitationRevokeMutation = (rigId: string) =>
   usePeopleMutation(rigId, (id: string) => apiFetch(`/api/rigs/${rigId}/invitations/${id}`, { method: 'DELETE' }));
 export const useMemberRoleMutation = (rigId: string) =>
@@ -34,7 +33,6 @@ export const useMemberRemoveMutation = (rigId: string) =>
   usePeopleMutation(rigId, (memberId: string) => apiFetch(`/api/rigs/${rigId}/members/${memberId}`, { method: 'DELETE' }));
 export const useLeaveMutation = (rigId: string) => useMutation({ mutationFn: () => apiFetch(`/api/rigs/${rigId}/leave`, { method: 'POST', json: {} }) });
 
-export type InvitationView = { id: string; householdName: string; inviterName: string | null; role: string | null; expiresAt: string };
 export const useInvitationQuery = (invitationId: string) =>
   useQuery({ queryKey: peopleKeys.invitation(invitationId), queryFn: () => apiFetch<InvitationView>(`/api/invitations/${invitationId}`), retry: false });
 export function useInvitationAcceptMutation(invitationId: string) {

@@ -1,39 +1,10 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 
-import type { DropVerdict } from '@/shared/energy/drop-verdict';
 import { apiFetch } from '@/lib/api-client';
+import type { DropResult, LogPreview, PhotoAdded, PhotoUrls, ReadingAdded, Readings, UploadResult } from '@/shared/api/readings';
 import type { ColumnMapping, ReadingForm, VoltageDropForm } from '@/shared/schemas/reading';
 
-export type Readings = {
-  timeZone: string;
-  total: number;
-  window: { from: string; to: string; days: number; clipped: boolean } | null;
-  chart: {
-    points: { at: string; n: number; voltageV: number; currentA: number | null; socPercent: number | null }[];
-    model: { at: string; socPercent: number }[];
-  };
-  spot: { id: string; at: string; voltageV: number; currentA: number | null; socPercent: number | null; rested: boolean; place: string; note: string; by: string | null; canDelete: boolean }[];
-  uploads: { id: string; fileName: string; rowCount: number; errorCount: number; errors: { line: number; reason: string }[]; by: string | null; createdAt: string; canDelete: boolean }[];
-  photos: { id: string; caption: string; fileName: string; by: string | null; createdAt: string; thumbUrl: string; canDelete: boolean }[];
-  analysis: {
-    drainA: number | null;
-    rangeA: [number, number] | null;
-    method: 'current' | 'monitor' | 'voltage' | null;
-    hours: number;
-    usableAh: number;
-    flaggedRested: number;
-    label: string;
-    reason: string | null;
-    notes: string[];
-    keyOffDrawA: number;
-    chemistry: string;
-    quietHoursNeeded: number;
-    comparison: { enough: boolean; quietHours: number; neededHours: number; measuredA: number; modelA: number | null; matches: boolean | null; message: string; causes: string[]; suggestedKeyOffDrawA: number | null } | null;
-  };
-};
-export type LogPreview = { columns: string[]; sample: string[][]; rows: number; delimiter: string; decimalComma: boolean; mapping: Partial<ColumnMapping>; remembered: boolean };
-export type UploadResult = { upload: { id: string; fileName: string; rowCount: number; errorCount: number }; errors: { line: number; reason: string }[]; notes: string[] };
-export type DropResult = { dropV: number; dropPercent: number; resistanceOhm: number; expectedDropV: number | null; flagged: boolean; message: string; cableRun: string | null; verdict: DropVerdict | null };
+export type { DropResult, LogPreview, Readings, UploadResult } from '@/shared/api/readings';
 
 export const readingKeys = {
   all: ['readings'] as const,
@@ -61,7 +32,7 @@ const form = (file: File, fields: Record<string, string> = {}) => {
   return body;
 };
 
-export const useSpotReadingMutation = (rigId: string) => useReadingsMutation(rigId, (r: ReadingForm) => apiFetch(`/api/rigs/${rigId}/readings`, { method: 'POST', json: r }));
+export const useSpotReadingMutation = (rigId: string) => useReadingsMutation(rigId, (r: ReadingForm) => apiFetch<ReadingAdded>(`/api/rigs/${rigId}/readings`, { method: 'POST', json: r }));
 export const useSpotReadingDeleteMutation = (rigId: string) => useReadingsMutation(rigId, (id: string) => apiFetch(`/api/rigs/${rigId}/readings/${id}`, { method: 'DELETE' }));
 export const useLogPreviewMutation = (rigId: string) => useMutation({ mutationFn: (file: File) => apiFetch<LogPreview>(`/api/rigs/${rigId}/uploads/preview`, { method: 'POST', body: form(file) }) });
 export const useLogUploadMutation = (rigId: string) =>
@@ -70,8 +41,8 @@ export const useLogUploadMutation = (rigId: string) =>
   );
 export const useUploadDeleteMutation = (rigId: string) => useReadingsMutation(rigId, (id: string) => apiFetch(`/api/rigs/${rigId}/uploads/${id}`, { method: 'DELETE' }));
 export const usePhotoUploadMutation = (rigId: string) =>
-  useReadingsMutation(rigId, (v: { file: File; caption: string }) => apiFetch<{ id: string }>(`/api/rigs/${rigId}/photos`, { method: 'POST', body: form(v.file, { caption: v.caption }) }));
+  useReadingsMutation(rigId, (v: { file: File; caption: string }) => apiFetch<PhotoAdded>(`/api/rigs/${rigId}/photos`, { method: 'POST', body: form(v.file, { caption: v.caption }) }));
 export const usePhotoDeleteMutation = (rigId: string) => useReadingsMutation(rigId, (id: string) => apiFetch(`/api/rigs/${rigId}/photos/${id}`, { method: 'DELETE' }));
 /** A fresh signed address for the full photo (they expire after a few minutes). */
-export const openPhoto = (rigId: string, id: string) => apiFetch<{ url: string }>(`/api/rigs/${rigId}/photos/${id}`).then((r) => r.url);
+export const openPhoto = (rigId: string, id: string) => apiFetch<PhotoUrls>(`/api/rigs/${rigId}/photos/${id}`).then((r) => r.url);
 export const useVoltageDropMutation = (rigId: string) => useMutation({ mutationFn: (v: VoltageDropForm) => apiFetch<DropResult>(`/api/rigs/${rigId}/voltage-drop`, { method: 'POST', json: v }) });

@@ -1,10 +1,10 @@
 import { useQuery } from '@tanstack/react-query';
 
 import { apiFetch } from '@/lib/api-client';
-import type { RigSummary } from './get-rigs';
+import type { ClientList } from '@/shared/api/rigs';
 import { rigKeys } from './rig-keys';
 
-export type Client = RigSummary & { unreadNotes: number };
+export type { Client } from '@/shared/api/rigs';
 
 /** The rigs shared with me as an advisor, Short first (the server orders them). */
-export const useClientsQuery = () => useQuery({ queryKey: rigKeys.clients(), queryFn: () => apiFetch<{ clients: Client[] }>('/api/clients').then((r) => r.clients) });
+export const useClientsQuery = () => useQuery({ queryKey: rigKeys.clients(), queryFn: () => apiFetch<ClientList>('/api/clients').then((r) => r.clients) });

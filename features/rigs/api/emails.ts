@@ -1,9 +1,10 @@
 import { useQuery } from '@tanstack/react-query';
 
 import { apiFetch } from '@/lib/api-client';
+import type { SentEmailList } from '@/shared/api/reports';
 import { rigKeys } from './rig-keys';
 
-export type SentEmail = { id: string; kind: 'report' | 'warning' | 'notes'; subject: string; sentAt: string; recipient: { id: string | null; name: string } };
+export type { SentEmail } from '@/shared/api/reports';
 
 export const useSentEmailsQuery = (rigId: string) =>
-  useQuery({ queryKey: rigKeys.emails(rigId), queryFn: () => apiFetch<{ emails: SentEmail[] }>(`/api/rigs/${rigId}/emails`).then((r) => r.emails) });
+  useQuery({ queryKey: rigKeys.emails(rigId), queryFn: () => apiFetch<SentEmailList>(`/api/rigs/${rigId}/emails`).then((r) => r.emails) });

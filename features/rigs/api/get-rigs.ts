@@ -1,21 +1,12 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 
 import { apiFetch } from '@/lib/api-client';
-import type { MarginState } from '@/shared/energy/project';
-import type { RigHeader } from '@/shared/schemas/rig';
+import type { RigList } from '@/shared/api/rigs';
 import { rigKeys } from './rig-keys';
 
-/** A rig in the Rigs list: its header and the figures of its card. */
-export type RigSummary = RigHeader & {
-  loadCount: number;
-  daysParked: number | null;
-  daysOnRoutine: number | null;
-  holds: boolean;
-  marginState: MarginState;
-  horizonDays: number;
-};
+export type { RigSummary } from '@/shared/api/rigs';
 
-export const getRigs = () => apiFetch<{ rigs: RigSummary[] }>('/api/rigs').then((r) => r.rigs);
+export const getRigs = () => apiFetch<RigList>('/api/rigs').then((r) => r.rigs);
 
 export const rigsQueryOptions = () => queryOptions({ queryKey: rigKeys.list(), queryFn: getRigs });
 

@@ -1,11 +1,11 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 
 import { apiFetch } from '@/lib/api-client';
-import type { HookupPlan } from '@/shared/energy/hookup/plan';
+import type { RigHookup } from '@/shared/api/hookups';
 import type { InverterControl } from '@/shared/schemas/projection';
 import { rigKeys } from './rig-keys';
 
-export type RigHookup = HookupPlan & { rigId: string; version: number; feedRun: { id: string; label: string } | null };
+export type { RigHookup } from '@/shared/api/hookups';
 
 /** The rig's hook-up as it is, or (control given) as a Fix would change the inverter's control. */
 export const hookupQueryOptions = (rigId: string, control: InverterControl | null) =>

@@ -1,18 +1,15 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 
 import { ApiError, apiFetch } from '@/lib/api-client';
-import type { Comparison } from '@/shared/energy/compare';
-import type { Projection } from '@/shared/energy/project';
-import type { TripOutlook } from '@/shared/energy/trip';
-import type { Load, LoadInput, RigPower } from '@/shared/schemas/projection';
-import type { RigHeader, RigUpdateForm } from '@/shared/schemas/rig';
+import type { SavedLoad } from '@/shared/api/loads';
+import type { Outlook, Rig, RigVersion, TryAnswer } from '@/shared/api/rigs';
+import type { LoadInput } from '@/shared/schemas/projection';
+import type { RigUpdateForm } from '@/shared/schemas/rig';
 import type { TryResult } from '../utils/try-on-device';
 import { rigKeys } from './rig-keys';
 
-export type SavedLoad = Load & { id: string; addedBy: { id: string; name: string } | null };
-export type Rig = RigHeader & { power: RigPower; loads: SavedLoad[] };
-export type Outlook = Projection & { rigId: string; version: number; trip: TripOutlookAnswer | null };
-export type TripOutlookAnswer = TripOutlook & { tripId: string; name: string };
+export type { SavedLoad } from '@/shared/api/loads';
+export type { Outlook, Rig, TripOutlookAnswer } from '@/shared/api/rigs';
 
 // A refusal (404: not there or not shared) is an answer, not a failure worth retrying.
 const retryUnlessRefused = (count: number, err: Error) => !(err instanceof ApiError && err.status < 500) && count < 1;
@@ -39,7 +36,7 @@ export function useRigMutation<V, R>(rigId: string, fn: (v: V) => Promise<R>) {
   });
 }
 
-export const useRigUpdateMutation = (rigId: string) => useRigMutation(rigId, (form: RigUpdateForm) => apiFetch<{ id: string; version: number }>(`/api/rigs/${rigId}`, { method: 'PATCH', json: form }));
+export const useRigUpdateMutation = (rigId: string) => useRigMutation(rigId, (form: RigUpdateForm) => apiFetch<RigVersion>(`/api/rigs/${rigId}`, { method: 'PATCH', json: form }));
 export const useRigDeleteMutation = (rigId: string) => {
   const client = useQueryClient();
   return useMutation({ mutationFn: () => apiFetch(`/api/rigs/${rigId}`, { method: 'DELETE' }), onSuccess: () => client.invalidateQueries({ queryKey: rigKeys.all }) });
@@ -55,7 +52,7 @@ export const useTryLoadsMutation = (rigId: string) => {
   return useMutation({
     mutationFn: async (candidates: LoadInput[]): Promise<TryResult> => {
       try {
-        return { ...(await apiFetch<Comparison>(`/api/rigs/${rigId}/try`, { method: 'POST', json: { candidates } })), onDevice: false };
+        return { ...(await apiFetch<TryAnswer>(`/api/rigs/${rigId}/try`, { method: 'POST', json: { candidates } })), onDevice: false };
       } catch (err) {
         if (!(err instanceof ApiError && err.code === 'offline')) throw err;
         const rig = await client.ensureQueryData(rigQueryOptions(rigId));

@@ -1,15 +1,14 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 
 import { apiFetch } from '@/lib/api-client';
-import type { Trip, TripInput } from '@/shared/schemas/trip';
-import type { TripOutlookAnswer } from './rig';
+import type { SavedTrip, TripList, TripOutlookAnswer } from '@/shared/api/trips';
+import type { TripInput } from '@/shared/schemas/trip';
 import { rigKeys } from './rig-keys';
 
-export type SavedTrip = Trip & { id: string };
-export type RecentPlace = { name: string; latitudeDeg: number; elevationM?: number };
+export type { RecentPlace, SavedTrip } from '@/shared/api/trips';
 
 export const useTripsQuery = (rigId: string) =>
-  useQuery({ queryKey: rigKeys.trips(rigId), queryFn: () => apiFetch<{ trips: SavedTrip[]; recentPlaces: RecentPlace[] }>(`/api/rigs/${rigId}/trips`) });
+  useQuery({ queryKey: rigKeys.trips(rigId), queryFn: () => apiFetch<TripList>(`/api/rigs/${rigId}/trips`) });
 
 export const useTripOutlookQuery = (rigId: string, tripId: string | null) =>
   useQuery({

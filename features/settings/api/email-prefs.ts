@@ -1,6 +1,8 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 
 import { apiFetch } from '@/lib/api-client';
+import type { EmailFailureList } from '@/shared/api/admin';
+import type { SavedEmailPrefs } from '@/shared/api/me';
 import type { EmailPrefs } from '@/shared/schemas/email-prefs';
 
 export const settingsKeys = {
@@ -9,16 +11,16 @@ export const settingsKeys = {
   emailFailures: () => [...settingsKeys.all, 'email-failures'] as const,
 };
 
-export const useEmailPrefsQuery = () => useQuery({ queryKey: settingsKeys.emailPrefs(), queryFn: () => apiFetch<EmailPrefs & { saved: boolean }>('/api/me/email-prefs') });
+export const useEmailPrefsQuery = () => useQuery({ queryKey: settingsKeys.emailPrefs(), queryFn: () => apiFetch<SavedEmailPrefs>('/api/me/email-prefs') });
 
 export function useEmailPrefsMutation() {
   const client = useQueryClient();
   return useMutation({
-    mutationFn: (prefs: EmailPrefs) => apiFetch<EmailPrefs & { saved: boolean }>('/api/me/email-prefs', { method: 'PUT', json: prefs }),
+    mutationFn: (prefs: EmailPrefs) => apiFetch<SavedEmailPrefs>('/api/me/email-prefs', { method: 'PUT', json: prefs }),
     onSuccess: (data) => client.setQueryData(settingsKeys.emailPrefs(), data),
   });
 }
 
-export type EmailFailure = { id: string; kind: string; key: string; attempts: number; error: string | null; to: string | null; createdAt: string };
+export type { EmailFailure } from '@/shared/api/admin';
 export const useEmailFailuresQuery = (enabled: boolean) =>
-  useQuery({ queryKey: settingsKeys.emailFailures(), queryFn: () => apiFetch<{ failures: EmailFailure[] }>('/api/admin/email-failures').then((r) => r.failures), enabled });
+  useQuery({ queryKey: settingsKeys.emailFailures(), queryFn: () => apiFetch<EmailFailureList>('/api/admin/email-failures').then((r) => r.failures), enabled });

@@ -1,0 +1,1 @@
+export { healthSchema, type Health } from '../schemas/health';
