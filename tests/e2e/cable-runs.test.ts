@@ -1,27 +1,12 @@
-import path from 'node:path';
-import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 
-import { BASE, launchChromium, PHONE, SHOTS, signInAs, WIDE } from './browser';
+import { BASE, fill, PHONE, shot, signInAs, WIDE, withBrowser } from './browser';
 
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launchChromium();
-});
-afterAll(async () => {
-  await browser?.close();
-});
-
-async function fill(page: Page, testId: string, value: string) {
-  const input = page.getByTestId(testId);
-  await input.fill(value);
-  await input.blur();
-}
+const chrome = withBrowser();
 
 describe('Wire a circuit, the stand-alone calculator', () => {
   it('sizes 20 A over 7.62 m at 3 % as 4 AWG with the cautions beside it (wide)', async () => {
-    const page = await browser.newPage({ viewport: WIDE });
-    await signInAs(page, 'tobi@example.org');
+    const page = await chrome.signedIn('tobi@example.org', WIDE);
     await page.goto(BASE + '/cable-runs');
     await page.getByTestId('cable-run-calculator').waitFor();
     await fill(page, 'field-currentA', '20');
@@ -32,13 +17,13 @@ describe('Wire a circuit, the stand-alone calculator', () => {
     expect(await page.getByTestId('cautions').textContent()).toMatch(/auto electrician/);
     // The answer drawn: battery, the fuse at the battery, the cable with its size and drop, the device.
     expect(await page.getByTestId('circuit-drawing').getAttribute('aria-label')).toMatch(/20 A fuse at the battery, 4 AWG .* over 7\.62 m dropping 2\.57 %/);
-    await page.screenshot({ path: path.join(SHOTS, 'cable-runs-wide.png'), fullPage: true });
-    await page.getByTestId('circuit-drawing').screenshot({ path: path.join(SHOTS, 'wire-a-circuit-drawing-wide.png') });
+    await shot(page, 'cable-runs-wide');
+    await shot(page.getByTestId('circuit-drawing'), 'wire-a-circuit-drawing-wide');
     await page.close();
   });
 
   it('shows the field error inline and sends nothing for a zero length (phone)', async () => {
-    const page = await browser.newPage({ viewport: PHONE });
+    const page = await chrome.page(PHONE);
     let posted = 0;
     page.on('request', (r) => {
       if (r.url().includes('/api/cable-runs/size')) posted++;
@@ -54,7 +39,7 @@ describe('Wire a circuit, the stand-alone calculator', () => {
     await page.getByText('Current needs a number.', { exact: true }).waitFor();
     expect(await page.getByTestId('form-error-summary').textContent()).toMatch(/2 things to fix:.*Current needs a number.*length must be more than 0 m/);
     expect(posted).toBe(0);
-    await page.screenshot({ path: path.join(SHOTS, 'cable-runs-phone-errors.png'), fullPage: true });
+    await shot(page, 'cable-runs-phone-errors');
     await page.close();
   });
 });
