@@ -1,20 +1,13 @@
-import path from 'node:path';
 import { AxeBuilder } from '@axe-core/playwright';
-import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { describe, expect, it } from 'vitest';
 
-import { BASE, launchChromium, PHONE, SHOTS, signInAs, WIDE } from './browser';
+import { BASE, PHONE, shot, signInAs, WIDE, withBrowser } from './browser';
 
 // axe-core over every screen (AxeBuilder wants a page of a context made with newContext), at a phone's width and a desktop's: no serious or critical violation of
 // WCAG 2.1 A and AA. Each screen's picture is kept beside the others in test-results/screenshots.
 
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launchChromium();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const chrome = withBrowser();
 
 type Finding = { screen: string; size: string; rule: string; impact: string; targets: string[] };
 
@@ -22,7 +15,7 @@ async function audit(page: Page, screen: string, size: string, findings: Finding
   // Charts draw after CanvasKit loads; fonts and queries settle first.
   await page.waitForLoadState('networkidle');
   await page.waitForTimeout(400);
-  await page.screenshot({ path: path.join(SHOTS, `a11y-${screen}-${size}.png`), fullPage: true });
+  await shot(page, `a11y-${screen}-${size}`);
   const result = await new AxeBuilder({ page }).withTags(['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa']).analyze();
   for (const v of result.violations) {
     if (v.impact === 'serious' || v.impact === 'critical') {
@@ -40,7 +33,7 @@ describe('accessibility of every screen (axe-core)', () => {
   for (const [size, viewport] of SIZES) {
     it(`has no serious or critical violation on any screen at ${viewport.width} px`, async () => {
       const findings: Finding[] = [];
-      const context = await browser.newContext({ viewport });
+      const context = await chrome.browser.newContext({ viewport });
       const page = await context.newPage();
       for (const [screen, url, ready] of [
         ['sign-in', '/sign-in', 'sign-in-screen'],
@@ -85,7 +78,7 @@ describe('accessibility of every screen (axe-core)', () => {
       await context.close();
 
       // The advisor's Clients screen.
-      const advisorContext = await browser.newContext({ viewport });
+      const advisorContext = await chrome.browser.newContext({ viewport });
       const advisor = await advisorContext.newPage();
       await signInAs(advisor, 'marguerite@example.org');
       await advisor.goto(BASE + '/clients');

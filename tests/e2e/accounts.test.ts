@@ -1,20 +1,12 @@
-import path from 'node:path';
-import type { Browser } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 
-import { BASE, launchChromium, mailLink, PHONE, SHOTS, signInAs, WIDE } from './browser';
+import { BASE, mailLink, PHONE, shot, WIDE, withBrowser } from './browser';
 
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launchChromium();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const chrome = withBrowser();
 
 describe('accounts in the browser', () => {
   it('signs up, confirms the address through the link caught by maildev, and lands on the home screen', async () => {
-    const page = await browser.newPage({ viewport: PHONE });
+    const page = await chrome.page(PHONE);
     const email = `traveller-${Date.now()}@example.org`;
     await page.goto(BASE + '/sign-up');
     await page.getByTestId('field-name').fill('Juno Traveller');
@@ -25,7 +17,7 @@ describe('accounts in the browser', () => {
     await page.getByTestId('field-password').fill('a-long-enough-password');
     await page.getByTestId('sign-up-submit').click();
     await page.getByTestId('check-inbox-screen').waitFor();
-    await page.screenshot({ path: path.join(SHOTS, 'check-inbox-phone.png') });
+    await shot(page, 'check-inbox-phone', { fullPage: false });
 
     const link = await mailLink(email, /Confirm your e-mail/);
     // The link points at the app's configured address; the browser tests serve it on their own port.
@@ -37,21 +29,19 @@ describe('accounts in the browser', () => {
   });
 
   it('shows the owner the People of Wren with invite controls, and the advisor without them', async () => {
-    const owner = await browser.newPage({ viewport: WIDE });
-    await signInAs(owner, 'ines@example.org');
+    const owner = await chrome.signedIn('ines@example.org', WIDE);
     await owner.getByTestId('people-Wren').click();
     await owner.getByTestId('people-screen').waitFor();
     await owner.getByTestId('member-marguerite@example.org').waitFor();
     expect(await owner.getByTestId('invite-form').count()).toBe(1);
-    await owner.screenshot({ path: path.join(SHOTS, 'people-wide.png'), fullPage: true });
+    await shot(owner, 'people-wide');
     await owner.close();
 
-    const advisor = await browser.newPage({ viewport: PHONE });
-    await signInAs(advisor, 'marguerite@example.org');
+    const advisor = await chrome.signedIn('marguerite@example.org', PHONE);
     await advisor.getByTestId('people-Wren').click();
     await advisor.getByTestId('people-screen').waitFor();
     expect(await advisor.getByTestId('invite-form').count()).toBe(0);
-    await advisor.screenshot({ path: path.join(SHOTS, 'people-advisor-phone.png'), fullPage: true });
+    await shot(advisor, 'people-advisor-phone');
     await advisor.close();
   });
 });

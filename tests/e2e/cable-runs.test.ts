@@ -1,28 +1,13 @@
-import path from 'node:path';
-import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 
 import { CIRCUIT_LABELS as L } from '@/shared/schemas/circuit';
-import { BASE, launchChromium, PHONE, SHOTS, signInAs, WIDE } from './browser';
+import { BASE, fill, PHONE, shot, signInAs, WIDE, withBrowser } from './browser';
 
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launchChromium();
-});
-afterAll(async () => {
-  await browser?.close();
-});
-
-async function fill(page: Page, testId: string, value: string) {
-  const input = page.getByTestId(testId);
-  await input.fill(value);
-  await input.blur();
-}
+const chrome = withBrowser();
 
 describe('Wire a circuit, the stand-alone calculator', () => {
   it('sizes 20 A over 7.62 m at 3 % as 4 AWG with the cautions beside it (wide)', async () => {
-    const page = await browser.newPage({ viewport: WIDE });
-    await signInAs(page, 'tobi@example.org');
+    const page = await chrome.signedIn('tobi@example.org', WIDE);
     await page.goto(BASE + '/cable-runs');
     await page.getByTestId('cable-run-calculator').waitFor();
     await fill(page, 'field-currentA', '20');
@@ -36,13 +21,13 @@ describe('Wire a circuit, the stand-alone calculator', () => {
     // The drawing arrives in the drawings' lazy chunk, into the 150 px its space kept.
     await page.locator('[data-testid="circuit-drawing"] svg').waitFor();
     expect((await page.getByTestId('circuit-drawing').boundingBox())!.height).toBe(150);
-    await page.screenshot({ path: path.join(SHOTS, 'cable-runs-wide.png'), fullPage: true });
-    await page.getByTestId('circuit-drawing').screenshot({ path: path.join(SHOTS, 'wire-a-circuit-drawing-wide.png') });
+    await shot(page, 'cable-runs-wide');
+    await shot(page.getByTestId('circuit-drawing'), 'wire-a-circuit-drawing-wide');
     await page.close();
   });
 
   it('shows the field error inline and sends nothing for a zero length (phone)', async () => {
-    const page = await browser.newPage({ viewport: PHONE });
+    const page = await chrome.page(PHONE);
     let posted = 0;
     page.on('request', (r) => {
       if (r.url().includes('/api/cable-runs/size')) posted++;
@@ -58,7 +43,7 @@ describe('Wire a circuit, the stand-alone calculator', () => {
     await page.getByText('Current needs a number.', { exact: true }).waitFor();
     expect(await page.getByTestId('form-error-summary').textContent()).toMatch(/2 things to fix:.*Current needs a number.*length must be more than 0 m/);
     expect(posted).toBe(0);
-    await page.screenshot({ path: path.join(SHOTS, 'cable-runs-phone-errors.png'), fullPage: true });
+    await shot(page, 'cable-runs-phone-errors');
     await page.close();
   });
 });
@@ -85,12 +70,12 @@ async function openWrenRuns(page: Page) {
 describe('one circuit form for Wire a circuit and a saved run', () => {
   for (const [name, viewport] of SIZES) {
     it(`asks the same fields in the same words and order on both (${name})`, async () => {
-      const page = await browser.newPage({ viewport });
+      const page = await chrome.page(viewport);
       await openWrenRuns(page);
       await page.getByTestId('add-run').click();
       await page.getByTestId('circuit-form').waitFor();
       const saved = await labelsOf(page);
-      await page.screenshot({ path: path.join(SHOTS, `cable-runs-saved-form-${name}.png`), fullPage: true });
+      await shot(page, `cable-runs-saved-form-${name}`);
       await page.goto(BASE + '/cable-runs');
       await page.getByTestId('cable-run-calculator').waitFor();
       const calculator = await labelsOf(page);
@@ -108,7 +93,7 @@ describe('one circuit form for Wire a circuit and a saved run', () => {
 describe("the voltage-drop test's verdict in the browser", () => {
   for (const [name, viewport] of SIZES) {
     it(`says a 4.5 % drop on a run allowed 3 % is over its limit (${name})`, async () => {
-      const page = await browser.newPage({ viewport });
+      const page = await chrome.page(viewport);
       const rigPath = await openWrenRuns(page);
       const label = `Drop check feed ${viewport.width}`;
       await page.getByTestId('add-run').click();
@@ -134,7 +119,7 @@ describe("the voltage-drop test's verdict in the browser", () => {
       await verdict.waitFor();
       expect(await verdict.innerText()).toMatch(/Over its limit\. 4\.5 % lost on a run allowed 3 %: 1\.5 points over\./);
       await verdict.scrollIntoViewIfNeeded();
-      await page.screenshot({ path: path.join(SHOTS, `drop-verdict-${name}.png`), fullPage: true });
+      await shot(page, `drop-verdict-${name}`);
       await page.close();
     });
   }

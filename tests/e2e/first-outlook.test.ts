@@ -1,20 +1,13 @@
 import { execFileSync } from 'node:child_process';
-import path from 'node:path';
-import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { describe, expect, it } from 'vitest';
 
-import { BASE, launchChromium, mailLink, PHONE, SHOTS, signInAs, WIDE } from './browser';
+import { BASE, mailLink, PHONE, shot, WIDE, withBrowser } from './browser';
 
 // A new traveller's first two minutes, at phone and wide sizes: sign up, New rig from the catalogue and a
 // named routine, an Outlook that names that routine and says how it was worked out, the budget sheet
 // (read back with poppler's pdftotext), and the rig kept from anyone outside the household.
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launchChromium();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const chrome = withBrowser();
 
 async function signUp(page: Page, label: string) {
   const email = `${label}-${Date.now()}@example.org`;
@@ -40,7 +33,7 @@ for (const [size, viewport] of [['phone', PHONE], ['wide', WIDE]] as const) {
     let rigId = '';
 
     it('a new traveller reaches a first Outlook from the catalogue and a named routine, and the Outlook names it', async () => {
-      const page = await browser.newPage({ viewport });
+      const page = await chrome.page(viewport);
       await signUp(page, `first-${size}`);
       await page.getByTestId('new-rig').click();
       await page.getByTestId('new-rig-screen').waitFor();
@@ -55,7 +48,7 @@ for (const [size, viewport] of [['phone', PHONE], ['wide', WIDE]] as const) {
       await pick(page, 'compressor fridge 40', 'fridge-compressor-40l');
       await pick(page, 'cpap off', 'cpap-no-humidifier');
       await pick(page, 'phone charging', 'phone-charging');
-      await page.screenshot({ path: path.join(SHOTS, `new-rig-${size}.png`), fullPage: true });
+      await shot(page, `new-rig-${size}`);
       await page.getByTestId('create-rig').click();
       await page.getByTestId('outlook-screen').waitFor();
       rigId = new URL(page.url()).pathname.split('/')[2];
@@ -75,7 +68,7 @@ for (const [size, viewport] of [['phone', PHONE], ['wide', WIDE]] as const) {
       // The rig and its Outlook are read again after the save; the row shows both once both are back.
       await page.getByTestId('assumption-cutoff').filter({ hasText: 'your setting' }).filter({ hasText: '40 %' }).waitFor();
       expect(await page.getByTestId('figure-days-parked').textContent()).not.toBe(before);
-      await page.screenshot({ path: path.join(SHOTS, `first-outlook-${size}.png`), fullPage: true });
+      await shot(page, `first-outlook-${size}`);
 
       // The budget sheet downloads, and its text carries the Outlook's headline figures.
       const outlook = (await (await page.request.get(`${BASE}/api/rigs/${rigId}/outlook`)).json()) as { parked: { daysToCutoff: number | null }; margin: { state: string }; horizonDays: number };
@@ -97,19 +90,18 @@ for (const [size, viewport] of [['phone', PHONE], ['wide', WIDE]] as const) {
       await page.getByTestId('report-preview').waitFor();
       if ((await page.getByTestId('report-preview').getAttribute('aria-pressed')) !== 'true') await page.getByTestId('report-preview').click();
       await page.frameLocator('[data-testid="report-preview-frame"]').getByText(`Heron ${size}: your week ahead`).waitFor();
-      await page.screenshot({ path: path.join(SHOTS, `report-preview-${size}.png`), fullPage: true });
+      await shot(page, `report-preview-${size}`);
       await page.close();
     });
 
     it('keeps the rig and its sheet from someone outside the household', async () => {
-      const page = await browser.newPage({ viewport });
-      await signInAs(page, 'dara@example.org');
+      const page = await chrome.signedIn('dara@example.org', viewport);
       expect((await page.request.get(`${BASE}/api/rigs/${rigId}/sheet.pdf`)).status()).toBe(404);
       await page.goto(`${BASE}/rigs/${rigId}`);
       await page.getByTestId('rig-not-shared').waitFor();
       expect(await page.getByText("This rig doesn't exist or isn't shared with you").count()).toBe(1);
       expect(await page.getByTestId('tab-Loads').count()).toBe(0);
-      await page.screenshot({ path: path.join(SHOTS, `rig-not-shared-${size}.png`), fullPage: true });
+      await shot(page, `rig-not-shared-${size}`);
       await page.getByTestId('go-home').click();
       await page.getByTestId('home-screen').waitFor();
       await page.close();
@@ -119,14 +111,13 @@ for (const [size, viewport] of [['phone', PHONE], ['wide', WIDE]] as const) {
 
 describe('an admin', () => {
   it('gets Accounts on the home screen instead of New rig, and changes a role there', async () => {
-    const page = await browser.newPage({ viewport: WIDE });
-    await signInAs(page, 'admin@example.org');
+    const page = await chrome.signedIn('admin@example.org', WIDE);
     await page.getByTestId('accounts-screen').waitFor();
     expect(await page.getByTestId('new-rig').count()).toBe(0);
     await page.getByTestId('accounts-search').fill('dara');
     await page.getByTestId('role-dara@example.org-advisor').click();
     await page.getByTestId('role-dara@example.org-advisor').and(page.locator('[aria-checked="true"]')).waitFor();
-    await page.screenshot({ path: path.join(SHOTS, 'accounts-wide.png'), fullPage: true });
+    await shot(page, 'accounts-wide');
     await page.getByTestId('role-dara@example.org-traveller').click();
     await page.getByTestId('role-dara@example.org-traveller').and(page.locator('[aria-checked="true"]')).waitFor();
     await page.close();

@@ -1,21 +1,12 @@
-import path from 'node:path';
-import type { Browser } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 
-import { launchChromium, PHONE, SHOTS, signInAs, WIDE } from './browser';
+import { PHONE, shot, WIDE, withBrowser } from './browser';
 
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launchChromium();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const chrome = withBrowser();
 
 describe('the Hook-up tab', () => {
   it('draws Wren\'s inverter circuit with every part rated, readable on a phone', async () => {
-    const page = await browser.newPage({ viewport: PHONE });
-    await signInAs(page, 'tobi@example.org');
+    const page = await chrome.signedIn('tobi@example.org', PHONE);
     await page.getByTestId('open-Wren').click();
     await page.getByTestId('tab-Hook-up').click();
     await page.getByTestId('hookup-now-drawing').waitFor();
@@ -36,16 +27,15 @@ describe('the Hook-up tab', () => {
     await page.getByTestId('hookup-fix-ignition-relay').click();
     await page.getByTestId('hookup-fix-drawing').waitFor();
     expect(await page.locator('[data-testid="hookup-fix-drawing"] [data-testid="hookup-part-relay"]').textContent()).toMatch(/40 A contacts/);
-    await page.screenshot({ path: path.join(SHOTS, 'hookup-phone.png'), fullPage: true });
+    await shot(page, 'hookup-phone');
     // The screen scrolls inside the app's frame: each drawing is also taken whole.
-    await page.getByTestId('hookup-now').screenshot({ path: path.join(SHOTS, 'hookup-phone-now.png') });
-    await page.getByTestId('hookup-fix-drawing').screenshot({ path: path.join(SHOTS, 'hookup-phone-fix-drawing.png') });
+    await shot(page.getByTestId('hookup-now'), 'hookup-phone-now');
+    await shot(page.getByTestId('hookup-fix-drawing'), 'hookup-phone-fix-drawing');
     await page.close();
   });
 
   it('puts now and the Fix side by side, previews it, applies it and undoes it from History (owner, wide)', async () => {
-    const page = await browser.newPage({ viewport: WIDE });
-    await signInAs(page, 'ines@example.org');
+    const page = await chrome.signedIn('ines@example.org', WIDE);
     await page.getByTestId('open-Wren').click();
     await page.getByTestId('fix-hookup-ignition-relay').click();
     await page.getByTestId('hookup-fix-drawing').waitFor();
@@ -54,8 +44,8 @@ describe('the Hook-up tab', () => {
     expect(fix!.x).toBeGreaterThan(now!.x + now!.width - 1);
     await page.getByTestId('fix-preview').click();
     await page.getByTestId('fix-preview-result').waitFor();
-    await page.screenshot({ path: path.join(SHOTS, 'hookup-wide.png'), fullPage: true });
-    await page.getByTestId('hookup-fix').screenshot({ path: path.join(SHOTS, 'hookup-wide-fix.png') });
+    await shot(page, 'hookup-wide');
+    await shot(page.getByTestId('hookup-fix'), 'hookup-wide-fix');
     await page.getByTestId('fix-apply').click();
     await page.getByTestId('fix-applied').waitFor();
     await expect.poll(() => page.getByTestId('hookup-now').locator('[role="heading"]').first().textContent()).toMatch(/ignition-keyed relay/);

@@ -1,24 +1,15 @@
-import path from 'node:path';
-import type { Browser } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 
-import { launchChromium, PHONE, SHOTS, signInAs, WIDE } from './browser';
+import { PHONE, shot, WIDE, withBrowser } from './browser';
 
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launchChromium();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const chrome = withBrowser();
 
 describe('notes between an advisor and a household', () => {
   it('the advisor writes on the fridge from Clients; the owner sees it unread, replies and resolves; at phone and wide sizes', async () => {
     const text = `Duty cycle looks high for a 40 L fridge (${Date.now()}).`;
 
     // The advisor on a phone: Clients lists Wren; opening it goes to its Notes.
-    const advisor = await browser.newPage({ viewport: PHONE });
-    await signInAs(advisor, 'marguerite@example.org');
+    const advisor = await chrome.signedIn('marguerite@example.org', PHONE);
     await advisor.getByRole('link', { name: 'Clients' }).click();
     await advisor.getByTestId('clients-screen').waitFor();
     await advisor.getByTestId('client-Wren').click();
@@ -34,11 +25,10 @@ describe('notes between an advisor and a household', () => {
     const thread = advisor.locator('[data-testid^="thread-"]', { hasText: text });
     await thread.waitFor();
     expect(await thread.innerText()).toContain('About Compressor fridge (40 L)');
-    await advisor.screenshot({ path: path.join(SHOTS, 'notes-advisor-phone.png'), fullPage: true });
+    await shot(advisor, 'notes-advisor-phone');
 
     // The owner on a wide screen: the Notes tab counts it, she replies and resolves the thread.
-    const owner = await browser.newPage({ viewport: WIDE });
-    await signInAs(owner, 'ines@example.org');
+    const owner = await chrome.signedIn('ines@example.org', WIDE);
     await owner.getByTestId('open-Wren').click();
     await owner.getByTestId('outlook-screen').waitFor();
     const tab = owner.getByTestId('tab-Notes');
@@ -54,11 +44,10 @@ describe('notes between an advisor and a household', () => {
     await owner.getByTestId(`resolve-${threadId}`).click();
     await owner.getByTestId('toggle-resolved').waitFor();
     await expect.poll(() => tab.innerText()).toBe('Notes');
-    await owner.screenshot({ path: path.join(SHOTS, 'notes-owner-wide.png'), fullPage: true });
+    await shot(owner, 'notes-owner-wide');
 
     // The advisor on a wide screen: Clients shows the unread reply; the rig opens with Notes beside it.
-    const advisorWide = await browser.newPage({ viewport: WIDE });
-    await signInAs(advisorWide, 'marguerite@example.org');
+    const advisorWide = await chrome.signedIn('marguerite@example.org', WIDE);
     await advisorWide.getByRole('link', { name: 'Clients' }).click();
     await advisorWide.getByTestId('unread-Wren').waitFor();
     await advisorWide.getByTestId('client-Wren').click();
@@ -68,16 +57,15 @@ describe('notes between an advisor and a household', () => {
     const resolved = advisorWide.locator('[data-testid^="thread-"]', { hasText: text });
     await resolved.getByText('Turned the thermostat down a notch.').waitFor();
     expect(await resolved.innerText()).toContain('resolved');
-    await advisorWide.screenshot({ path: path.join(SHOTS, 'clients-advisor-wide.png'), fullPage: true });
+    await shot(advisorWide, 'clients-advisor-wide');
 
     // The owner on a phone sees the same thread, resolved.
-    const ownerPhone = await browser.newPage({ viewport: PHONE });
-    await signInAs(ownerPhone, 'ines@example.org');
+    const ownerPhone = await chrome.signedIn('ines@example.org', PHONE);
     await ownerPhone.getByTestId('open-Wren').click();
     await ownerPhone.getByTestId('tab-Notes').click();
     expect((await ownerPhone.getByTestId('toggle-resolved').boundingBox())!.height).toBeGreaterThanOrEqual(44);
     await ownerPhone.getByTestId('toggle-resolved').click();
     await ownerPhone.locator('[data-testid^="thread-"]', { hasText: text }).waitFor();
-    await ownerPhone.screenshot({ path: path.join(SHOTS, 'notes-owner-phone.png'), fullPage: true });
+    await shot(ownerPhone, 'notes-owner-phone');
   }, 120_000);
 });

@@ -1,25 +1,12 @@
-import path from 'node:path';
-import type { Browser, BrowserContext, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { BrowserContext } from 'playwright-core';
+import { describe, expect, it } from 'vitest';
 
 import { OFFLINE_WRITE } from '@/lib/api-client';
-import { launchChromium, PHONE, SHOTS, signInAs } from './browser';
+import { fill, PHONE, shot, signInAs, withBrowser } from './browser';
 
 // With the signal gone: the last Outlook still reads (from the service worker's cache, marked as such),
 // Try a load works on the device, and a save says at once that it was not saved and keeps the form.
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launchChromium();
-});
-afterAll(async () => {
-  await browser?.close();
-});
-
-async function fill(page: Page, testId: string, value: string) {
-  const input = page.getByTestId(testId);
-  await input.fill(value);
-  await input.blur();
-}
+const chrome = withBrowser();
 
 /** Opens Wren's Outlook online and waits until the service worker controls the page and has kept its answers. */
 async function visitOutlookOnline(context: BrowserContext) {
@@ -38,7 +25,7 @@ async function visitOutlookOnline(context: BrowserContext) {
 
 describe('offline', () => {
   it('reloads the last Outlook offline with its figures and says from when they are', async () => {
-    const context = await browser.newContext({ viewport: PHONE });
+    const context = await chrome.browser.newContext({ viewport: PHONE });
     const page = await visitOutlookOnline(context);
     const online = await page.getByTestId('figure-days-parked').textContent();
     expect(await page.getByTestId('offline-notice').count()).toBe(0);
@@ -51,7 +38,7 @@ describe('offline', () => {
     expect(await page.getByTestId('figure-days-parked').textContent()).toBe(online);
     await page.getByTestId('drains').waitFor();
     await page.getByTestId('fixes').waitFor();
-    await page.screenshot({ path: path.join(SHOTS, 'outlook-offline-phone.png'), fullPage: true });
+    await shot(page, 'outlook-offline-phone');
 
     await context.setOffline(false);
     await page.reload();
@@ -61,7 +48,7 @@ describe('offline', () => {
   });
 
   it('tries a load on the device offline, and a save offline says so at once and keeps what was typed', async () => {
-    const context = await browser.newContext({ viewport: PHONE });
+    const context = await chrome.browser.newContext({ viewport: PHONE });
     const page = await visitOutlookOnline(context);
     // The rig itself is read once online (the Loads tab), so this device has it.
     await page.getByTestId('tab-Loads').click();
@@ -78,7 +65,7 @@ describe('offline', () => {
     await page.getByTestId('try-result').waitFor();
     await page.getByTestId('try-on-device').waitFor();
     expect(await page.getByTestId('try-result').textContent()).toMatch(/With Kettle/);
-    await page.screenshot({ path: path.join(SHOTS, 'try-offline-phone.png'), fullPage: true });
+    await shot(page, 'try-offline-phone');
 
     await page.getByTestId('tab-Loads').click();
     await page.getByTestId('add-load').click();
@@ -91,12 +78,12 @@ describe('offline', () => {
     expect(Date.now() - t0).toBeLessThan(5000);
     expect(await page.getByTestId('field-name').inputValue()).toBe('Reading lamp');
     expect(await page.getByTestId('field-watts').inputValue()).toBe('4');
-    await page.screenshot({ path: path.join(SHOTS, 'save-offline-phone.png'), fullPage: true });
+    await shot(page, 'save-offline-phone');
     await context.close();
   });
 
   it('forgets the saved answers when the traveller signs out', async () => {
-    const context = await browser.newContext({ viewport: PHONE });
+    const context = await chrome.browser.newContext({ viewport: PHONE });
     const page = await visitOutlookOnline(context);
     await page.getByTestId('sign-out').first().click();
     await page.getByTestId('sign-in-screen').waitFor();

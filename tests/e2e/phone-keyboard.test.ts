@@ -1,19 +1,12 @@
-import path from 'node:path';
-import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { describe, expect, it } from 'vitest';
 
-import { BASE, launchChromium, PHONE, SHOTS, signInAs, WIDE } from './browser';
+import { BASE, expectChartDrawn, PHONE, shot, WIDE, withBrowser } from './browser';
 
 // Every screen right on a phone and from a keyboard, at 390 and 1280 px: forms, the Loads cards, who may
 // change a load, units in Fix texts, and a rig made with the keyboard alone.
 
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launchChromium();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const chrome = withBrowser();
 
 const SIZES = [
   ['phone', PHONE],
@@ -34,8 +27,7 @@ async function api(page: Page, method: 'get' | 'post' | 'patch', url: string, da
 
 describe.each(SIZES)('at %s size', (size, viewport) => {
   it('New rig with an empty name and a bad figure: every error at once, the name field focused and in view, a summary by the button', async () => {
-    const page = await browser.newPage({ viewport });
-    await signInAs(page, 'ines@example.org');
+    const page = await chrome.signedIn('ines@example.org', viewport);
     await page.getByTestId('new-rig').click();
     await page.getByTestId('new-rig-screen').waitFor();
     await page.getByTestId('field-power.battery.capacityAh').fill('0');
@@ -49,13 +41,12 @@ describe.each(SIZES)('at %s size', (size, viewport) => {
     // Neutral placeholders: the name field shows no example that looks filled in; its limit is shown.
     expect(await page.getByTestId('field-name').getAttribute('placeholder')).toBeNull();
     await page.getByText('0 of 60').waitFor();
-    await page.screenshot({ path: path.join(SHOTS, `new-rig-errors-${size}.png`), fullPage: true });
+    await shot(page, `new-rig-errors-${size}`);
     await page.close();
   });
 
   it('shows Loads as cards on a phone and as a table on a wide screen, with 44 px actions', async () => {
-    const page = await browser.newPage({ viewport });
-    await signInAs(page, 'ines@example.org');
+    const page = await chrome.signedIn('ines@example.org', viewport);
     await page.getByTestId('open-Wren').click();
     await page.getByTestId('tab-Loads').click();
     const fridge = page.getByTestId('load-Compressor fridge (40 L)');
@@ -75,13 +66,12 @@ describe.each(SIZES)('at %s size', (size, viewport) => {
       const box = (await page.getByTestId(id).boundingBox())!;
       expect(box.height).toBeGreaterThanOrEqual(44);
     }
-    await page.screenshot({ path: path.join(SHOTS, `loads-cards-${size}.png`), fullPage: true });
+    await shot(page, `loads-cards-${size}`);
     await page.close();
   });
 
   it("refuses a member's edit of a load someone else added, and shows a member the Power inputs read-only", async () => {
-    const page = await browser.newPage({ viewport });
-    await signInAs(page, 'tobi@example.org');
+    const page = await chrome.signedIn('tobi@example.org', viewport);
     await page.getByTestId('open-Wren').click();
     await page.getByTestId('tab-Loads').click();
     await page.getByTestId('load-Laptop').waitFor();
@@ -117,19 +107,17 @@ describe.each(SIZES)('at %s size', (size, viewport) => {
     const start = page.getByTestId('field-charging.drivingStartHour');
     expect(await start.inputValue()).toBe('11:00');
     expect((await start.boundingBox())!.height).toBeLessThan(60);
-    await page.screenshot({ path: path.join(SHOTS, `power-member-read-only-${size}.png`) });
+    await shot(page, `power-member-read-only-${size}`, { fullPage: false });
     await page.close();
   });
 
   it('gives the Outlook chart its reading in words, tied to the chart', async () => {
-    const page = await browser.newPage({ viewport });
-    await signInAs(page, 'ines@example.org');
+    const page = await chrome.signedIn('ines@example.org', viewport);
     // Text links are 44 px targets too (by padding or minHeight, the font unchanged).
     expect((await page.getByTestId('open-Wren').boundingBox())!.height).toBeGreaterThanOrEqual(44);
     await page.getByTestId('open-Wren').click();
     const chart = page.getByTestId('soc-chart');
-    await chart.locator('canvas').waitFor();
-    await page.waitForTimeout(800);
+    await expectChartDrawn(chart);
     // Wren reaches its cut-off within the horizon (PRODUCT.md's demo: a 300 W inverter left on).
     const words = (await page.getByTestId('soc-chart-words').textContent())!;
     expect(words).toMatch(/On your routine the charge reaches the cut-off \(\d+ %\) on (Mon|Tues|Wednes|Thurs|Fri|Satur|Sun)day about \d\d:00\./);
@@ -140,13 +128,12 @@ describe.each(SIZES)('at %s size', (size, viewport) => {
       expect((await link.boundingBox())!.height).toBeGreaterThanOrEqual(44);
     }
     await chart.scrollIntoViewIfNeeded();
-    await chart.screenshot({ path: path.join(SHOTS, `outlook-chart-${size}.png`) });
+    await shot(chart, `outlook-chart-${size}`);
     await page.close();
   });
 
   it('writes Fix and warning figures in the chosen energy unit, and names the rig’s own voltage in Try a load', async () => {
-    const page = await browser.newPage({ viewport });
-    await signInAs(page, 'ines@example.org');
+    const page = await chrome.signedIn('ines@example.org', viewport);
     // A 24 V rig with a small battery for a long stay: the "More battery" Fix states amp-hours.
     const made = await api(page, 'post', '/api/rigs', {
       name: `Units ${size}`,
@@ -177,7 +164,7 @@ describe.each(SIZES)('at %s size', (size, viewport) => {
     const text = (await fix.textContent())!;
     expect(text).toMatch(/\d Wh/);
     expect(text).not.toMatch(/\d\s?Ah\b/);
-    await page.screenshot({ path: path.join(SHOTS, `outlook-fixes-wh-${size}.png`), fullPage: true });
+    await shot(page, `outlook-fixes-wh-${size}`);
 
     await page.getByTestId('tab-Try a load').click();
     await page.getByText('DC (24 V direct)').waitFor();
@@ -187,8 +174,7 @@ describe.each(SIZES)('at %s size', (size, viewport) => {
   });
 
   it('creates a rig with the keyboard alone: Tab, typing, arrow keys on the chips, Space on a switch, one Enter that submits once', async () => {
-    const page = await browser.newPage({ viewport });
-    await signInAs(page, 'ines@example.org');
+    const page = await chrome.signedIn('ines@example.org', viewport);
     let posts = 0;
     page.on('request', (r) => {
       if (r.method() === 'POST' && new URL(r.url()).pathname === '/api/rigs') posts++;
@@ -226,7 +212,7 @@ describe.each(SIZES)('at %s size', (size, viewport) => {
     const rig = (await api(page, 'get', `/api/rigs/${made[0].id}`)).body;
     expect(rig.power.battery.chemistry).toBe('gel');
     expect(rig.power.inverter).toBeNull();
-    await page.screenshot({ path: path.join(SHOTS, `keyboard-rig-outlook-${size}.png`), fullPage: true });
+    await shot(page, `keyboard-rig-outlook-${size}`);
     await page.close();
   });
 });

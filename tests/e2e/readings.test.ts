@@ -1,17 +1,10 @@
-import path from 'node:path';
-import type { Browser } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 
+import { colors } from '@/shared/theme';
 import { restingLog } from '../shared/energy/fixtures';
-import { launchChromium, SHOTS, signInAs, WIDE, PHONE } from './browser';
+import { expectChartDrawn, PHONE, shot, signInAs, WIDE, withBrowser } from './browser';
 
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launchChromium();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const chrome = withBrowser();
 
 // A generated resting log (not a real one): Wren's 100 Ah AGM battery from 12.65 V to 12.45 V over 50 hours.
 // BCI table (REFERENCES.md): 100 % to 75 %, 25 Ah in 50 h = 0.5 A.
@@ -20,7 +13,7 @@ const CSV = ['time,battery volts,temp', ...restingLog(50).map((r) => `${r.at.rep
 describe('the Readings screen', () => {
   it('Tobi uploads a CSV log through the page, maps its columns, sees it plotted with its dates and the rough drain, deletes it, then types a reading with current flowing', async () => {
     // Tobi's browser is in Berlin: the log's times (no zone) are read there, and the chart's dates shown there.
-    const page = await browser.newPage({ viewport: WIDE, locale: 'en-GB', timezoneId: 'Europe/Berlin' });
+    const page = await chrome.page(WIDE, { locale: 'en-GB', timezoneId: 'Europe/Berlin' });
     await signInAs(page, 'tobi@example.org');
     await page.getByTestId('open-Wren').click();
     await page.getByTestId('tab-Readings').click();
@@ -37,10 +30,9 @@ describe('the Readings screen', () => {
     await result.waitFor();
     expect(await result.innerText()).toMatch(/51 rows stored, 1 refused:[\s\S]*line 53: time "broken row" is not a date and time; no voltage/);
 
-    await page.getByTestId('readings-chart-voltage').locator('canvas').waitFor();
-    await page.getByTestId('readings-chart-soc').locator('canvas').waitFor();
-    await page.waitForTimeout(1000);
-    expect((await page.getByTestId('readings-chart').screenshot()).length).toBeGreaterThan(4000);
+    // Both charts drawn: the voltage in the focus blue, the charge in the night colour, each across its width.
+    await expectChartDrawn(page.getByTestId('readings-chart-voltage'), colors.focus);
+    await expectChartDrawn(page.getByTestId('readings-chart-soc'));
     // Real dates under the chart: 18:00 on 20 November to 20:00 on 22 November, Berlin time, all 51 rows plotted.
     expect(await page.getByTestId('chart-range').innerText()).toMatch(/^20 Nov 2026, 18:00 to 22 Nov 2026, 20:00 \(Europe\/Berlin\): 51 readings\.$/);
     // BCI table: 100 % to 75 % in 50 h, a rough estimate with its range (no current was logged), on Wren's usable
@@ -49,16 +41,15 @@ describe('the Readings screen', () => {
     expect(await page.getByTestId('measured-drain').innerText()).toMatch(/^about 0\.4[89] A$/);
     expect(await page.getByTestId('drain-method').innerText()).toMatch(/rough estimate.*from 0.32 to 0.65 A/);
     expect(await page.getByTestId('model-message').innerText()).toMatch(/rough estimate \(0.32 to 0.65 A\)/);
-    await page.screenshot({ path: path.join(SHOTS, 'readings-wide.png'), fullPage: true });
+    await shot(page, 'readings-wide');
 
-    const phone = await browser.newPage({ viewport: PHONE });
-    await signInAs(phone, 'marguerite@example.org');
+    const phone = await chrome.signedIn('marguerite@example.org', PHONE);
     await phone.goto(page.url());
     await phone.getByTestId('readings-screen').waitFor();
     await phone.getByTestId('upload-wren-resting.csv').waitFor();
     expect(await phone.getByTestId('pick-log').count()).toBe(0);
     expect(await phone.getByTestId('delete-log-wren-resting.csv').count()).toBe(0);
-    await phone.screenshot({ path: path.join(SHOTS, 'readings-advisor-phone.png'), fullPage: true });
+    await shot(phone, 'readings-advisor-phone');
 
     // Tobi added the log, so Tobi may delete it (a second press confirms); its rows go with it.
     await page.getByTestId('delete-log-wren-resting.csv').click();

@@ -1,24 +1,20 @@
-import path from 'node:path';
 import { pino } from 'pino';
-import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 
 import { loadConfig } from '@/server/config';
 import { type AppContext, createContext } from '@/server/context';
 import { enqueueDueReports } from '@/server/jobs/reports';
-import { launchChromium, PHONE, SHOTS, signInAs, WIDE } from './browser';
+import { PHONE, shot, WIDE, withBrowser } from './browser';
 
-let browser: Browser;
+const chrome = withBrowser();
 let ctx: AppContext;
 beforeAll(async () => {
-  browser = await launchChromium();
   // The schedule's tick, run from here at a time the test picks; the server's own workers send the e-mail.
   const config = loadConfig({ ...process.env, RUN_WORKERS: 'false', LOG_LEVEL: 'silent' });
   ctx = createContext(process.env, { config, logger: pino({ level: 'silent' }) });
   await ctx.jobs.start();
 });
 afterAll(async () => {
-  await browser?.close();
   await ctx?.jobs.stop();
   await ctx?.db.destroy();
 });
@@ -29,8 +25,7 @@ describe('weekly report settings and the Reports screen', () => {
   it('Tobi chooses his report hour in Settings; the report arrives and shows on Reports as sent', async () => {
     const now = new Date();
     const weekday = (now.getUTCDay() + 6) % 7;
-    const page = await browser.newPage({ viewport: PHONE });
-    await signInAs(page, 'tobi@example.org');
+    const page = await chrome.signedIn('tobi@example.org', PHONE);
     await page.getByRole('link', { name: 'Settings' }).click();
     await page.getByTestId('email-prefs').waitFor();
     await page.getByRole('radio', { name: WEEKDAY[weekday] }).click();
@@ -40,12 +35,11 @@ describe('weekly report settings and the Reports screen', () => {
     await page.getByTestId('field-timeZone').selectOption('UTC');
     await page.getByTestId('save-email-prefs').click();
     await page.getByText('Saved.').waitFor();
-    await page.screenshot({ path: path.join(SHOTS, 'settings-email-phone.png'), fullPage: true });
+    await shot(page, 'settings-email-phone');
 
     expect(await enqueueDueReports(ctx, ctx.jobs, now)).toBeGreaterThanOrEqual(1);
 
-    const wide = await browser.newPage({ viewport: WIDE });
-    await signInAs(wide, 'tobi@example.org');
+    const wide = await chrome.signedIn('tobi@example.org', WIDE);
     await wide.getByTestId('open-Wren').click();
     await wide.getByTestId('tab-Reports').click();
     const row = wide.locator('[data-testid^="email-"]', { hasText: 'Weekly report to Tobi' }).first();
@@ -61,6 +55,6 @@ describe('weekly report settings and the Reports screen', () => {
     // The chart image loads from the server (a PNG drawn there), not a broken picture.
     const loaded = await frame.locator('img[alt^="State of charge"]').evaluate((img: HTMLImageElement) => img.complete && img.naturalWidth > 500);
     expect(loaded).toBe(true);
-    await wide.screenshot({ path: path.join(SHOTS, 'reports-wide.png'), fullPage: true });
+    await shot(wide, 'reports-wide');
   }, 90_000);
 });

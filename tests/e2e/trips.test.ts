@@ -1,22 +1,9 @@
-import path from 'node:path';
-import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { describe, expect, it } from 'vitest';
 
-import { BASE, launchChromium, PHONE, SHOTS, signInAs, WIDE } from './browser';
+import { BASE, expectChartDrawn, fill, PHONE, shot, WIDE, withBrowser } from './browser';
 
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launchChromium();
-});
-afterAll(async () => {
-  await browser?.close();
-});
-
-async function fill(page: Page, testId: string, value: string) {
-  const input = page.getByTestId(testId);
-  await input.fill(value);
-  await input.blur();
-}
+const chrome = withBrowser();
 
 type StayAnswer = { name: string; socOnArrivalPercent: number; socOnLeavingPercent: number; marginState: string };
 type TripAnswer = { stays: StayAnswer[]; series: { socPercent: number; stay: number }[]; cutoffSocPercent: number };
@@ -26,11 +13,9 @@ async function expectTripChart(page: Page, answer: TripAnswer) {
   const chart = page.getByTestId('trip-chart');
   await chart.waitFor();
   const before = (await page.getByTestId('trip-stays').boundingBox())!;
-  await chart.locator('canvas').waitFor();
-  await page.waitForTimeout(800);
+  await expectChartDrawn(chart);
   expect((await chart.boundingBox())!.height).toBe(220);
   expect((await page.getByTestId('trip-stays').boundingBox())!.y).toBe(before.y);
-  expect((await chart.screenshot()).length).toBeGreaterThan(4000);
   // The words name the lowest charge of the model's series and the stay it falls in (or where it meets the cut-off).
   const words = (await page.getByTestId('trip-chart-words').textContent())!;
   const lowest = answer.series.reduce((m, p) => (p.socPercent < m.socPercent ? p : m));
@@ -46,8 +31,7 @@ async function expectTripChart(page: Page, answer: TripAnswer) {
 
 describe('trips', () => {
   it('plans a trip of two stays and a drive on a phone and reads the margin at each stay', async () => {
-    const page = await browser.newPage({ viewport: PHONE });
-    await signInAs(page, 'tobi@example.org');
+    const page = await chrome.signedIn('tobi@example.org', PHONE);
     await page.getByTestId('open-Wren').click();
     await page.getByTestId('tab-Trips').click();
     await page.getByTestId('trips-screen').waitFor();
@@ -88,22 +72,21 @@ describe('trips', () => {
     expect(answer.stays[1].socOnLeavingPercent).toBe(100);
     expect(await page.getByTestId('stay-margin-Lake').textContent()).toMatch(/Days to cut-off here|Arrives below the cut-off/);
     await expectTripChart(page, answer);
-    await page.screenshot({ path: path.join(SHOTS, 'trips-phone.png'), fullPage: true });
+    await shot(page, 'trips-phone');
 
     // The same chart on a wide screen, beside nothing wider than its column.
-    const wide = await browser.newPage({ viewport: WIDE });
-    await signInAs(wide, 'tobi@example.org');
+    const wide = await chrome.signedIn('tobi@example.org', WIDE);
     await wide.goto(`${BASE}/rigs/${rigId}/trips`);
     await wide.getByTestId('trip-outlook').waitFor();
     await expectTripChart(wide, answer);
-    await wide.screenshot({ path: path.join(SHOTS, 'trips-wide.png'), fullPage: true });
+    await shot(wide, 'trips-wide');
     await wide.close();
 
     // The Outlook follows the active trip.
     await page.getByTestId('tab-Outlook').click();
     await page.getByTestId('outlook-trip').waitFor();
     await page.getByTestId('outlook-trip').getByTestId('stay-Lake').waitFor();
-    await page.screenshot({ path: path.join(SHOTS, 'outlook-trip-phone.png'), fullPage: true });
+    await shot(page, 'outlook-trip-phone');
 
     // Put Wren back as it was for the other browser tests.
     await page.getByTestId('tab-Trips').click();

@@ -1,22 +1,9 @@
-import path from 'node:path';
-import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { describe, expect, it } from 'vitest';
 
-import { BASE, launchChromium, mailLink, PHONE, SHOTS, signInAs, WIDE } from './browser';
+import { BASE, expectChartDrawn, fill, mailLink, PHONE, shot, signInAs, WIDE, withBrowser } from './browser';
 
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launchChromium();
-});
-afterAll(async () => {
-  await browser?.close();
-});
-
-async function fill(page: Page, testId: string, value: string) {
-  const input = page.getByTestId(testId);
-  await input.fill(value);
-  await input.blur();
-}
+const chrome = withBrowser();
 
 /** The energy unit on the signed-in account, as Settings saves it (the e-mails and every device follow it). */
 async function setEnergyOnAccount(page: Page, energy: 'Ah' | 'Wh') {
@@ -24,18 +11,9 @@ async function setEnergyOnAccount(page: Page, energy: 'Ah' | 'Wh') {
   expect(res.status()).toBe(200);
 }
 
-/** The chart is drawn: a canvas is there and its picture is not one flat colour (a flat PNG compresses to a few hundred bytes). */
-async function expectChartDrawn(page: Page) {
-  const chart = page.getByTestId('soc-chart');
-  await chart.locator('canvas').waitFor();
-  await page.waitForTimeout(1000);
-  const png = await chart.screenshot();
-  expect(png.length).toBeGreaterThan(4000);
-}
-
 describe('the rig workspace', () => {
   it('a new traveller sets up a rig, sees the Outlook with its chart, tries a load, adopts it and sees it counted', async () => {
-    const page = await browser.newPage({ viewport: WIDE });
+    const page = await chrome.page(WIDE);
     const email = `kestrel-${Date.now()}@example.org`;
     await page.goto(BASE + '/sign-up');
     await page.getByTestId('field-name').fill('Rook Traveller');
@@ -56,7 +34,7 @@ describe('the rig workspace', () => {
     await page.getByTestId('device-fridge-compressor-40l').click();
     await page.getByTestId('create-rig').click();
     await page.getByTestId('outlook-screen').waitFor();
-    await expectChartDrawn(page);
+    await expectChartDrawn(page.getByTestId('soc-chart'));
 
     // A fridge, so there is something to drain.
     await page.getByTestId('tab-Loads').click();
@@ -82,7 +60,7 @@ describe('the rig workspace', () => {
     const withDays = await days('with-days-parked');
     const nowText = await page.getByTestId('try-result').textContent();
     expect(nowText).toMatch(/Days parked -\d/);
-    await page.screenshot({ path: path.join(SHOTS, 'try-a-load-wide.png'), fullPage: true });
+    await shot(page, 'try-a-load-wide');
     await page.getByTestId('adopt').click();
     await page.getByText('Adopted: it is now in Loads and in the Outlook.').waitFor();
 
@@ -91,7 +69,7 @@ describe('the rig workspace', () => {
     expect(parseFloat((await page.getByTestId('figure-days-parked').textContent())!)).toBeCloseTo(withDays, 0);
     // The fridge picked from the catalogue in New rig is there too.
     await page.getByTestId('drains').getByText('Compressor fridge').waitFor();
-    await page.screenshot({ path: path.join(SHOTS, 'outlook-new-rig-wide.png'), fullPage: true });
+    await shot(page, 'outlook-new-rig-wide');
 
     // Deleting asks first, then the rig is gone.
     await page.getByTestId('tab-Power').click();
@@ -102,18 +80,17 @@ describe('the rig workspace', () => {
   });
 
   it("shows a member's own loads under their filter, on the same rig", async () => {
-    const page = await browser.newPage({ viewport: PHONE });
-    await signInAs(page, 'tobi@example.org');
+    const page = await chrome.signedIn('tobi@example.org', PHONE);
     await page.getByTestId('open-Wren').click();
     await page.getByTestId('outlook-screen').waitFor();
-    await expectChartDrawn(page);
-    await page.screenshot({ path: path.join(SHOTS, 'outlook-phone.png'), fullPage: true });
+    await expectChartDrawn(page.getByTestId('soc-chart'));
+    await shot(page, 'outlook-phone');
     await page.getByTestId('tab-Loads').click();
     await page.getByTestId('filter-Tobi Halloran-Okafor').click();
     await page.getByTestId('load-Laptop').waitFor();
     expect(await page.getByTestId('load-Roof fan').count()).toBe(0);
     expect(await page.getByTestId('add-load').count()).toBe(1);
-    await page.screenshot({ path: path.join(SHOTS, 'loads-phone.png'), fullPage: true });
+    await shot(page, 'loads-phone');
     // Units by the setting: watt-hours instead of amp-hours.
     expect(await page.getByTestId('load-Laptop').textContent()).toMatch(/Ah/);
     await page.goto(BASE + '/settings');
@@ -125,14 +102,14 @@ describe('the rig workspace', () => {
     expect(await page.getByTestId('load-Laptop').textContent()).toMatch(/Wh/);
     await page.getByTestId('tab-Try a load').click();
     await page.getByTestId('try-screen').waitFor();
-    await page.screenshot({ path: path.join(SHOTS, 'try-a-load-phone.png'), fullPage: true });
+    await shot(page, 'try-a-load-phone');
     // The choice went to Tobi's account too: back to amp-hours for the tests that sign in as him later.
     await setEnergyOnAccount(page, 'Ah');
     await page.close();
   });
 
   it('keeps the energy unit on the account: signed out, then in again on a fresh device, it is still Wh', async () => {
-    const first = await browser.newPage({ viewport: PHONE });
+    const first = await chrome.page(PHONE);
     await signInAs(first, 'tobi@example.org');
     await first.goto(BASE + '/settings');
     const saved = first.waitForResponse((r) => r.url().endsWith('/api/me/units') && r.request().method() === 'PUT');
@@ -143,7 +120,7 @@ describe('the rig workspace', () => {
     await first.close();
 
     // A new browser context: nothing on this device, so the Wh can only come from the account.
-    const page = await browser.newPage({ viewport: PHONE });
+    const page = await chrome.page(PHONE);
     await signInAs(page, 'tobi@example.org');
     await page.goto(BASE + '/settings');
     await page.locator('[data-testid="unit-energy-Wh"][aria-checked="true"]').waitFor();
@@ -157,19 +134,18 @@ describe('the rig workspace', () => {
   });
 
   it('lets the advisor read everything of Wren with no edit controls', async () => {
-    const page = await browser.newPage({ viewport: WIDE });
-    await signInAs(page, 'marguerite@example.org');
+    const page = await chrome.signedIn('marguerite@example.org', WIDE);
     await page.getByTestId('open-Wren').click();
     await page.getByTestId('fixes').waitFor();
     expect(await page.getByTestId('week-balance').textContent()).toMatch(/The repeating week: .* used, .* put back/);
     // Wren's laptop runs parked: the ignition relay says it stops it, and how much a day.
     expect(await page.getByTestId('fix-stops-ignition-relay').textContent()).toMatch(/Stops Laptop whenever parked: .* a day not served/);
-    await page.screenshot({ path: path.join(SHOTS, 'outlook-wide.png'), fullPage: true });
+    await shot(page, 'outlook-wide');
     await page.getByTestId('tab-Loads').click();
     await page.getByTestId('load-Roof fan').waitFor();
     expect(await page.getByTestId('add-load').count()).toBe(0);
     expect(await page.getByTestId('delete-Roof fan').count()).toBe(0);
-    await page.screenshot({ path: path.join(SHOTS, 'loads-wide.png'), fullPage: true });
+    await shot(page, 'loads-wide');
     await page.getByTestId('tab-Power').click();
     await page.getByTestId('power-screen').waitFor();
     expect(await page.getByTestId('power-save').count()).toBe(0);
@@ -177,8 +153,7 @@ describe('the rig workspace', () => {
   });
 
   it('shows a clear message beside a bad load field and saves nothing', async () => {
-    const page = await browser.newPage({ viewport: PHONE });
-    await signInAs(page, 'ines@example.org');
+    const page = await chrome.signedIn('ines@example.org', PHONE);
     await page.getByTestId('open-Stoat').click();
     await page.getByTestId('tab-Loads').click();
     await page.getByTestId('add-load').click();
@@ -195,8 +170,7 @@ describe('the rig workspace', () => {
 
 describe('cable runs on a rig', () => {
   it('adds a run on Wren, flags the fitted wire as too small, and shows the size by the units setting, with the cautions', async () => {
-    const page = await browser.newPage({ viewport: WIDE });
-    await signInAs(page, 'ines@example.org');
+    const page = await chrome.signedIn('ines@example.org', WIDE);
     await page.getByTestId('open-Wren').click();
     await page.getByTestId('tab-Cable runs').click();
     await page.getByTestId('rig-cable-runs-screen').waitFor();
@@ -213,7 +187,7 @@ describe('cable runs on a rig', () => {
     expect(await page.getByTestId('run-Inverter feed-cautions').textContent()).toMatch(/auto electrician/);
     // Drawn as Wire a circuit draws it: battery, fuse at the battery, cable with size and drop, device.
     expect(await page.getByTestId('run-Inverter feed-drawing').getAttribute('aria-label')).toMatch(/20 A fuse at the battery, 4 AWG over 7\.62 m dropping 2\.57 %, to Inverter/);
-    await page.screenshot({ path: path.join(SHOTS, 'rig-cable-runs-wide.png'), fullPage: true });
+    await shot(page, 'rig-cable-runs-wide');
     await page.goto(BASE + '/settings');
     await page.getByTestId('unit-wire-mm2').click();
     await page.goBack();

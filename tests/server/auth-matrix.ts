@@ -1,7 +1,6 @@
 import type request from 'supertest';
 import type { Test } from 'supertest';
 
-import { TEST_ORIGIN } from './test-app';
 
 /** better-auth's admin and organization endpoints over HTTP: what each actor gets (access-matrix.test.ts runs them). */
 export type Role = 'anonymous' | 'outsider' | 'advisor' | 'member' | 'owner' | 'admin';
@@ -18,7 +17,7 @@ const adminOnly = { ...all(403), anonymous: 401, admin: 200 };
 const signedIn = (status: number) => ({ ...all(status), anonymous: 401 });
 
 export function authMatrix(fx: AuthFixture): Record<string, AuthEntry> {
-  const post = (path: string, body: () => object | Promise<object>) => async (a: Agent) => a.post(`/api/auth${path}`).set('Origin', TEST_ORIGIN).send(await body());
+  const post = (path: string, body: () => object | Promise<object>) => async (a: Agent) => a.post(`/api/auth${path}`).send(await body());
   const get = (path: () => string | Promise<string>) => async (a: Agent) => a.get(`/api/auth${await path()}`);
   const h = fx.householdId;
   const victim = fx.users.owner.id;

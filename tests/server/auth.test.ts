@@ -1,20 +1,14 @@
 import request from 'supertest';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 
+import { withTestApp } from './fixtures';
 import { agentFor, latestMailTo, linkIn, PASSWORD, signIn, uniqueEmail } from './helpers';
 import { makeTestApp, TEST_ORIGIN } from './test-app';
 
-let ctx: Awaited<ReturnType<typeof makeTestApp>>;
-beforeAll(async () => {
-  // Workers on: the password reset e-mail goes out from the job queue.
-  ctx = await makeTestApp({ RUN_WORKERS: 'true' });
-});
-afterAll(async () => {
-  await ctx.jobs.stop();
-  await ctx.db.destroy();
-});
+// Workers on: the password reset e-mail goes out from the job queue.
+const ctx = withTestApp({ workers: true });
 
-const post = (agent: ReturnType<typeof agentFor>, path: string, body: object) => agent.post(path).set('Origin', TEST_ORIGIN).send(body);
+const post = (agent: ReturnType<typeof agentFor>, path: string, body: object) => agent.post(path).send(body);
 
 describe('sign-up, verification, sign-in and sign-out over HTTP, with mail through maildev', () => {
   it('signs up, follows the verification link from the e-mail, reaches a protected route, signs out', async () => {
@@ -96,9 +90,9 @@ describe('bad input at sign-up creates nothing', () => {
 
   it('refuses an oversized body and unknown fields on our own routes, naming the field', async () => {
     const agent = await signIn(ctx.app, 'ines@example.org', 'keyoff-demo-2026');
-    const big = await agent.post('/api/rigs').set('Origin', TEST_ORIGIN).send({ name: 'x'.repeat(2_000_000) });
+    const big = await agent.post('/api/rigs').send({ name: 'x'.repeat(2_000_000) });
     expect(big.status).toBe(413);
-    const extra = await agent.post('/api/rigs').set('Origin', TEST_ORIGIN).send({ name: 'Van', power: { battery: { chemistry: 'agm', capacityAh: 100 } }, colour: 'red' });
+    const extra = await agent.post('/api/rigs').send({ name: 'Van', power: { battery: { chemistry: 'agm', capacityAh: 100 } }, colour: 'red' });
     expect(extra.status).toBe(400);
     expect(extra.body.fields.map((f: { path: string }) => f.path)).toContain('colour');
     expect(extra.body.fields[0].message).toMatch(/colour/);
@@ -109,19 +103,19 @@ describe('account roles', () => {
   it('lets an admin change an account role, and nobody else', async () => {
     const admin = await signIn(ctx.app, 'admin@example.org', 'keyoff-demo-2026');
     const dara = await ctx.db.selectFrom('user').select('id').where('email', '=', 'dara@example.org').executeTakeFirstOrThrow();
-    await admin.put(`/api/admin/users/${dara.id}/role`).set('Origin', TEST_ORIGIN).send({ role: 'advisor' }).expect(204);
+    await admin.put(`/api/admin/users/${dara.id}/role`).send({ role: 'advisor' }).expect(204);
     expect((await ctx.db.selectFrom('user').select('role').where('id', '=', dara.id).executeTakeFirstOrThrow()).role).toBe('advisor');
-    await admin.put(`/api/admin/users/${dara.id}/role`).set('Origin', TEST_ORIGIN).send({ role: 'traveller' }).expect(204);
-    const bad = await admin.put(`/api/admin/users/${dara.id}/role`).set('Origin', TEST_ORIGIN).send({ role: 'emperor' }).expect(400);
+    await admin.put(`/api/admin/users/${dara.id}/role`).send({ role: 'traveller' }).expect(204);
+    const bad = await admin.put(`/api/admin/users/${dara.id}/role`).send({ role: 'emperor' }).expect(400);
     expect(bad.body.fields[0].path).toBe('role');
     const ines = await signIn(ctx.app, 'ines@example.org', 'keyoff-demo-2026');
-    await ines.put(`/api/admin/users/${dara.id}/role`).set('Origin', TEST_ORIGIN).send({ role: 'admin' }).expect(403);
+    await ines.put(`/api/admin/users/${dara.id}/role`).send({ role: 'admin' }).expect(403);
   });
 
   it('makes the configured first admin an admin at sign-up', async () => {
     const email = uniqueEmail('boss');
     const withAdmin = await makeTestApp({ ADMIN_EMAILS: email });
-    await request(withAdmin.app).post('/api/auth/sign-up/email').set('Origin', TEST_ORIGIN).send({ name: 'Boss', email, password: PASSWORD }).expect(200);
+    await agentFor(withAdmin.app).post('/api/auth/sign-up/email').send({ name: 'Boss', email, password: PASSWORD }).expect(200);
     expect((await withAdmin.db.selectFrom('user').select('role').where('email', '=', email).executeTakeFirstOrThrow()).role).toBe('admin');
     await withAdmin.db.destroy();
   });

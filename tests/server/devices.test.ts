@@ -1,16 +1,10 @@
 import request from 'supertest';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 
 import { DEVICES } from '@/shared/devices';
-import { makeTestApp } from './test-app';
+import { withTestApp } from './fixtures';
 
-let ctx: Awaited<ReturnType<typeof makeTestApp>>;
-beforeAll(async () => {
-  ctx = await makeTestApp();
-});
-afterAll(async () => {
-  await ctx.db.destroy();
-});
+const ctx = withTestApp();
 
 describe('GET /api/devices', () => {
   it('answers the whole catalogue to anyone, signed in or not', async () => {

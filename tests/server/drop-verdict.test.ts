@@ -1,18 +1,9 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 
 import { dropVerdict } from '@/shared/energy/drop-verdict';
-import { householdFixture } from './helpers';
-import { makeTestApp, TEST_ORIGIN } from './test-app';
+import { withHousehold } from './fixtures';
 
-let ctx: Awaited<ReturnType<typeof makeTestApp>>;
-let fx: Awaited<ReturnType<typeof householdFixture>>;
-beforeAll(async () => {
-  ctx = await makeTestApp();
-  fx = await householdFixture(ctx);
-}, 60_000);
-afterAll(async () => {
-  await ctx.db.destroy();
-});
+const { fx } = withHousehold();
 
 describe('the voltage-drop test\'s verdict', () => {
   it('says a 4.5 % drop on a run allowed 3 % is over, and 2.5 % is within', () => {
@@ -27,14 +18,14 @@ describe('the voltage-drop test\'s verdict', () => {
   it('comes with a test on a saved run, measured against that run\'s allowed drop', async () => {
     const run = await fx.agents.owner
       .post(`/api/rigs/${fx.rigId}/cable-runs`)
-      .set('Origin', TEST_ORIGIN)
+      
       .send({ label: 'Inverter feed', lengthM: 2, currentA: 30, maxDropPercent: 3, cableType: 'marine', purpose: 'inverter' })
       .expect(201);
     // 12.60 V at the battery, 12.033 V at the inverter: 0.567 V, 4.5 % of 12.6 V.
-    const res = await fx.agents.member.post(`/api/rigs/${fx.rigId}/voltage-drop`).set('Origin', TEST_ORIGIN).send({ batteryV: 12.6, pointV: 12.033, currentA: 30, cableRunId: run.body.id }).expect(200);
+    const res = await fx.agents.member.post(`/api/rigs/${fx.rigId}/voltage-drop`).send({ batteryV: 12.6, pointV: 12.033, currentA: 30, cableRunId: run.body.id }).expect(200);
     expect(res.body.dropPercent).toBe(4.5);
     expect(res.body.verdict).toMatchObject({ within: false, allowedPercent: 3 });
-    const plain = await fx.agents.member.post(`/api/rigs/${fx.rigId}/voltage-drop`).set('Origin', TEST_ORIGIN).send({ batteryV: 12.6, pointV: 12.5, currentA: 30 }).expect(200);
+    const plain = await fx.agents.member.post(`/api/rigs/${fx.rigId}/voltage-drop`).send({ batteryV: 12.6, pointV: 12.5, currentA: 30 }).expect(200);
     expect(plain.body.verdict).toBeNull();
   });
 });

@@ -1,20 +1,14 @@
 import request from 'supertest';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 
 import { createApp } from '@/server/app';
 import { loadConfig } from '@/server/config';
 import { createDb } from '@/db/client';
 import { createContext } from '@/server/context';
 import { pino } from 'pino';
-import { makeTestApp } from './test-app';
+import { withTestApp } from './fixtures';
 
-let ctx: Awaited<ReturnType<typeof makeTestApp>>;
-beforeAll(async () => {
-  ctx = await makeTestApp();
-});
-afterAll(async () => {
-  await ctx.db.destroy();
-});
+const ctx = withTestApp();
 
 describe('GET /api/health', () => {
   it('reports the database connected', async () => {

@@ -29,15 +29,17 @@ export function linkIn(mail: MailDevEmail): URL {
 
 export const uniqueEmail = (label: string) => `${label}-${Date.now()}-${Math.random().toString(36).slice(2, 8)}@example.org`;
 
-/** An agent that keeps cookies and sends the Origin a browser would. */
+/**
+ * An agent that keeps cookies and sends the Origin a browser on Keyoff would, on every request (a test of
+ * another site's request sets its own: `.set('Origin', 'https://elsewhere.example')`).
+ */
 export function agentFor(app: Express) {
-  const agent = request.agent(app);
-  return agent;
+  return request.agent(app).set('Origin', TEST_ORIGIN);
 }
 
 export async function signIn(app: Express, email: string, password = PASSWORD) {
   const agent = agentFor(app);
-  const res = await agent.post('/api/auth/sign-in/email').set('Origin', TEST_ORIGIN).send({ email, password });
+  const res = await agent.post('/api/auth/sign-in/email').send({ email, password });
   if (res.status !== 200) throw new Error(`sign-in of ${email} failed: ${res.status} ${JSON.stringify(res.body)}`);
   return agent;
 }
@@ -87,7 +89,6 @@ export async function householdFixture(ctx: AppContext & { app: Express }) {
   };
   const created = await agents.owner
     .post('/api/rigs')
-    .set('Origin', TEST_ORIGIN)
     .send({ name: 'Fixture van', vehicle: 'test', power: WREN_POWER, loads: [{ name: 'Fridge', supply: 'dc', watts: 45, dutyPercent: 35, hoursPerDay: 24 }] });
   if (created.status !== 201) throw new Error(`rig not created: ${JSON.stringify(created.body)}`);
   const rigId = created.body.id as string;

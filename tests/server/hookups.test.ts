@@ -1,18 +1,9 @@
 import request from 'supertest';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 
-import { householdFixture } from './helpers';
-import { makeTestApp, TEST_ORIGIN } from './test-app';
+import { withHousehold } from './fixtures';
 
-let ctx: Awaited<ReturnType<typeof makeTestApp>>;
-let fx: Awaited<ReturnType<typeof householdFixture>>;
-beforeAll(async () => {
-  ctx = await makeTestApp();
-  fx = await householdFixture(ctx);
-});
-afterAll(async () => {
-  await ctx.db.destroy();
-});
+const { ctx, fx } = withHousehold();
 
 const post = (body: unknown) => request(ctx.app).post('/api/hookups').send(body as object);
 const paths = (res: request.Response) => (res.body.fields as { path: string }[]).map((f) => f.path);
@@ -68,7 +59,7 @@ describe('GET /api/rigs/:rigId/hookup', () => {
   it('takes the length of the rig\'s saved inverter feed', async () => {
     const run = await fx.agents.owner
       .post(`/api/rigs/${fx.rigId}/cable-runs`)
-      .set('Origin', TEST_ORIGIN)
+      
       .send({ label: 'Inverter feed', lengthM: 3.5, currentA: 32, maxDropPercent: 3, cableType: 'marine', purpose: 'inverter', continuous: true })
       .expect(201);
     const res = await fx.agents.owner.get(`/api/rigs/${fx.rigId}/hookup`).expect(200);

@@ -1,19 +1,9 @@
 import { sql } from 'kysely';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 
-import { householdFixture } from './helpers';
-import { makeTestApp, TEST_ORIGIN } from './test-app';
+import { withHousehold } from './fixtures';
 
-let ctx: Awaited<ReturnType<typeof makeTestApp>>;
-let fx: Awaited<ReturnType<typeof householdFixture>>;
-beforeAll(async () => {
-  ctx = await makeTestApp();
-  fx = await householdFixture(ctx);
-}, 60_000);
-afterAll(async () => {
-  await ctx.jobs.stop();
-  await ctx.db.destroy();
-});
+const { ctx, fx } = withHousehold();
 
 const LOAD = { name: 'Reading lamp', supply: 'dc', watts: 5, hoursPerDay: 2, startHour: 21 };
 const rig = async () => (await fx.agents.owner.get(`/api/rigs/${fx.rigId}`).expect(200)).body;
@@ -30,21 +20,21 @@ async function drainMarginChecks() {
 
 describe('who may change a load', () => {
   it("lets a member edit and delete a load they added, and refuses one someone else added with 403", async () => {
-    const own = await fx.agents.member.post(`/api/rigs/${fx.rigId}/loads`).set('Origin', TEST_ORIGIN).send(LOAD).expect(201);
-    const owners = await fx.agents.owner.post(`/api/rigs/${fx.rigId}/loads`).set('Origin', TEST_ORIGIN).send({ ...LOAD, name: 'Owner lamp' }).expect(201);
+    const own = await fx.agents.member.post(`/api/rigs/${fx.rigId}/loads`).send(LOAD).expect(201);
+    const owners = await fx.agents.owner.post(`/api/rigs/${fx.rigId}/loads`).send({ ...LOAD, name: 'Owner lamp' }).expect(201);
 
-    await fx.agents.member.patch(`/api/rigs/${fx.rigId}/loads/${own.body.id}`).set('Origin', TEST_ORIGIN).send({ ...LOAD, watts: 6 }).expect(200);
-    const refused = await fx.agents.member.patch(`/api/rigs/${fx.rigId}/loads/${owners.body.id}`).set('Origin', TEST_ORIGIN).send({ ...LOAD, name: 'Owner lamp', watts: 60 }).expect(403);
+    await fx.agents.member.patch(`/api/rigs/${fx.rigId}/loads/${own.body.id}`).send({ ...LOAD, watts: 6 }).expect(200);
+    const refused = await fx.agents.member.patch(`/api/rigs/${fx.rigId}/loads/${owners.body.id}`).send({ ...LOAD, name: 'Owner lamp', watts: 60 }).expect(403);
     expect(refused.body.code).toBe('forbidden');
     expect(refused.body.message).toMatch(/Owner lamp/);
-    await fx.agents.member.delete(`/api/rigs/${fx.rigId}/loads/${owners.body.id}`).set('Origin', TEST_ORIGIN).expect(403);
+    await fx.agents.member.delete(`/api/rigs/${fx.rigId}/loads/${owners.body.id}`).expect(403);
 
     const saved = (await rig()).loads.find((l: { id: string }) => l.id === owners.body.id);
     expect(saved.watts).toBe(5);
     // The owner changes anyone's load.
-    await fx.agents.owner.patch(`/api/rigs/${fx.rigId}/loads/${own.body.id}`).set('Origin', TEST_ORIGIN).send({ ...LOAD, watts: 7 }).expect(200);
-    await fx.agents.member.delete(`/api/rigs/${fx.rigId}/loads/${own.body.id}`).set('Origin', TEST_ORIGIN).expect(204);
-    await fx.agents.owner.delete(`/api/rigs/${fx.rigId}/loads/${owners.body.id}`).set('Origin', TEST_ORIGIN).expect(204);
+    await fx.agents.owner.patch(`/api/rigs/${fx.rigId}/loads/${own.body.id}`).send({ ...LOAD, watts: 7 }).expect(200);
+    await fx.agents.member.delete(`/api/rigs/${fx.rigId}/loads/${own.body.id}`).expect(204);
+    await fx.agents.owner.delete(`/api/rigs/${fx.rigId}/loads/${owners.body.id}`).expect(204);
   });
 
   it('tells the client who it is and what it may change', async () => {
@@ -61,11 +51,11 @@ describe('a save that changes nothing', () => {
     const entries = (await history()).length;
     await drainMarginChecks();
 
-    const res = await fx.agents.owner.patch(`/api/rigs/${fx.rigId}`).set('Origin', TEST_ORIGIN).send({ version: before.version, name: before.name, vehicle: before.vehicle, power: before.power }).expect(200);
+    const res = await fx.agents.owner.patch(`/api/rigs/${fx.rigId}`).send({ version: before.version, name: before.name, vehicle: before.vehicle, power: before.power }).expect(200);
     expect(res.body.version).toBe(before.version);
     const load = before.loads[0];
     const { id: _id, addedBy: _by, ...same } = load;
-    await fx.agents.owner.patch(`/api/rigs/${fx.rigId}/loads/${load.id}`).set('Origin', TEST_ORIGIN).send(same).expect(200);
+    await fx.agents.owner.patch(`/api/rigs/${fx.rigId}/loads/${load.id}`).send(same).expect(200);
 
     const after = await rig();
     expect(after.version).toBe(before.version);
@@ -76,7 +66,7 @@ describe('a save that changes nothing', () => {
     expect(await marginChecks()).toBe(0);
 
     // A real change does all three.
-    await fx.agents.owner.patch(`/api/rigs/${fx.rigId}`).set('Origin', TEST_ORIGIN).send({ version: before.version, power: { ...before.power, plannedStayDays: before.power.plannedStayDays + 1 } }).expect(200);
+    await fx.agents.owner.patch(`/api/rigs/${fx.rigId}`).send({ version: before.version, power: { ...before.power, plannedStayDays: before.power.plannedStayDays + 1 } }).expect(200);
     expect((await rig()).version).toBe(before.version + 1);
     expect(await history()).toHaveLength(entries + 1);
     await new Promise((r) => setTimeout(r, 300));
@@ -85,6 +75,6 @@ describe('a save that changes nothing', () => {
 
   it('still refuses a stale version', async () => {
     const before = await rig();
-    await fx.agents.owner.patch(`/api/rigs/${fx.rigId}`).set('Origin', TEST_ORIGIN).send({ version: before.version - 1, name: before.name }).expect(409);
+    await fx.agents.owner.patch(`/api/rigs/${fx.rigId}`).send({ version: before.version - 1, name: before.name }).expect(409);
   });
 });

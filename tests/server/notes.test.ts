@@ -1,17 +1,8 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 
-import { householdFixture } from './helpers';
-import { makeTestApp, TEST_ORIGIN } from './test-app';
+import { withHousehold } from './fixtures';
 
-let ctx: Awaited<ReturnType<typeof makeTestApp>>;
-let fx: Awaited<ReturnType<typeof householdFixture>>;
-beforeAll(async () => {
-  ctx = await makeTestApp();
-  fx = await householdFixture(ctx);
-});
-afterAll(async () => {
-  await ctx.db.destroy();
-});
+const { fx } = withHousehold();
 
 const notes = () => `/api/rigs/${fx.rigId}/notes`;
 
@@ -19,9 +10,9 @@ describe('notes', () => {
   it('lets the advisor comment on a load but not edit it; says when the load changed since', async () => {
     const rig = (await fx.agents.owner.get(`/api/rigs/${fx.rigId}`)).body;
     const fridge = rig.loads.find((l: { name: string }) => l.name === 'Fridge');
-    const created = await fx.agents.advisor.post(notes()).set('Origin', TEST_ORIGIN).send({ body: 'Duty cycle looks high\nfor 40 L.', targetKind: 'load', targetId: fridge.id }).expect(201);
-    await fx.agents.advisor.patch(`/api/rigs/${fx.rigId}/loads/${fridge.id}`).set('Origin', TEST_ORIGIN).send({ name: 'Fridge', supply: 'dc', watts: 40, hoursPerDay: 24 }).expect(403);
-    await fx.agents.owner.patch(`/api/rigs/${fx.rigId}/loads/${fridge.id}`).set('Origin', TEST_ORIGIN).send({ name: 'Fridge', supply: 'dc', watts: 40, dutyPercent: 30, hoursPerDay: 24 }).expect(200);
+    const created = await fx.agents.advisor.post(notes()).send({ body: 'Duty cycle looks high\nfor 40 L.', targetKind: 'load', targetId: fridge.id }).expect(201);
+    await fx.agents.advisor.patch(`/api/rigs/${fx.rigId}/loads/${fridge.id}`).send({ name: 'Fridge', supply: 'dc', watts: 40, hoursPerDay: 24 }).expect(403);
+    await fx.agents.owner.patch(`/api/rigs/${fx.rigId}/loads/${fridge.id}`).send({ name: 'Fridge', supply: 'dc', watts: 40, dutyPercent: 30, hoursPerDay: 24 }).expect(200);
     const list = await fx.agents.owner.get(notes()).expect(200);
     const thread = list.body.threads.find((t: { id: string }) => t.id === created.body.id);
     expect(thread.body).toBe('Duty cycle looks high\nfor 40 L.');
@@ -29,29 +20,29 @@ describe('notes', () => {
   });
 
   it('counts unread notes per person, replies, resolves and reopens', async () => {
-    await fx.agents.owner.post(`${notes()}/read`).set('Origin', TEST_ORIGIN).expect(204);
-    const root = await fx.agents.advisor.post(notes()).set('Origin', TEST_ORIGIN).send({ body: 'Fit a cut-off switch.' }).expect(201);
-    await fx.agents.advisor.post(notes()).set('Origin', TEST_ORIGIN).send({ body: 'Near the battery.', parentId: root.body.id }).expect(201);
+    await fx.agents.owner.post(`${notes()}/read`).expect(204);
+    const root = await fx.agents.advisor.post(notes()).send({ body: 'Fit a cut-off switch.' }).expect(201);
+    await fx.agents.advisor.post(notes()).send({ body: 'Near the battery.', parentId: root.body.id }).expect(201);
     expect((await fx.agents.owner.get(notes())).body.unread).toBe(2);
     expect((await fx.agents.advisor.get(notes())).body.unread).toBe(0);
-    await fx.agents.owner.post(notes()).set('Origin', TEST_ORIGIN).send({ body: 'Done, thanks.', parentId: root.body.id }).expect(201);
+    await fx.agents.owner.post(notes()).send({ body: 'Done, thanks.', parentId: root.body.id }).expect(201);
     expect((await fx.agents.owner.get(notes())).body.unread).toBe(0);
-    await fx.agents.owner.post(`${notes()}/${root.body.id}/resolve`).set('Origin', TEST_ORIGIN).expect(204);
+    await fx.agents.owner.post(`${notes()}/${root.body.id}/resolve`).expect(204);
     let thread = (await fx.agents.member.get(notes())).body.threads.find((t: { id: string }) => t.id === root.body.id);
     expect(thread.resolved).toBe(true);
     expect(thread.replies).toHaveLength(2);
-    await fx.agents.member.post(`${notes()}/${root.body.id}/reopen`).set('Origin', TEST_ORIGIN).expect(204);
+    await fx.agents.member.post(`${notes()}/${root.body.id}/reopen`).expect(204);
     thread = (await fx.agents.member.get(notes())).body.threads.find((t: { id: string }) => t.id === root.body.id);
     expect(thread.resolved).toBe(false);
   });
 
   it("refuses editing another person's note, lets the owner delete any, hides notes from outsiders", async () => {
-    const mine = await fx.agents.member.post(notes()).set('Origin', TEST_ORIGIN).send({ body: 'Mine' }).expect(201);
-    await fx.agents.advisor.patch(`${notes()}/${mine.body.id}`).set('Origin', TEST_ORIGIN).send({ body: 'Not yours' }).expect(403);
-    await fx.agents.advisor.delete(`${notes()}/${mine.body.id}`).set('Origin', TEST_ORIGIN).expect(403);
-    await fx.agents.owner.delete(`${notes()}/${mine.body.id}`).set('Origin', TEST_ORIGIN).expect(204);
+    const mine = await fx.agents.member.post(notes()).send({ body: 'Mine' }).expect(201);
+    await fx.agents.advisor.patch(`${notes()}/${mine.body.id}`).send({ body: 'Not yours' }).expect(403);
+    await fx.agents.advisor.delete(`${notes()}/${mine.body.id}`).expect(403);
+    await fx.agents.owner.delete(`${notes()}/${mine.body.id}`).expect(204);
     await fx.agents.outsider.get(notes()).expect(404);
-    const long = await fx.agents.member.post(notes()).set('Origin', TEST_ORIGIN).send({ body: 'x'.repeat(4001) }).expect(400);
+    const long = await fx.agents.member.post(notes()).send({ body: 'x'.repeat(4001) }).expect(400);
     expect(long.body.fields[0].path).toBe('body');
   });
 

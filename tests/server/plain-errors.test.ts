@@ -1,18 +1,9 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 
-import { householdFixture, WREN_POWER } from './helpers';
-import { makeTestApp, TEST_ORIGIN } from './test-app';
+import { withHousehold } from './fixtures';
+import { WREN_POWER } from './helpers';
 
-let ctx: Awaited<ReturnType<typeof makeTestApp>>;
-let fx: Awaited<ReturnType<typeof householdFixture>>;
-beforeAll(async () => {
-  ctx = await makeTestApp();
-  fx = await householdFixture(ctx);
-}, 60_000);
-afterAll(async () => {
-  await ctx.jobs.stop();
-  await ctx.db.destroy();
-});
+const { fx } = withHousehold();
 
 type Field = { path: string; message: string };
 
@@ -20,7 +11,6 @@ describe('plain messages naming the field', () => {
   it('answers every bad field of a new rig at once, each in words that name it', async () => {
     const res = await fx.agents.owner
       .post('/api/rigs')
-      .set('Origin', TEST_ORIGIN)
       .send({ name: '', vehicle: 'x'.repeat(121), power: { ...WREN_POWER, battery: { chemistry: 'agm', capacityAh: 0 }, charging: { alternatorA: 20, drivingMinutesPerDay: [0, 0, 2000, 0, 0, 0, 0] } } })
       .expect(400);
     const fields = res.body.fields as Field[];
@@ -38,7 +28,6 @@ describe('plain messages naming the field', () => {
   it('refuses a time zone the runtime does not know, naming the field', async () => {
     const res = await fx.agents.member
       .put('/api/me/email-prefs')
-      .set('Origin', TEST_ORIGIN)
       .send({ reportsOn: true, reportWeekday: 6, reportHour: 18, timeZone: 'Mars/Olympus', warningsOn: true, warnAt: 'tight', noteEmailsOn: true })
       .expect(400);
     expect(res.body.fields).toEqual([{ path: 'timeZone', message: expect.stringMatching(/time zone/) }]);

@@ -1,16 +1,11 @@
 import request from 'supertest';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 
 import { STOAT, WREN } from '@/shared/demo/scenario';
+import { withTestApp } from './fixtures';
 import { makeTestApp } from './test-app';
 
-let ctx: Awaited<ReturnType<typeof makeTestApp>>;
-beforeAll(async () => {
-  ctx = await makeTestApp();
-});
-afterAll(async () => {
-  await ctx.db.destroy();
-});
+const ctx = withTestApp();
 
 const post = (body: unknown, path = '/api/projections') => request(ctx.app).post(path).send(body as object);
 const fieldPaths = (res: request.Response) => (res.body.fields as { path: string }[]).map((f) => f.path);
@@ -20,7 +15,12 @@ describe('POST /api/projections', () => {
     const res = await post(WREN).expect(200);
     expect(res.body.parked.daysToCutoff).toBeGreaterThan(0);
     expect(res.body.series).toHaveLength(14 * 24);
-    expect(res.body.margin.state).toMatch(/^(comfortable|tight|short)$/);
+    // The margin is the days to cut-off on the routine minus the planned stay (PRODUCT.md): Wren's stay is
+    // 5 days and its routine reaches the cut-off well before, so the margin is below zero: Short.
+    expect(res.body.margin.plannedStayDays).toBe(5);
+    expect(res.body.margin.days).toBeCloseTo(res.body.routine.daysToCutoff - 5, 2);
+    expect(res.body.margin.days).toBeLessThan(0);
+    expect(res.body.margin.state).toBe('short');
     expect(res.body.fixes.map((f: { kind: string }) => f.kind)).toContain('cutoff-switch');
     expect(res.body.standby.inverterIdleAh).toBeGreaterThan(0);
   });

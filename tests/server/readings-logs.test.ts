@@ -1,31 +1,22 @@
 import { ListObjectsV2Command, S3Client } from '@aws-sdk/client-s3';
 import { sql } from 'kysely';
 import sharp from 'sharp';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 
-import { householdFixture, WREN_POWER } from './helpers';
-import { makeTestApp, TEST_ORIGIN } from './test-app';
+import { withHousehold } from './fixtures';
+import { WREN_POWER } from './helpers';
 
-let ctx: Awaited<ReturnType<typeof makeTestApp>>;
-let fx: Awaited<ReturnType<typeof householdFixture>>;
-beforeAll(async () => {
-  ctx = await makeTestApp();
-  fx = await householdFixture(ctx);
-}, 60_000);
-afterAll(async () => {
-  await ctx.jobs.stop();
-  await ctx.db.destroy();
-});
+const { ctx, fx } = withHousehold();
 
 type Agent = typeof fx.agents.owner;
 /** A rig of its own for each case, in the fixture's household: a 100 Ah flooded battery, no inverter unless given. */
 async function freshRig(extra: Record<string, unknown> = {}, loads: unknown[] = []) {
-  const res = await fx.agents.owner.post('/api/rigs').set('Origin', TEST_ORIGIN).send({ name: 'Readings van', householdId: fx.householdId, power: { ...WREN_POWER, inverter: null, battery: { chemistry: 'flooded', capacityAh: 100 }, ...extra }, loads });
+  const res = await fx.agents.owner.post('/api/rigs').send({ name: 'Readings van', householdId: fx.householdId, power: { ...WREN_POWER, inverter: null, battery: { chemistry: 'flooded', capacityAh: 100 }, ...extra }, loads });
   expect(res.status).toBe(201);
   return res.body.id as string;
 }
 const upload = (agent: Agent, rigId: string, text: string, mapping: Record<string, unknown>, extra: Record<string, string> = {}) => {
-  let req = agent.post(`/api/rigs/${rigId}/uploads`).set('Origin', TEST_ORIGIN).field('mapping', JSON.stringify(mapping));
+  let req = agent.post(`/api/rigs/${rigId}/uploads`).field('mapping', JSON.stringify(mapping));
   for (const [k, v] of Object.entries(extra)) req = req.field(k, v);
   return req.attach('file', Buffer.from(text), 'log.csv');
 };
@@ -37,12 +28,12 @@ const historyOf = async (rigId: string) => (await fx.agents.owner.get(`/api/rigs
 describe('typed readings', () => {
   it('refuses a reading marked rested with 0.8 A flowing, naming the field, and takes it unrested', async () => {
     const rigId = await freshRig();
-    const res = await fx.agents.member.post(`/api/rigs/${rigId}/readings`).set('Origin', TEST_ORIGIN).send({ at: '2026-11-20T10:00:00Z', voltageV: 12.55, currentA: 0.8, rested: true }).expect(400);
+    const res = await fx.agents.member.post(`/api/rigs/${rigId}/readings`).send({ at: '2026-11-20T10:00:00Z', voltageV: 12.55, currentA: 0.8, rested: true }).expect(400);
     // A trickle is C/1000 (model choice): 0.1 A on 100 Ah.
     expect(res.body.fields[0]).toMatchObject({ path: 'rested' });
     expect(res.body.fields[0].message).toMatch(/0.8 A was flowing.*0.1 A/);
-    await fx.agents.member.post(`/api/rigs/${rigId}/readings`).set('Origin', TEST_ORIGIN).send({ at: '2026-11-20T08:00:00Z', voltageV: 12.71, rested: true }).expect(201);
-    await fx.agents.member.post(`/api/rigs/${rigId}/readings`).set('Origin', TEST_ORIGIN).send({ at: '2026-11-20T10:00:00Z', voltageV: 12.55, currentA: 0.8, rested: false }).expect(201);
+    await fx.agents.member.post(`/api/rigs/${rigId}/readings`).send({ at: '2026-11-20T08:00:00Z', voltageV: 12.71, rested: true }).expect(201);
+    await fx.agents.member.post(`/api/rigs/${rigId}/readings`).send({ at: '2026-11-20T10:00:00Z', voltageV: 12.55, currentA: 0.8, rested: false }).expect(201);
     const { analysis } = (await fx.agents.owner.get(`/api/rigs/${rigId}/readings`).expect(200)).body;
     // The measured 0.8 A over the 2 hours, not 6.2 A from the fall in voltage.
     expect(analysis).toMatchObject({ method: 'current', drainA: 0.8, hours: 2 });
@@ -56,7 +47,7 @@ describe('CSV logs as people have them', () => {
   it('reads a semicolon log with decimal commas and times in the uploader’s zone', async () => {
     const rigId = await freshRig();
     const text = ['Zeit;Spannung (V);Strom (A)', '20.11.2026 19:00;12,65;0,45', '20.11.2026 20:00;12,61;0,45', '20.11.2026 21:00;12,58;0,5'].join('\r\n');
-    const preview = (await fx.agents.owner.post(`/api/rigs/${rigId}/uploads/preview`).set('Origin', TEST_ORIGIN).attach('file', Buffer.from(text), 'log.csv').expect(200)).body;
+    const preview = (await fx.agents.owner.post(`/api/rigs/${rigId}/uploads/preview`).attach('file', Buffer.from(text), 'log.csv').expect(200)).body;
     expect(preview).toMatchObject({ delimiter: ';', decimalComma: true, rows: 3, columns: ['Zeit', 'Spannung (V)', 'Strom (A)'] });
     expect(preview.mapping).toMatchObject({ time: 'Zeit', voltage: 'Spannung (V)', current: 'Strom (A)', decimalComma: true });
     const wrong = await upload(fx.agents.owner, rigId, text, { ...preview.mapping, decimalComma: false }).expect(422);
@@ -73,7 +64,7 @@ describe('CSV logs as people have them', () => {
     const { analysis } = (await fx.agents.owner.get(`/api/rigs/${rigId}/readings`).expect(200)).body;
     expect(analysis).toMatchObject({ method: 'current', drainA: 0.46 });
     // The mapping is remembered for the next log.
-    const again = (await fx.agents.owner.post(`/api/rigs/${rigId}/uploads/preview`).set('Origin', TEST_ORIGIN).attach('file', Buffer.from(text), 'log.csv').expect(200)).body;
+    const again = (await fx.agents.owner.post(`/api/rigs/${rigId}/uploads/preview`).attach('file', Buffer.from(text), 'log.csv').expect(200)).body;
     expect(again).toMatchObject({ remembered: true, mapping: { decimalComma: true, currentSign: 'drawn-positive' } });
   });
 
@@ -117,7 +108,7 @@ describe('the chart of a view', () => {
     const rigId = await freshRig({}, [{ name: 'Lamp', supply: 'dc', watts: 12, hoursPerDay: 1, startHour: 14 }]);
     // 08:10 UTC is 13:40 in Kolkata: the model starts at the local hour 13:00 (07:30 UTC), so its points fall at :30 UTC.
     const readings = [{ at: '2026-11-20T08:10:00Z', voltageV: 12.65 }, { at: '2026-11-20T12:10:00Z', voltageV: 12.6 }];
-    for (const r of readings) await fx.agents.owner.post(`/api/rigs/${rigId}/readings`).set('Origin', TEST_ORIGIN).send({ ...r, rested: true }).expect(201);
+    for (const r of readings) await fx.agents.owner.post(`/api/rigs/${rigId}/readings`).send({ ...r, rested: true }).expect(201);
     const { chart } = (await fx.agents.owner.get(`/api/rigs/${rigId}/readings?timeZone=Asia/Kolkata`).expect(200)).body;
     const model = chart.model as { at: string; socPercent: number }[];
     expect(model[0]).toEqual({ at: '2026-11-20T08:10:00.000Z', socPercent: 100 });
@@ -134,20 +125,20 @@ describe('deleting what is wrong', () => {
     const rigId = await freshRig();
     const log = (await upload(fx.agents.member, rigId, 'time,volts\n2026-11-20T18:00:00Z,12.6\n2026-11-20T19:00:00Z,12.58\n', { time: 'time', voltage: 'volts' }).expect(201)).body.upload.id;
     const jpeg = await sharp({ create: { width: 600, height: 400, channels: 3, background: '#B9831A' } }).jpeg().toBuffer();
-    const photo = (await fx.agents.owner.post(`/api/rigs/${rigId}/photos`).set('Origin', TEST_ORIGIN).attach('file', jpeg, 'fuse.jpg').expect(201)).body.id;
-    await fx.agents.member.post(`/api/rigs/${rigId}/readings`).set('Origin', TEST_ORIGIN).send({ at: '2026-11-20T08:00:00Z', voltageV: 12.5 }).expect(201);
+    const photo = (await fx.agents.owner.post(`/api/rigs/${rigId}/photos`).attach('file', jpeg, 'fuse.jpg').expect(201)).body.id;
+    await fx.agents.member.post(`/api/rigs/${rigId}/readings`).send({ at: '2026-11-20T08:00:00Z', voltageV: 12.5 }).expect(201);
     const typed = (await fx.agents.owner.get(`/api/rigs/${rigId}/readings`).expect(200)).body.spot[0];
     expect(typed.canDelete).toBe(true);
     expect(await objectsOf(rigId)).toHaveLength(3);
 
     // The member may not delete the owner's photo; the owner may delete the member's log and reading.
-    await fx.agents.member.delete(`/api/rigs/${rigId}/photos/${photo}`).set('Origin', TEST_ORIGIN).expect(403);
-    await fx.agents.member.delete(`/api/rigs/${rigId}/uploads/${photo}`).set('Origin', TEST_ORIGIN).expect(404);
-    await fx.agents.owner.delete(`/api/rigs/${rigId}/uploads/${log}`).set('Origin', TEST_ORIGIN).expect(204);
-    await fx.agents.owner.delete(`/api/rigs/${rigId}/readings/${typed.id}`).set('Origin', TEST_ORIGIN).expect(204);
+    await fx.agents.member.delete(`/api/rigs/${rigId}/photos/${photo}`).expect(403);
+    await fx.agents.member.delete(`/api/rigs/${rigId}/uploads/${photo}`).expect(404);
+    await fx.agents.owner.delete(`/api/rigs/${rigId}/uploads/${log}`).expect(204);
+    await fx.agents.owner.delete(`/api/rigs/${rigId}/readings/${typed.id}`).expect(204);
     expect(await rowsOf(rigId)).toHaveLength(0);
     expect((await objectsOf(rigId)).filter((k) => k!.includes('/logs/'))).toHaveLength(0);
-    await fx.agents.owner.delete(`/api/rigs/${rigId}/photos/${photo}`).set('Origin', TEST_ORIGIN).expect(204);
+    await fx.agents.owner.delete(`/api/rigs/${rigId}/photos/${photo}`).expect(204);
     expect(await objectsOf(rigId)).toHaveLength(0);
     const removed = (await historyOf(rigId)).filter((h) => h.kind === 'reading-removed').map((h) => h.summary);
     expect(removed).toEqual(['deleted the photo fuse.jpg', 'deleted a reading: 12.5 V at 2026-11-20 08:00 UTC', 'deleted the log log.csv (2 readings)']);

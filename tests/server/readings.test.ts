@@ -6,24 +6,18 @@ import path from 'node:path';
 import { ListObjectsV2Command, S3Client } from '@aws-sdk/client-s3';
 import sharp from 'sharp';
 import request from 'supertest';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
 
 import { restingLog } from '../shared/energy/fixtures';
-import { householdFixture } from './helpers';
-import { makeTestApp, TEST_ORIGIN } from './test-app';
+import { withHousehold } from './fixtures';
+import { agentFor } from './helpers';
+import { makeTestApp } from './test-app';
 
-let ctx: Awaited<ReturnType<typeof makeTestApp>>;
-let fx: Awaited<ReturnType<typeof householdFixture>>;
+const { ctx, fx } = withHousehold({ env: { SIGNED_URL_SECONDS: '2' } });
 beforeAll(async () => {
-  ctx = await makeTestApp({ SIGNED_URL_SECONDS: '2' });
-  fx = await householdFixture(ctx);
   // The fixture van as a 100 Ah flooded battery, for the BCI table.
   const rig = (await fx.agents.owner.get(`/api/rigs/${fx.rigId}`)).body;
-  await fx.agents.owner.patch(`/api/rigs/${fx.rigId}`).set('Origin', TEST_ORIGIN).send({ version: rig.version, power: { ...rig.power, battery: { ...rig.power.battery, chemistry: 'flooded' } } }).expect(200);
-});
-afterAll(async () => {
-  await ctx.jobs.stop();
-  await ctx.db.destroy();
+  await fx.agents.owner.patch(`/api/rigs/${fx.rigId}`).send({ version: rig.version, power: { ...rig.power, battery: { ...rig.power.battery, chemistry: 'flooded' } } }).expect(200);
 });
 
 const csvOf = (rows: { at: string; voltageV: number }[]) => Buffer.from(['Timestamp,Battery (V),Notes', ...rows.map((r) => `${r.at},${r.voltageV},`)].join('\n'));
@@ -33,16 +27,16 @@ const uploadsOfRig = async () => (await ctx.db.selectFrom('uploads').select('id'
 const s3 = new S3Client({ endpoint: 'http://127.0.0.1:4569', region: 'us-east-1', forcePathStyle: true, credentials: { accessKeyId: 'S3RVER', secretAccessKey: 'S3RVER' } });
 const objectsOfRig = async () => (await s3.send(new ListObjectsV2Command({ Bucket: 'keyoff', Prefix: `rigs/${fx.rigId}/` }))).KeyCount ?? 0;
 const upload = (agent: typeof fx.agents.owner, file: Buffer, name: string, fields: Record<string, string> = { mapping: MAPPING }) => {
-  let req = agent.post(`/api/rigs/${fx.rigId}/uploads`).set('Origin', TEST_ORIGIN);
+  let req = agent.post(`/api/rigs/${fx.rigId}/uploads`);
   for (const [k, v] of Object.entries(fields)) req = req.field(k, v);
   return req.attach('file', file, name);
 };
 
 describe('spot readings', () => {
   it('takes a typed reading from a member, refuses one from the advisor, and names a wrong field', async () => {
-    await fx.agents.member.post(`/api/rigs/${fx.rigId}/readings`).set('Origin', TEST_ORIGIN).send({ at: '2026-11-19T08:00:00Z', voltageV: 12.52, rested: true, place: 'terminals', note: 'Morning, before the fridge.' }).expect(201);
-    await fx.agents.advisor.post(`/api/rigs/${fx.rigId}/readings`).set('Origin', TEST_ORIGIN).send({ at: '2026-11-19T08:00:00Z', voltageV: 12.5 }).expect(403);
-    const bad = await fx.agents.member.post(`/api/rigs/${fx.rigId}/readings`).set('Origin', TEST_ORIGIN).send({ at: 'yesterday', voltageV: 120 }).expect(400);
+    await fx.agents.member.post(`/api/rigs/${fx.rigId}/readings`).send({ at: '2026-11-19T08:00:00Z', voltageV: 12.52, rested: true, place: 'terminals', note: 'Morning, before the fridge.' }).expect(201);
+    await fx.agents.advisor.post(`/api/rigs/${fx.rigId}/readings`).send({ at: '2026-11-19T08:00:00Z', voltageV: 12.5 }).expect(403);
+    const bad = await fx.agents.member.post(`/api/rigs/${fx.rigId}/readings`).send({ at: 'yesterday', voltageV: 120 }).expect(400);
     expect(bad.body.fields.map((f: { path: string }) => f.path).sort()).toEqual(['at', 'voltageV']);
     const list = (await fx.agents.advisor.get(`/api/rigs/${fx.rigId}/readings`).expect(200)).body;
     // 12.52 V rested on the BCI table: between 12.45 V (75 %) and 12.65 V (100 %): 75 + 25 × 0.07 / 0.20 = 83.75 %.
@@ -87,7 +81,7 @@ describe('CSV log uploads', () => {
   it('tells a PNG renamed .csv and a CSV renamed .png by their bytes (415)', async () => {
     const png = await sharp({ create: { width: 40, height: 30, channels: 3, background: '#17324A' } }).png().toBuffer();
     expect((await upload(fx.agents.owner, png, 'log.csv').expect(415)).body.message).toMatch(/PNG/);
-    const res = await fx.agents.owner.post(`/api/rigs/${fx.rigId}/photos`).set('Origin', TEST_ORIGIN).attach('file', csvOf(restingLog(2)), 'wiring.png').expect(415);
+    const res = await fx.agents.owner.post(`/api/rigs/${fx.rigId}/photos`).attach('file', csvOf(restingLog(2)), 'wiring.png').expect(415);
     expect(res.body.fields[0].path).toBe('file');
   });
 
@@ -107,7 +101,7 @@ describe('CSV log uploads', () => {
 describe('install photos', () => {
   it('keeps a JPEG with a thumbnail; an outsider gets 404, the advisor a signed address that expires', async () => {
     const jpeg = await sharp({ create: { width: 1200, height: 900, channels: 3, background: '#B9831A' } }).jpeg().toBuffer();
-    const made = await fx.agents.member.post(`/api/rigs/${fx.rigId}/photos`).set('Origin', TEST_ORIGIN).field('caption', 'Fuse block by the battery').attach('file', jpeg, '../../etc/Fuse block?.jpg').expect(201);
+    const made = await fx.agents.member.post(`/api/rigs/${fx.rigId}/photos`).field('caption', 'Fuse block by the battery').attach('file', jpeg, '../../etc/Fuse block?.jpg').expect(201);
     await fx.agents.outsider.get(`/api/rigs/${fx.rigId}/photos/${made.body.id}`).expect(404);
     const seen = await fx.agents.advisor.get(`/api/rigs/${fx.rigId}/photos/${made.body.id}`).expect(200);
     expect(seen.body.fileName).toBe('Fuse block.jpg');
@@ -123,7 +117,7 @@ describe('install photos', () => {
   it('refuses a HEIC photo with what to do instead', async () => {
     // The start of an HEIF file: a 'ftyp' box with the 'heic' brand (ISO/IEC 23008-12).
     const heic = Buffer.concat([Buffer.from([0, 0, 0, 24]), Buffer.from('ftypheic'), Buffer.from([0, 0, 0, 0]), Buffer.from('mif1heic'), Buffer.alloc(64)]);
-    const res = await fx.agents.owner.post(`/api/rigs/${fx.rigId}/photos`).set('Origin', TEST_ORIGIN).attach('file', heic, 'IMG_0001.HEIC').expect(415);
+    const res = await fx.agents.owner.post(`/api/rigs/${fx.rigId}/photos`).attach('file', heic, 'IMG_0001.HEIC').expect(415);
     expect(res.body.message).toMatch(/HEIC .*JPEG/);
   });
 });
@@ -132,11 +126,11 @@ describe('when object storage is down', () => {
   it('answers 503 and leaves neither a row nor an object behind', async () => {
     const port = 4579;
     const down = await makeTestApp({ S3_ENDPOINT: `http://127.0.0.1:${port}` });
-    const agent = request.agent(down.app);
-    await agent.post('/api/auth/sign-in/email').set('Origin', TEST_ORIGIN).send({ email: fx.users.owner.email, password: 'a-long-test-password' }).expect(200);
+    const agent = agentFor(down.app);
+    await agent.post('/api/auth/sign-in/email').send({ email: fx.users.owner.email, password: 'a-long-test-password' }).expect(200);
     const rows = await rowsOfRig();
     const uploads = await uploadsOfRig();
-    const res = await agent.post(`/api/rigs/${fx.rigId}/uploads`).set('Origin', TEST_ORIGIN).field('mapping', MAPPING).attach('file', csvOf(restingLog(5)), 'log.csv').expect(503);
+    const res = await agent.post(`/api/rigs/${fx.rigId}/uploads`).field('mapping', MAPPING).attach('file', csvOf(restingLog(5)), 'log.csv').expect(503);
     expect(res.body.code).toBe('storage_unavailable');
     // Storage comes back: the same upload goes through, and only then is there an object.
     const dir = mkdtempSync(path.join(tmpdir(), 'keyoff-s3-'));
@@ -144,7 +138,7 @@ describe('when object storage is down', () => {
     try {
       for (let i = 0; i < 100 && !(await new Promise<boolean>((r) => createConnection({ host: '127.0.0.1', port }, function (this: import('node:net').Socket) { this.destroy(); r(true); }).on('error', () => r(false)))); i++) await new Promise((r) => setTimeout(r, 100));
       expect([await rowsOfRig(), await uploadsOfRig()]).toEqual([rows, uploads]);
-      await agent.post(`/api/rigs/${fx.rigId}/uploads`).set('Origin', TEST_ORIGIN).field('mapping', MAPPING).attach('file', csvOf(restingLog(5)), 'log.csv').expect(201);
+      await agent.post(`/api/rigs/${fx.rigId}/uploads`).field('mapping', MAPPING).attach('file', csvOf(restingLog(5)), 'log.csv').expect(201);
     } finally {
       s3rver.kill('SIGTERM');
       await down.jobs.stop();

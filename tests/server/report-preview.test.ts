@@ -1,18 +1,9 @@
 import request from 'supertest';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 
-import { householdFixture } from './helpers';
-import { makeTestApp } from './test-app';
+import { withHousehold } from './fixtures';
 
-let ctx: Awaited<ReturnType<typeof makeTestApp>>;
-let fx: Awaited<ReturnType<typeof householdFixture>>;
-beforeAll(async () => {
-  ctx = await makeTestApp();
-  fx = await householdFixture(ctx);
-});
-afterAll(async () => {
-  await ctx.db.destroy();
-});
+const { ctx, fx } = withHousehold();
 
 describe('GET /api/rigs/:rigId/report-preview', () => {
   it('shows the next weekly report as the caller would get it, with the Outlook\'s figures and its chart, and sends nothing', async () => {

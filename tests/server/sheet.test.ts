@@ -3,16 +3,13 @@ import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import request from 'supertest';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
 
 import { WREN, WREN_LOADS } from '@/shared/demo/scenario';
-import { householdFixture } from './helpers';
-import { makeTestApp, TEST_ORIGIN } from './test-app';
+import { withHousehold } from './fixtures';
 
 // The sheet's text is read back with poppler's pdftotext and its paper with pdfinfo (Debian's
 // poppler-utils, installed by scripts/lib.sh), so the test reads the PDF as a reader would.
-let ctx: Awaited<ReturnType<typeof makeTestApp>>;
-let fx: Awaited<ReturnType<typeof householdFixture>>;
 let wrenId: string;
 const dir = mkdtempSync(path.join(tmpdir(), 'keyoff-sheet-'));
 
@@ -27,15 +24,11 @@ function poppler(tool: 'pdftotext' | 'pdfinfo', pdf: Buffer) {
   return execFileSync(tool, tool === 'pdftotext' ? ['-layout', file, '-'] : [file], { encoding: 'utf8' });
 }
 
+const { ctx, fx } = withHousehold();
 beforeAll(async () => {
-  ctx = await makeTestApp();
-  fx = await householdFixture(ctx);
   const { loads: _l, ...power } = WREN;
-  const res = await fx.agents.owner.post('/api/rigs').set('Origin', TEST_ORIGIN).send({ name: 'Wren', vehicle: '2011 long-wheelbase panel van', power, loads: WREN_LOADS });
+  const res = await fx.agents.owner.post('/api/rigs').send({ name: 'Wren', vehicle: '2011 long-wheelbase panel van', power, loads: WREN_LOADS });
   wrenId = res.body.id;
-});
-afterAll(async () => {
-  await ctx.db.destroy();
 });
 
 describe('GET /api/rigs/:rigId/sheet.pdf', () => {

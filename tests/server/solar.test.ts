@@ -1,15 +1,9 @@
 import request from 'supertest';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 
-import { makeTestApp } from './test-app';
+import { withTestApp } from './fixtures';
 
-let ctx: Awaited<ReturnType<typeof makeTestApp>>;
-beforeAll(async () => {
-  ctx = await makeTestApp();
-});
-afterAll(async () => {
-  await ctx.db.destroy();
-});
+const ctx = withTestApp();
 
 const post = (body: unknown) => request(ctx.app).post('/api/solar/daily').send(body as object);
 

@@ -1,18 +1,12 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 
 import { tryOnDevice } from '@/features/rigs/utils/try-on-device';
+import { withTestApp } from './fixtures';
 import { signIn } from './helpers';
-import { makeTestApp, TEST_ORIGIN } from './test-app';
 
 // Try a load offline runs the same model in the browser on the rig as the API last sent it. Online the
 // server is the authority: both must give the same answer for the same saved rig and candidates.
-let ctx: Awaited<ReturnType<typeof makeTestApp>>;
-beforeAll(async () => {
-  ctx = await makeTestApp();
-});
-afterAll(async () => {
-  await ctx.db.destroy();
-});
+const ctx = withTestApp();
 
 const rigIdOf = async (seedKey: string) => (await ctx.db.selectFrom('rigs').select('id').where('seed_key', '=', seedKey).executeTakeFirstOrThrow()).id;
 
@@ -27,7 +21,7 @@ describe('Try a load on the device and on the server', () => {
       const ines = await signIn(ctx.app, 'ines@example.org', 'keyoff-demo-2026');
       const id = await rigIdOf(c.rig);
       const rig = (await ines.get(`/api/rigs/${id}`).expect(200)).body;
-      const server = (await ines.post(`/api/rigs/${id}/try`).set('Origin', TEST_ORIGIN).send({ candidates: c.candidates }).expect(200)).body;
+      const server = (await ines.post(`/api/rigs/${id}/try`).send({ candidates: c.candidates }).expect(200)).body;
       const device = tryOnDevice(rig, c.candidates as Parameters<typeof tryOnDevice>[1]);
       expect(device).toEqual(server);
       expect(server.delta.dailyAh).toBeGreaterThan(0);

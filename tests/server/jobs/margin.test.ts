@@ -1,11 +1,10 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
 
 import { checkMargin, warningKey } from '@/server/jobs/margin';
+import { withTestApp } from '../fixtures';
 import { signIn, verifiedUser, WREN_POWER } from '../helpers';
-import { makeTestApp, TEST_ORIGIN } from '../test-app';
 import { emailLog, mailsTo, waitFor } from './helpers';
 
-let ctx: Awaited<ReturnType<typeof makeTestApp>>;
 let owner: { id: string; email: string };
 let member: { id: string; email: string };
 let agent: Awaited<ReturnType<typeof signIn>>;
@@ -18,20 +17,18 @@ const POWER = { ...WREN_POWER, battery: { chemistry: 'agm', capacityAh: 400 }, i
 
 async function setStay(days: number) {
   const rig = (await agent.get(`/api/rigs/${rigId}`).expect(200)).body;
-  await agent.patch(`/api/rigs/${rigId}`).set('Origin', TEST_ORIGIN).send({ version: rig.version, power: { ...rig.power, plannedStayDays: days } }).expect(200);
+  await agent.patch(`/api/rigs/${rigId}`).send({ version: rig.version, power: { ...rig.power, plannedStayDays: days } }).expect(200);
   return (await agent.get(`/api/rigs/${rigId}/outlook`).expect(200)).body;
 }
 const warnings = async (email: string) => (await mailsTo(email)).filter((m) => /: margin (Tight|Short)/.test(m.subject));
 
+const ctx = withTestApp({ workers: true });
 beforeAll(async () => {
-  ctx = await makeTestApp({ RUN_WORKERS: 'true' });
-  await ctx.jobs.start({ workers: true });
   owner = await verifiedUser(ctx, 'margin-owner');
   member = await verifiedUser(ctx, 'margin-member');
   agent = await signIn(ctx.app, owner.email);
   const created = await agent
     .post('/api/rigs')
-    .set('Origin', TEST_ORIGIN)
     .send({ name: 'Margin van', vehicle: 'test', power: { ...POWER, plannedStayDays: 1 }, loads: [{ name: 'Fridge', supply: 'dc', watts: 45, dutyPercent: 35, hoursPerDay: 24 }] })
     .expect(201);
   rigId = created.body.id;
@@ -39,11 +36,7 @@ beforeAll(async () => {
   await ctx.auth.api.addMember({ body: { userId: member.id, role: 'member', organizationId: householdId } });
   // The member hears only of Short.
   const memberAgent = await signIn(ctx.app, member.email);
-  await memberAgent.put('/api/me/email-prefs').set('Origin', TEST_ORIGIN).send({ reportsOn: false, reportWeekday: 6, reportHour: 18, timeZone: 'UTC', warningsOn: true, warnAt: 'short', noteEmailsOn: false }).expect(200);
-});
-afterAll(async () => {
-  await ctx.jobs.stop();
-  await ctx.db.destroy();
+  await memberAgent.put('/api/me/email-prefs').send({ reportsOn: false, reportWeekday: 6, reportHour: 18, timeZone: 'UTC', warningsOn: true, warnAt: 'short', noteEmailsOn: false }).expect(200);
 });
 
 describe('low-margin warnings', () => {

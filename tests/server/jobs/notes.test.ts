@@ -1,22 +1,11 @@
 import { sql } from 'kysely';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 
-import { householdFixture } from '../helpers';
-import { makeTestApp, TEST_ORIGIN } from '../test-app';
+import { withHousehold } from '../fixtures';
 import { mailsTo, waitFor } from './helpers';
 
-let ctx: Awaited<ReturnType<typeof makeTestApp>>;
-let fx: Awaited<ReturnType<typeof householdFixture>>;
 
-beforeAll(async () => {
-  ctx = await makeTestApp({ RUN_WORKERS: 'true' });
-  await ctx.jobs.start({ workers: true });
-  fx = await householdFixture(ctx);
-});
-afterAll(async () => {
-  await ctx.jobs.stop();
-  await ctx.db.destroy();
-});
+const { ctx, fx } = withHousehold({ workers: true });
 
 const schema = () => ctx.config.JOBS_SCHEMA;
 const waiting = async () =>
@@ -28,7 +17,7 @@ const noteMails = async (email: string) => (await mailsTo(email)).filter((m) => 
 describe('note e-mails', () => {
   it('gathers three notes within ten minutes into one e-mail for each person on the other side', async () => {
     for (const body of ['Fridge duty looks high.', 'Is the inverter on all night?', 'Fit a cut-off switch near the battery.']) {
-      await fx.agents.advisor.post(`/api/rigs/${fx.rigId}/notes`).set('Origin', TEST_ORIGIN).send({ body }).expect(201);
+      await fx.agents.advisor.post(`/api/rigs/${fx.rigId}/notes`).send({ body }).expect(201);
     }
     // One waiting job per person and rig: the owner and the member (the advisor wrote them).
     expect((await waiting()).sort()).toEqual([`${fx.users.member.id}:${fx.rigId}`, `${fx.users.owner.id}:${fx.rigId}`].sort());
@@ -43,11 +32,10 @@ describe('note e-mails', () => {
   it('tells the advisor of the household’s reply, and sends nothing to someone who turned it off', async () => {
     await fx.agents.member
       .put('/api/me/email-prefs')
-      .set('Origin', TEST_ORIGIN)
       .send({ reportsOn: false, reportWeekday: 6, reportHour: 18, timeZone: 'UTC', warningsOn: false, warnAt: 'tight', noteEmailsOn: false })
       .expect(200);
-    await fx.agents.owner.post(`/api/rigs/${fx.rigId}/notes`).set('Origin', TEST_ORIGIN).send({ body: 'Switch ordered.' }).expect(201);
-    await fx.agents.advisor.post(`/api/rigs/${fx.rigId}/notes`).set('Origin', TEST_ORIGIN).send({ body: 'Good, send a photo.' }).expect(201);
+    await fx.agents.owner.post(`/api/rigs/${fx.rigId}/notes`).send({ body: 'Switch ordered.' }).expect(201);
+    await fx.agents.advisor.post(`/api/rigs/${fx.rigId}/notes`).send({ body: 'Good, send a photo.' }).expect(201);
     await tenMinutesLater();
     const toAdvisor = await waitFor(async () => (await noteMails(fx.users.advisor.email))[0], 15_000, 'the advisor’s note e-mail');
     expect(toAdvisor.subject).toBe('A new note on Fixture van');

@@ -1,13 +1,12 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
 
 import { figuresOfRigs } from '@/server/jobs/figures';
 import { checkMargin } from '@/server/jobs/margin';
 import { sendReport } from '@/server/jobs/reports';
+import { withTestApp } from '../fixtures';
 import { signIn, verifiedUser, WREN_POWER } from '../helpers';
-import { makeTestApp, TEST_ORIGIN } from '../test-app';
 import { mailsTo, waitFor } from './helpers';
 
-let ctx: Awaited<ReturnType<typeof makeTestApp>>;
 let owner: { id: string; email: string };
 let agent: Awaited<ReturnType<typeof signIn>>;
 let rigId: string;
@@ -25,27 +24,21 @@ const TRIP = {
   ],
 };
 
+const ctx = withTestApp({ workers: true });
 beforeAll(async () => {
-  ctx = await makeTestApp({ RUN_WORKERS: 'true' });
-  await ctx.jobs.start({ workers: true });
   owner = await verifiedUser(ctx, 'trip-owner');
   agent = await signIn(ctx.app, owner.email);
   const created = await agent
     .post('/api/rigs')
-    .set('Origin', TEST_ORIGIN)
     .send({ name: 'Trip van', vehicle: 'test', power: POWER, loads: [{ name: 'Fridge', supply: 'dc', watts: 45, dutyPercent: 35, hoursPerDay: 24 }] })
     .expect(201);
   rigId = created.body.id;
-});
-afterAll(async () => {
-  await ctx.jobs.stop();
-  await ctx.db.destroy();
 });
 
 describe('e-mails that follow the active trip', () => {
   it('warns that the stay at the lake ends Short, naming the trip and each stay', async () => {
     expect((await checkMargin(ctx, rigId)).state).toBe('comfortable');
-    await agent.post(`/api/rigs/${rigId}/trips`).set('Origin', TEST_ORIGIN).send(TRIP).expect(201);
+    await agent.post(`/api/rigs/${rigId}/trips`).send(TRIP).expect(201);
     await checkMargin(ctx, rigId);
     const mail = await waitFor(async () => (await mailsTo(owner.email)).find((m) => /: margin Short/.test(m.subject)), 15_000, 'the trip warning');
     expect(mail.text).toContain('on the trip “Lake week”');

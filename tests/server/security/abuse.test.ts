@@ -1,38 +1,30 @@
 import { sql } from 'kysely';
 import request from 'supertest';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 
 import { QUEUES } from '@/server/jobs/types';
-import { householdFixture, latestMailTo, signIn, uniqueEmail, verifiedUser } from '../helpers';
+import { withHousehold } from '../fixtures';
+import { agentFor, latestMailTo, signIn, uniqueEmail, verifiedUser } from '../helpers';
 import { mailsTo, waitFor } from '../jobs/helpers';
 import { makeTestApp, TEST_ORIGIN } from '../test-app';
 
-let ctx: Awaited<ReturnType<typeof makeTestApp>>;
-let fx: Awaited<ReturnType<typeof householdFixture>>;
-beforeAll(async () => {
-  ctx = await makeTestApp({ INVITES_PER_INVITER_PER_HOUR: '3', INVITES_PER_HOUSEHOLD_PER_DAY: '5', RATE_LIMIT_PER_MINUTE: '4' });
-  fx = await householdFixture(ctx);
-});
-afterAll(async () => {
-  await ctx.jobs.stop();
-  await ctx.db.destroy();
-});
+const { ctx, fx } = withHousehold({ env: { INVITES_PER_INVITER_PER_HOUR: '3', INVITES_PER_HOUSEHOLD_PER_DAY: '5', RATE_LIMIT_PER_MINUTE: '4' } });
 
 describe('invitations and names are bounded (issue 15, item 4)', () => {
   it('caps names at 80 characters on better-auth’s routes, naming the field', async () => {
     const long = 'N'.repeat(100_000);
-    const signUp = await request(ctx.app).post('/api/auth/sign-up/email').set('Origin', TEST_ORIGIN).send({ name: long, email: uniqueEmail('long'), password: 'a-long-test-password' });
+    const signUp = await agentFor(ctx.app).post('/api/auth/sign-up/email').send({ name: long, email: uniqueEmail('long'), password: 'a-long-test-password' });
     expect(signUp.status).toBe(400);
     expect(signUp.body.message).toMatch(/^name: use at most 80 characters/);
-    const rename = await fx.agents.member.post('/api/auth/update-user').set('Origin', TEST_ORIGIN).send({ name: 'N'.repeat(81) });
+    const rename = await fx.agents.member.post('/api/auth/update-user').send({ name: 'N'.repeat(81) });
     expect(rename.status).toBe(400);
-    await fx.agents.member.post('/api/auth/update-user').set('Origin', TEST_ORIGIN).send({ name: 'N'.repeat(80) }).expect(200);
+    await fx.agents.member.post('/api/auth/update-user').send({ name: 'N'.repeat(80) }).expect(200);
     // In the server too (the household a rig makes is named from the rig's name, itself at most 60).
     await expect(ctx.auth.api.createOrganization({ body: { name: 'H'.repeat(81), slug: `long-${Date.now()}`, userId: fx.users.owner.id } })).rejects.toThrow(/at most 80/);
   });
 
   it('limits invitation e-mails per inviter (an hour) and per household (a day): 429 with the time to wait', async () => {
-    const invite = (agent: typeof fx.agents.owner) => agent.post(`/api/rigs/${fx.rigId}/invitations`).set('Origin', TEST_ORIGIN).send({ email: uniqueEmail('invitee'), role: 'member' });
+    const invite = (agent: typeof fx.agents.owner) => agent.post(`/api/rigs/${fx.rigId}/invitations`).send({ email: uniqueEmail('invitee'), role: 'member' });
     const statuses: number[] = [];
     let last: request.Response | null = null;
     for (let i = 0; i < 4; i++) statuses.push((last = await invite(fx.agents.owner)).status);
@@ -42,7 +34,7 @@ describe('invitations and names are bounded (issue 15, item 4)', () => {
     expect(last!.body).toMatchObject({ code: 'rate_limited', retryAfterSeconds: Number(last!.headers['retry-after']) });
     // A resend counts too.
     const pending = (await fx.agents.owner.get(`/api/rigs/${fx.rigId}/people`)).body.invitations[0].id;
-    await fx.agents.owner.post(`/api/rigs/${fx.rigId}/invitations/${pending}/resend`).set('Origin', TEST_ORIGIN).expect(429);
+    await fx.agents.owner.post(`/api/rigs/${fx.rigId}/invitations/${pending}/resend`).expect(429);
 
     // A second owner of the same household has an hour of their own, but the household's day runs out at 5.
     const coOwner = await verifiedUser(ctx, 'co-owner');
@@ -61,7 +53,7 @@ describe('invitations and names are bounded (issue 15, item 4)', () => {
 describe('forgot-password answers alike for known and unknown addresses (issue 15, item 5)', () => {
   it('queues the e-mail instead of sending it in the request: the answer does not wait on SMTP', async () => {
     const known = await verifiedUser(ctx, 'forgot');
-    const ask = (email: string) => request(ctx.app).post('/api/auth/request-password-reset').set('Origin', TEST_ORIGIN).send({ email, redirectTo: `${TEST_ORIGIN}/reset-password` });
+    const ask = (email: string) => agentFor(ctx.app).post('/api/auth/request-password-reset').send({ email, redirectTo: `${TEST_ORIGIN}/reset-password` });
     const timed = async (email: string) => {
       const started = performance.now();
       const res = await ask(email);

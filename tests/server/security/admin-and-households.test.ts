@@ -1,19 +1,11 @@
 import { sql } from 'kysely';
 import request from 'supertest';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 
-import { householdFixture, PASSWORD, signIn, verifiedUser } from '../helpers';
-import { makeTestApp, TEST_ORIGIN } from '../test-app';
+import { withHousehold } from '../fixtures';
+import { PASSWORD, signIn, verifiedUser } from '../helpers';
 
-let ctx: Awaited<ReturnType<typeof makeTestApp>>;
-let fx: Awaited<ReturnType<typeof householdFixture>>;
-beforeAll(async () => {
-  ctx = await makeTestApp();
-  fx = await householdFixture(ctx);
-});
-afterAll(async () => {
-  await ctx.db.destroy();
-});
+const { ctx, fx } = withHousehold();
 
 const sessionsOf = async (userId: string) => (await sql<{ n: number }>`select count(*)::int as n from session where "userId" = ${userId}`.execute(ctx.db)).rows[0].n;
 
@@ -23,7 +15,7 @@ describe('an admin is limited to accounts (issue 15, item 2)', () => {
     const victim = fx.users.owner.id;
     const listed = await admin.get('/api/auth/admin/list-users').expect(200);
     expect(listed.body.users.length).toBeGreaterThan(0);
-    await admin.post('/api/auth/admin/set-role').set('Origin', TEST_ORIGIN).send({ userId: fx.users.outsider.id, role: 'traveller' }).expect(200);
+    await admin.post('/api/auth/admin/set-role').send({ userId: fx.users.outsider.id, role: 'traveller' }).expect(200);
 
     const refused: [string, string, object?][] = [
       ['POST', '/admin/impersonate-user', { userId: victim }],
@@ -43,7 +35,7 @@ describe('an admin is limited to accounts (issue 15, item 2)', () => {
     ];
     const sessionsBefore = await sessionsOf(victim);
     for (const [method, path, body] of refused) {
-      const res = method === 'GET' ? await admin.get(`/api/auth${path}`) : await admin.post(`/api/auth${path}`).set('Origin', TEST_ORIGIN).send(body ?? {});
+      const res = method === 'GET' ? await admin.get(`/api/auth${path}`) : await admin.post(`/api/auth${path}`).send(body ?? {});
       expect([path, res.status]).toEqual([path, 403]);
     }
     // Nothing happened to the account: same sessions, same password, same name, not banned.
@@ -95,14 +87,14 @@ describe('household changes go through the app and its History (issue 15, item 1
       ['/organization/set-active', { organizationId: fx.householdId }],
     ];
     for (const [path, body] of writes) {
-      const res = await fx.agents.owner.post(`/api/auth${path}`).set('Origin', TEST_ORIGIN).send(body);
+      const res = await fx.agents.owner.post(`/api/auth${path}`).send(body);
       expect([path, res.status]).toEqual([path, 403]);
     }
     const extraAgent = await signIn(ctx.app, extra.email);
-    await extraAgent.post('/api/auth/organization/leave').set('Origin', TEST_ORIGIN).send({ organizationId: fx.householdId }).expect(403);
+    await extraAgent.post('/api/auth/organization/leave').send({ organizationId: fx.householdId }).expect(403);
     expect(await ctx.db.selectFrom('member').select('id').where('id', '=', member!.id).executeTakeFirst()).toBeTruthy();
 
-    await fx.agents.owner.delete(`/api/rigs/${fx.rigId}/members/${member!.id}`).set('Origin', TEST_ORIGIN).expect(204);
+    await fx.agents.owner.delete(`/api/rigs/${fx.rigId}/members/${member!.id}`).expect(204);
     const history = (await fx.agents.owner.get(`/api/rigs/${fx.rigId}/history`).expect(200)).body.history;
     expect(history[0]).toMatchObject({ kind: 'member-removed', actor: { id: fx.users.owner.id } });
     expect(history[0].summary).toContain('Extra');

@@ -1,24 +1,17 @@
 import { HeadObjectCommand, S3Client } from '@aws-sdk/client-s3';
 import sharp from 'sharp';
 import request from 'supertest';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 
 import { unsubscribeToken } from '@/server/emails/unsubscribe';
 import { figuresOfRigs } from '@/server/jobs/figures';
 import { sendReport } from '@/server/jobs/reports';
-import { householdFixture, signIn, WREN_POWER } from '../helpers';
+import { withHousehold } from '../fixtures';
+import { agentFor, signIn, WREN_POWER } from '../helpers';
 import { mailsTo } from '../jobs/helpers';
-import { makeTestApp, TEST_ORIGIN } from '../test-app';
+import { TEST_ORIGIN } from '../test-app';
 
-let ctx: Awaited<ReturnType<typeof makeTestApp>>;
-let fx: Awaited<ReturnType<typeof householdFixture>>;
-beforeAll(async () => {
-  ctx = await makeTestApp();
-  fx = await householdFixture(ctx);
-});
-afterAll(async () => {
-  await ctx.db.destroy();
-});
+const { ctx, fx } = withHousehold();
 
 describe('e-mails on the Reports screen carry no personal link (issue 15, item 3)', () => {
   it('shows the household the owner’s report without the owner’s unsubscribe link; links expire', async () => {
@@ -43,7 +36,7 @@ describe('e-mails on the Reports screen carry no personal link (issue 15, item 3
     expect(`${kept.html}${kept.text}`).not.toMatch(/token=/);
 
     // The owner's own link works; one issued 61 days ago has expired (410), one altered is refused (400).
-    await request(ctx.app).post(`/api/email/unsubscribe?token=${link![1]}`).set('Origin', TEST_ORIGIN).expect(200);
+    await agentFor(ctx.app).post(`/api/email/unsubscribe?token=${link![1]}`).expect(200);
     const old = unsubscribeToken(ctx.config.AUTH_SECRET, fx.users.owner.id, 'warnings', new Date(Date.now() - 61 * 86_400_000));
     const expired = await request(ctx.app).get(`/api/email/unsubscribe?token=${old}`).expect(410);
     expect(expired.body.fields[0].path).toBe('token');
@@ -60,28 +53,28 @@ describe('a rig’s stored objects go with it (issue 15, item 6)', () => {
       .catch((err) => (err.$metadata?.httpStatusCode === 404 ? false : Promise.reject(err)));
 
   it('deletes every log, photo and thumbnail of a deleted rig, and the objects of a removed upload', async () => {
-    const rigId = (await fx.agents.owner.post('/api/rigs').set('Origin', TEST_ORIGIN).send({ name: 'Short-lived', householdId: fx.householdId, power: WREN_POWER }).expect(201)).body.id;
+    const rigId = (await fx.agents.owner.post('/api/rigs').send({ name: 'Short-lived', householdId: fx.householdId, power: WREN_POWER }).expect(201)).body.id;
     const csv = Buffer.from('time,volts\n2026-11-20T18:00:00Z,12.6\n');
     const png = await sharp({ create: { width: 8, height: 8, channels: 3, background: '#17324A' } }).png().toBuffer();
-    const upload = (agent = fx.agents.owner) => agent.post(`/api/rigs/${rigId}/uploads`).set('Origin', TEST_ORIGIN).field('mapping', JSON.stringify({ time: 'time', voltage: 'volts' })).attach('file', csv, 'log.csv').expect(201);
+    const upload = (agent = fx.agents.owner) => agent.post(`/api/rigs/${rigId}/uploads`).field('mapping', JSON.stringify({ time: 'time', voltage: 'volts' })).attach('file', csv, 'log.csv').expect(201);
     await upload();
     const removed = (await upload(fx.agents.member)).body.upload.id;
-    await fx.agents.member.post(`/api/rigs/${rigId}/photos`).set('Origin', TEST_ORIGIN).attach('file', png, 'dot.png').expect(201);
+    await fx.agents.member.post(`/api/rigs/${rigId}/photos`).attach('file', png, 'dot.png').expect(201);
     const rows = await ctx.db.selectFrom('uploads').select(['id', 'object_key', 'thumb_key']).where('rig_id', '=', rigId).execute();
     const keys = rows.flatMap((r) => [r.object_key, r.thumb_key]).filter((k): k is string => !!k);
     expect(keys).toHaveLength(4);
     for (const key of keys) expect(await exists(key)).toBe(true);
 
-    await fx.agents.owner.delete(`/api/rigs/${rigId}/uploads/${removed}`).set('Origin', TEST_ORIGIN).expect(204);
+    await fx.agents.owner.delete(`/api/rigs/${rigId}/uploads/${removed}`).expect(204);
     expect(await exists(rows.find((r) => r.id === removed)!.object_key)).toBe(false);
-    await fx.agents.owner.delete(`/api/rigs/${rigId}`).set('Origin', TEST_ORIGIN).expect(204);
+    await fx.agents.owner.delete(`/api/rigs/${rigId}`).expect(204);
     for (const key of keys) expect([key, await exists(key)]).toEqual([key, false]);
   });
 
   it('finds the local store as open as docs/security.md says (production needs a private bucket)', async () => {
     const anonymousList = await fetch(`${ctx.config.S3_ENDPOINT}/${ctx.config.S3_BUCKET}?max-keys=1`);
     expect(anonymousList.status).toBe(200);
-    const photo = (await fx.agents.owner.post(`/api/rigs/${fx.rigId}/photos`).set('Origin', TEST_ORIGIN).attach('file', await sharp({ create: { width: 8, height: 8, channels: 3, background: '#F6F3EC' } }).png().toBuffer(), 'dot.png').expect(201)).body.id;
+    const photo = (await fx.agents.owner.post(`/api/rigs/${fx.rigId}/photos`).attach('file', await sharp({ create: { width: 8, height: 8, channels: 3, background: '#F6F3EC' } }).png().toBuffer(), 'dot.png').expect(201)).body.id;
     const signed = new URL((await fx.agents.owner.get(`/api/rigs/${fx.rigId}/photos/${photo}`).expect(200)).body.url);
     expect((await fetch(signed)).status).toBe(200);
     signed.searchParams.set('X-Amz-Signature', '0'.repeat(64));
@@ -92,10 +85,10 @@ describe('a rig’s stored objects go with it (issue 15, item 6)', () => {
 describe('reads after sign-out (issue 15, item 7)', () => {
   it('shuts a copied cookie out at once after sign-out, though its signed cache is still young', async () => {
     const agent = await signIn(ctx.app, fx.users.member.email);
-    const copied = (await request(ctx.app).post('/api/auth/sign-in/email').set('Origin', TEST_ORIGIN).send({ email: fx.users.member.email, password: 'a-long-test-password' })).headers['set-cookie'] as unknown as string[];
+    const copied = (await agentFor(ctx.app).post('/api/auth/sign-in/email').send({ email: fx.users.member.email, password: 'a-long-test-password' })).headers['set-cookie'] as unknown as string[];
     const cookie = copied.map((c) => c.split(';')[0]).join('; ');
     await request(ctx.app).get(`/api/rigs/${fx.rigId}`).set('Cookie', cookie).expect(200);
-    await request(ctx.app).post('/api/auth/sign-out').set('Origin', TEST_ORIGIN).set('Cookie', cookie).expect(200);
+    await agentFor(ctx.app).post('/api/auth/sign-out').set('Cookie', cookie).expect(200);
     // The signed cookie cache (session_data) is still within its age, yet reads are refused.
     await request(ctx.app).get(`/api/rigs/${fx.rigId}`).set('Cookie', cookie).expect(401);
     await request(ctx.app).get(`/api/rigs/${fx.rigId}/outlook`).set('Cookie', cookie).expect(401);

@@ -3,12 +3,13 @@ import { mkdtempSync, readFileSync, statSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import request from 'supertest';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 
 import { unsubscribeToken } from '@/server/emails/unsubscribe';
 import { DEFAULT_AUTH_SECRET, localAuthSecret } from '@/server/security/secrets';
-import { verifiedUser } from '../helpers';
-import { makeTestApp, TEST_ORIGIN } from '../test-app';
+import { withTestApp } from '../fixtures';
+import { agentFor, verifiedUser } from '../helpers';
+import { makeTestApp } from '../test-app';
 
 /** Runs a command to its end: exit code and everything it printed. */
 function run(cmd: string, args: string[], env: Record<string, string>) {
@@ -22,13 +23,7 @@ function run(cmd: string, args: string[], env: Record<string, string>) {
 }
 
 const secret = localAuthSecret(join(mkdtempSync(join(tmpdir(), 'keyoff-secret-')), 'auth-secret'));
-let ctx: Awaited<ReturnType<typeof makeTestApp>>;
-beforeAll(async () => {
-  ctx = await makeTestApp({ AUTH_SECRET: secret });
-});
-afterAll(async () => {
-  await ctx.db.destroy();
-});
+const ctx = withTestApp({ env: { AUTH_SECRET: secret } });
 
 describe('our own secret (issue 15, item 1)', () => {
   it('makes a random secret on first run in a file only its owner can read, and keeps it', async () => {
@@ -62,7 +57,7 @@ describe('our own secret (issue 15, item 1)', () => {
     expect(refused.body.fields[0].path).toBe('token');
     // A session cookie from a server on the default secret does not open this one.
     const other = await makeTestApp();
-    const elsewhere = await request(other.app).post('/api/auth/sign-in/email').set('Origin', TEST_ORIGIN).send({ email: user.email, password: 'a-long-test-password' }).expect(200);
+    const elsewhere = await agentFor(other.app).post('/api/auth/sign-in/email').send({ email: user.email, password: 'a-long-test-password' }).expect(200);
     const cookie = (elsewhere.headers['set-cookie'] as unknown as string[]).map((c) => c.split(';')[0]).join('; ');
     await request(other.app).get('/api/me').set('Cookie', cookie).expect(200);
     await request(ctx.app).get('/api/me').set('Cookie', cookie).expect(401);
