@@ -1,3 +1,4 @@
+import type { Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
 
 import { CIRCUIT_LABELS as L } from '@/shared/schemas/circuit';
