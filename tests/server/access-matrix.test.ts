@@ -1,4 +1,3 @@
-import type { Express } from 'express';
 import type { Test } from 'supertest';
 import sharp from 'sharp';
 import request from 'supertest';
@@ -6,6 +5,7 @@ import { describe, expect, it } from 'vitest';
 
 import { unsubscribeToken } from '@/server/emails/unsubscribe';
 import { authMatrix } from './auth-matrix';
+import { listRoutes } from './list-routes';
 import { withHousehold } from './fixtures';
 import { agentFor, TRIP_PLAN, uniqueEmail, WREN_POWER } from './helpers';
 
@@ -15,21 +15,6 @@ const ROLES: Role[] = ['anonymous', 'outsider', 'advisor', 'member', 'owner', 'a
 
 const { ctx, fx } = withHousehold();
 
-/** Every route the API has, as Express holds them: method and full path. */
-function listRoutes(app: Express): string[] {
-  const out: string[] = [];
-  const walk = (stack: any[], prefix: string) => {
-    for (const layer of stack) {
-      if (layer.route) {
-        for (const method of Object.keys(layer.route.methods)) out.push(`${method.toUpperCase()} ${prefix}${layer.route.path}`);
-      } else if (layer.handle?.stack) {
-        walk(layer.handle.stack, prefix + (layer.rawPath ?? ''));
-      }
-    }
-  };
-  walk((app as any).router.stack, '');
-  return out.filter((r) => r.includes(' /api/') && !r.includes('/api/auth/'));
-}
 
 type Ctx = { rigId: string };
 type Entry = {

@@ -6,6 +6,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 
 import { ENDPOINTS } from '@/server/openapi';
 import { apiMarkdown } from '@/server/openapi/markdown';
+import { listRoutes } from './list-routes';
 import { makeTestApp } from './test-app';
 
 let ctx: Awaited<ReturnType<typeof makeTestApp>>;
@@ -18,20 +19,7 @@ afterAll(async () => {
 
 /** Every route Express serves under /api (better-auth's aside), as "GET /api/rigs/{rigId}". */
 function expressRoutes(app: Express): string[] {
-  const out: string[] = [];
-  const walk = (stack: any[], prefix: string) => {
-    for (const layer of stack) {
-      if (layer.route) {
-        for (const method of Object.keys(layer.route.methods)) out.push(`${method.toUpperCase()} ${prefix}${layer.route.path}`);
-      } else if (layer.handle?.stack) {
-        walk(layer.handle.stack, prefix + (layer.rawPath ?? ''));
-      }
-    }
-  };
-  walk((app as any).router.stack, '');
-  return out
-    .filter((r) => r.includes(' /api/') && !r.includes('/api/auth/'))
-    .map((r) => r.replace(/\/$/, '').replace(/:(\w+)/g, '{$1}'));
+  return listRoutes(app).map((r) => r.replace(/\/$/, '').replace(/:(\w+)/g, '{$1}'));
 }
 
 describe('the endpoint registry', () => {
