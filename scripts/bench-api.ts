@@ -13,7 +13,7 @@ import autocannon from 'autocannon';
 import express from 'express';
 import { pino } from 'pino';
 
-import { launchChromium } from '@/tests/e2e/browser';
+import { launchChromium } from '@/tests/e2e/chromium';
 import { record } from './bench-results';
 
 import { createApp } from '@/server/app';

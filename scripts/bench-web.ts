@@ -21,7 +21,7 @@ import { loadConfig } from '@/server/config';
 import { createContext } from '@/server/context';
 import { migrateAll } from '@/server/migrate';
 import { WREN } from '@/shared/demo/scenario';
-import { launchChromium, PHONE } from '@/tests/e2e/browser';
+import { launchChromium, PHONE } from '@/tests/e2e/chromium';
 import { record } from './bench-results';
 
 const THROTTLE = { offline: false, latency: 150, downloadThroughput: 1_600_000 / 8, uploadThroughput: 750_000 / 8 };

@@ -1,33 +1,16 @@
 import { mkdirSync } from 'node:fs';
 import path from 'node:path';
-import { type Browser, type BrowserContextOptions, chromium, type Locator, type Page } from 'playwright-core';
+import type { Browser, BrowserContextOptions, Locator, Page } from 'playwright-core';
 import sharp from 'sharp';
 import { afterAll, beforeAll, expect } from 'vitest';
 
 import { colors } from '@/shared/theme';
+import { launchChromium } from './chromium';
 
 export const BASE = process.env.E2E_BASE ?? `http://127.0.0.1:${process.env.E2E_PORT ?? 8091}`;
 export const SHOTS = path.resolve('test-results/screenshots');
 
-/** Debian's chromium, headless, with none of its background traffic; playwright gives each launch a fresh profile. */
-export function launchChromium(): Promise<Browser> {
-  return chromium.launch({
-    executablePath: '/usr/bin/chromium',
-    args: [
-      '--headless',
-      '--no-sandbox',
-      '--disable-gpu',
-      '--disable-quic',
-      '--no-first-run',
-      '--disable-background-networking',
-      '--disable-component-update',
-      '--disable-sync',
-    ],
-  });
-}
-
-export const PHONE = { width: 390, height: 844 };
-export const WIDE = { width: 1280, height: 800 };
+export { launchChromium, PHONE, WIDE } from './chromium';
 
 /** Signs in through the sign-in screen and waits for the rigs (home) screen. */
 export async function signInAs(page: import('playwright-core').Page, email: string, password = 'keyoff-demo-2026') {
