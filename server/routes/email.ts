@@ -1,6 +1,6 @@
 import { Router } from 'express';
 
-import { unsubscribeQuerySchema } from '@/shared/schemas/email-prefs';
+import { unsubscribedSchema, unsubscribeQuerySchema } from '@/shared/api/email';
 import type { AppContext } from '../context';
 import { esc } from '../emails/escape';
 import { LIST_NAME } from '../emails/unsubscribe';
@@ -24,9 +24,9 @@ export function emailRouter({ db, config }: AppContext) {
 <h1 style="font-size:22px">${esc(title(LIST_NAME[who.list]))} are off</h1>
 <p>You will get no more ${esc(LIST_NAME[who.list])} from Keyoff. You can turn them back on in <a href="${esc(config.KEYOFF_URL)}/settings">Settings</a>.</p></body></html>`);
   }));
-  router.post('/unsubscribe', handler({ query: unsubscribeQuerySchema }, async ({ query, res }) => {
+  router.post('/unsubscribe', handler({ query: unsubscribeQuerySchema, response: unsubscribedSchema }, async ({ query }) => {
     const who = await handle(query.token);
-    res.json({ list: who.list, on: false });
+    return { list: who.list, on: false as const };
   }));
   return router;
 }

@@ -2,13 +2,14 @@ import { Router } from 'express';
 import { sql } from 'kysely';
 
 import type { Db } from '@/db/client';
-import type { Health } from '@/shared/schemas/health';
+import { type Health, healthSchema } from '@/shared/api/health';
+import { handler } from '../http/handler';
 
 const started = Date.now();
 
 export function healthRouter(db: Db, version: string) {
   const router = Router();
-  router.get('/', async (_req, res) => {
+  router.get('/', handler({ response: healthSchema }, async ({ res }) => {
     const t0 = performance.now();
     let database: Health['database'];
     try {
@@ -23,7 +24,8 @@ export function healthRouter(db: Db, version: string) {
       version,
       uptimeS: Math.round((Date.now() - started) / 1000),
     };
-    res.status(database.connected ? 200 : 503).json(body);
-  });
+    res.status(database.connected ? 200 : 503);
+    return body;
+  }));
   return router;
 }

@@ -1,6 +1,8 @@
 import { Router } from 'express';
 
-import { historyEntryParamsSchema } from '@/shared/schemas/fix';
+import { historyEntryParamsSchema } from '@/shared/api/fixes';
+import { historySchema } from '@/shared/api/reports';
+import { rigVersionSchema } from '@/shared/api/rigs';
 import type { AppContext } from '../context';
 import { handler } from '../http/handler';
 import { rigAccess, rigOf } from '../middleware/rig-access';
@@ -13,13 +15,10 @@ export function historyRouter(ctx: AppContext) {
   const { db } = ctx;
   const router = Router({ mergeParams: true });
 
-  router.get('/history', rigAccess(db, { rig: ['read'] }), async (_req, res) => {
-    res.json({ history: await historyOf(db, rigOf(res).id) });
-  });
+  router.get('/history', rigAccess(db, { rig: ['read'] }), handler({ response: historySchema }, async ({ res }) => ({ history: await historyOf(db, rigOf(res).id) })));
 
-  router.post('/history/:entryId/undo', rigAccess(db, { rig: ['update'] }), handler({ params: historyEntryParamsSchema }, async ({ params, res }) => {
-    res.json(await undoFix(ctx, rigOf(res), actorOf(res), params.entryId));
-  }));
+  router.post('/history/:entryId/undo', rigAccess(db, { rig: ['update'] }), handler({ params: historyEntryParamsSchema, response: rigVersionSchema }, ({ params, res }) =>
+    undoFix(ctx, rigOf(res), actorOf(res), params.entryId)));
 
   return router;
 }

@@ -1,7 +1,7 @@
 import { Router } from 'express';
 import { fromNodeHeaders } from 'better-auth/node';
 
-import { invitationCreateSchema, invitationParamsSchema, memberParamsSchema, memberRoleSchema } from '@/shared/schemas/people';
+import { invitationCreateSchema, invitationParamsSchema, invitationSentSchema, memberParamsSchema, memberRoleSchema, peopleSchema } from '@/shared/api/people';
 import type { AppContext } from '../context';
 import { handler } from '../http/handler';
 import { rigAccess, rigOf } from '../middleware/rig-access';
@@ -16,38 +16,30 @@ export function peopleRouter(ctx: AppContext) {
   const headers = (req: { headers: Record<string, string | string[] | undefined> }) => fromNodeHeaders(req.headers);
   const me = (res: Parameters<typeof session>[0]) => session(res).user.id;
 
-  router.get('/people', rigAccess(db, { people: ['read'] }), async (_req, res) => {
-    res.json(await people.listPeople(db, rigOf(res).household_id));
-  });
+  router.get('/people', rigAccess(db, { people: ['read'] }), handler({ response: peopleSchema }, ({ res }) => people.listPeople(db, rigOf(res).household_id)));
 
-  router.post('/invitations', rigAccess(db, { people: ['manage'] }), handler({ body: invitationCreateSchema }, async ({ body, req, res }) => {
-    res.status(201).json(await people.invite(db, auth, headers(req), me(res), inviteLimits, rigOf(res).household_id, body.email, body.role));
-  }));
+  router.post('/invitations', rigAccess(db, { people: ['manage'] }), handler({ body: invitationCreateSchema, response: invitationSentSchema, status: 201 }, ({ body, req, res }) =>
+    people.invite(db, auth, headers(req), me(res), inviteLimits, rigOf(res).household_id, body.email, body.role)));
 
-  router.post('/invitations/:invitationId/resend', rigAccess(db, { people: ['manage'] }), handler({ params: invitationParamsSchema }, async ({ params, req, res }) => {
-    res.json(await people.resendInvitation(db, auth, headers(req), me(res), inviteLimits, rigOf(res).household_id, params.invitationId));
-  }));
+  router.post('/invitations/:invitationId/resend', rigAccess(db, { people: ['manage'] }), handler({ params: invitationParamsSchema, response: invitationSentSchema }, ({ params, req, res }) =>
+    people.resendInvitation(db, auth, headers(req), me(res), inviteLimits, rigOf(res).household_id, params.invitationId)));
 
-  router.delete('/invitations/:invitationId', rigAccess(db, { people: ['manage'] }), handler({ params: invitationParamsSchema }, async ({ params, req, res }) => {
+  router.delete('/invitations/:invitationId', rigAccess(db, { people: ['manage'] }), handler({ params: invitationParamsSchema, status: 204 }, async ({ params, req, res }) => {
     await people.revokeInvitation(db, auth, headers(req), rigOf(res).household_id, params.invitationId);
-    res.status(204).end();
   }));
 
-  router.patch('/members/:memberId', rigAccess(db, { people: ['manage'] }), handler({ params: memberParamsSchema, body: memberRoleSchema }, async ({ params, body, req, res }) => {
+  router.patch('/members/:memberId', rigAccess(db, { people: ['manage'] }), handler({ params: memberParamsSchema, body: memberRoleSchema, status: 204 }, async ({ params, body, req, res }) => {
     await people.changeRole(ctx, auth, headers(req), rigOf(res), params.memberId, body.role, actorOf(res));
-    res.status(204).end();
   }));
 
-  router.delete('/members/:memberId', rigAccess(db, { people: ['manage'] }), handler({ params: memberParamsSchema }, async ({ params, req, res }) => {
+  router.delete('/members/:memberId', rigAccess(db, { people: ['manage'] }), handler({ params: memberParamsSchema, status: 204 }, async ({ params, req, res }) => {
     await people.removePerson(ctx, auth, headers(req), rigOf(res), params.memberId, actorOf(res));
-    res.status(204).end();
   }));
 
-  router.post('/leave', rigAccess(db, { rig: ['read'] }), async (req, res) => {
+  router.post('/leave', rigAccess(db, { rig: ['read'] }), handler({ status: 204 }, async ({ req, res }) => {
     const rig = rigOf(res);
     await people.leave(ctx, auth, headers(req), rig, rig.role, actorOf(res));
-    res.status(204).end();
-  });
+  }));
 
   return router;
 }

@@ -1,7 +1,7 @@
 import { Router } from 'express';
 
-import { emailParamsSchema } from '@/shared/schemas/email-prefs';
-import { sheetQuerySchema } from '@/shared/schemas/rig';
+import { emailParamsSchema, sentEmailListSchema } from '@/shared/api/reports';
+import { sheetQuerySchema } from '@/shared/api/rigs';
 import type { AppContext } from '../context';
 import { HttpError } from '../errors';
 import { handler } from '../http/handler';
@@ -20,9 +20,7 @@ export function reportsRouter({ db, config }: AppContext) {
     res.set({ 'Content-Disposition': `attachment; filename="${filename}"`, 'Cache-Control': 'private, no-store' }).type('pdf').send(pdf);
   }));
 
-  router.get('/emails', rigAccess(db, { rig: ['read'] }), async (_req, res) => {
-    res.json({ emails: await reports.sentEmailsOf(db, rigOf(res).id) });
-  });
+  router.get('/emails', rigAccess(db, { rig: ['read'] }), handler({ response: sentEmailListSchema }, async ({ res }) => ({ emails: await reports.sentEmailsOf(db, rigOf(res).id) })));
 
   // The e-mail as it was sent, for the Reports screen's frame: its own strict policy, no scripts.
   router.get('/emails/:emailId', rigAccess(db, { rig: ['read'] }), handler({ params: emailParamsSchema }, async ({ params: { rigId, emailId }, res }) => {
@@ -34,13 +32,13 @@ export function reportsRouter({ db, config }: AppContext) {
   }));
 
   // The next weekly report, previewed (nothing is sent): a strict policy like a sent one, its chart inline.
-  router.get('/report-preview', rigAccess(db, { rig: ['read'] }), async (_req, res) => {
+  router.get('/report-preview', rigAccess(db, { rig: ['read'] }), handler({}, async ({ res }) => {
     const html = await reports.reportPreview(db, config, rigOf(res), actorOf(res));
     res
       .set({ 'Content-Security-Policy': "default-src 'none'; img-src data:; style-src 'unsafe-inline'; frame-ancestors 'self' " + config.TRUSTED_ORIGINS.join(' '), 'Cache-Control': 'private, no-store' })
       .type('html')
       .send(html);
-  });
+  }));
 
   router.get('/emails/:emailId/chart.png', rigAccess(db, { rig: ['read'] }), handler({ params: emailParamsSchema }, async ({ params: { rigId, emailId }, res }) => {
     const mail = await reports.sentEmail(db, rigId, emailId);

@@ -4,6 +4,8 @@ import './error-map';
 
 export const householdRoleSchema = z.enum(['owner', 'member', 'advisor']);
 export const accountRoleSchema = z.enum(['traveller', 'advisor', 'admin']);
+/** An account's role as better-auth stores it (a free string, none for a new account), read as one of ours. */
+export const accountRoleOf = (stored: string | null | undefined) => accountRoleSchema.catch('traveller').parse(stored);
 
 export const invitationCreateSchema = z.strictObject({
   email: z.email('Enter an e-mail address.').max(254).transform((e) => e.toLowerCase()),

@@ -4,9 +4,10 @@ import type { Express } from 'express';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 
+import type { ContractHandler } from '@/server/http/handler';
 import { ENDPOINTS } from '@/server/openapi';
 import { apiMarkdown } from '@/server/openapi/markdown';
-import { listRoutes } from './list-routes';
+import { listRoutes, servedRoutes } from './list-routes';
 import { makeTestApp } from './test-app';
 
 let ctx: Awaited<ReturnType<typeof makeTestApp>>;
@@ -17,9 +18,12 @@ afterAll(async () => {
   await ctx.db.destroy();
 });
 
+/** An Express path written the OpenAPI way: /api/rigs/:rigId/ → /api/rigs/{rigId}. */
+const openApiPath = (path: string) => path.replace(/\/$/, '').replace(/:(\w+)/g, '{$1}');
+
 /** Every route Express serves under /api (better-auth's aside), as "GET /api/rigs/{rigId}". */
 function expressRoutes(app: Express): string[] {
-  return listRoutes(app).map((r) => r.replace(/\/$/, '').replace(/:(\w+)/g, '{$1}'));
+  return listRoutes(app).map((r) => openApiPath(r));
 }
 
 describe('the endpoint registry', () => {
@@ -27,6 +31,21 @@ describe('the endpoint registry', () => {
     const registered = ENDPOINTS.map((e) => `${e.method.toUpperCase()} ${e.path}`);
     expect(new Set(registered).size).toBe(registered.length);
     expect(registered.sort()).toEqual(expressRoutes(ctx.app).sort());
+  });
+
+  it('shows the very schemas each route validates its request with and types its answer from', () => {
+    const entries = new Map(ENDPOINTS.map((e) => [`${e.method.toUpperCase()} ${e.path}`, e]));
+    for (const route of servedRoutes(ctx.app)) {
+      const key = `${route.method} ${openApiPath(route.path)}`;
+      const entry = entries.get(key)!;
+      const { contract } = route.last as Partial<ContractHandler>;
+      expect(contract, `${key} answers through handler()`).toBeDefined();
+      expect(contract!.body, `${key} body`).toBe(entry.body);
+      expect(contract!.query, `${key} query`).toBe(entry.query);
+      const [status, answer] = Object.entries(entry.responses).find(([s]) => Number(s) < 300)!;
+      expect(contract!.status ?? 200, `${key} status`).toBe(Number(status));
+      expect(contract!.response, `${key} response`).toBe(answer.schema);
+    }
   });
 
   it('names the path parameters each path has', () => {
