@@ -167,6 +167,8 @@ export interface RigMarginTable {
   falls: number;
   days_parked: number | null;
   checked_at: Timestamp;
+  /** The last check that saw the rig Comfortable (null: never, or before this column). */
+  comfortable_at: Timestamp | null;
 }
 
 export type EmailKind = 'report' | 'warning' | 'notes';

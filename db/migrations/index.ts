@@ -11,6 +11,7 @@ import * as m019 from './2026-12-02-019-history-undo';
 import * as m020 from './2026-12-02-020-trips';
 import * as m021 from './2026-12-03-021-unit-prefs';
 import * as m023 from './2026-12-03-023-cable-run-route-type';
+import * as m024 from './2026-12-03-024-margin-comfortable-at';
 
 // A static provider: file discovery fails under vitest, an explicit list works everywhere.
 export const migrations: Record<string, Migration> = {
@@ -25,4 +26,5 @@ export const migrations: Record<string, Migration> = {
   '2026-12-02-020-trips': m020,
   '2026-12-03-021-unit-prefs': m021,
   '2026-12-03-023-cable-run-route-type': m023,
+  '2026-12-03-024-margin-comfortable-at': m024,
 };

@@ -29,15 +29,17 @@ export async function checkMargin(deps: JobDeps, rigId: string) {
     const prev = await lockMargin(trx, rigId);
     const fell = prev.state === 'comfortable' && figures.marginState !== 'comfortable';
     const falls = prev.falls + (fell ? 1 : 0);
-    await saveMargin(trx, rigId, { state: figures.marginState, falls, daysParked: figures.daysParked, checkedAt: now });
-    return { prev, falls };
+    // Every check of one fall (one running beside it, a retry) tells of the changes since the rig was last Comfortable.
+    const comfortableAt = (prev.state === 'comfortable' ? prev.checked_at : prev.comfortable_at) as unknown as Date | null;
+    await saveMargin(trx, rigId, { state: figures.marginState, falls, daysParked: figures.daysParked, checkedAt: now, comfortableAt: figures.marginState === 'comfortable' ? now : comfortableAt });
+    return { prev, falls, comfortableAt };
   });
   if (figures.marginState === 'comfortable') return { state: figures.marginState, sent: 0 };
 
   const people = await warningRecipients(db, rigId);
   const wanted = people.filter((p) => p.warnAt === 'tight' || figures.marginState === 'short');
-  // What changed since the rig was last seen Comfortable (or since the last check).
-  const changes = (await listHistory(db, rigId, { since: transition.prev.checked_at as unknown as Date, limit: 5 })).filter((h) => h.kind.startsWith('load') || ['battery', 'inverter', 'charging', 'routine', 'stay'].includes(h.kind));
+  // What changed since the rig was last seen Comfortable (everything, for a rig never seen so).
+  const changes = (await listHistory(db, rigId, { since: transition.comfortableAt ?? new Date(0), limit: 5 })).filter((h) => h.kind.startsWith('load') || ['battery', 'inverter', 'charging', 'routine', 'stay'].includes(h.kind));
   let sent = 0;
   for (const person of wanted) {
     // Another check of this rig may be sending this very warning: it is its job then (and its retry's).

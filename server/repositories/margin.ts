@@ -12,6 +12,10 @@ export async function lockMargin(trx: Transaction<Database>, rigId: string) {
   return trx.selectFrom('rig_margin').selectAll().where('rig_id', '=', rigId).forUpdate().executeTakeFirstOrThrow();
 }
 
-export async function saveMargin(db: Exec, rigId: string, m: { state: MarginState; falls: number; daysParked: number | null; checkedAt: Date }) {
-  await db.updateTable('rig_margin').set({ state: m.state, falls: m.falls, days_parked: m.daysParked, checked_at: m.checkedAt }).where('rig_id', '=', rigId).execute();
+export async function saveMargin(db: Exec, rigId: string, m: { state: MarginState; falls: number; daysParked: number | null; checkedAt: Date; comfortableAt: Date | null }) {
+  await db
+    .updateTable('rig_margin')
+    .set({ state: m.state, falls: m.falls, days_parked: m.daysParked, checked_at: m.checkedAt, comfortable_at: m.comfortableAt })
+    .where('rig_id', '=', rigId)
+    .execute();
 }
