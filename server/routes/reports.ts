@@ -9,6 +9,7 @@ import { rigAccess, rigOf } from '../middleware/rig-access';
 import { actorOf } from '../middleware/session';
 import * as reports from '../services/reports';
 import { budgetSheet } from '../services/sheet';
+import { unitsOf } from '../services/units';
 
 /** /api/rigs/:rigId: what the rig's household reads or prints: the budget sheet, the e-mails sent, the next report. */
 export function reportsRouter({ db, config }: AppContext) {
@@ -16,7 +17,8 @@ export function reportsRouter({ db, config }: AppContext) {
 
   // The budget sheet: household only, like the Outlook it is made from.
   router.get('/sheet.pdf', rigAccess(db, { rig: ['read'] }), handler({ query: sheetQuerySchema }, async ({ query, res }) => {
-    const { pdf, filename } = await budgetSheet(db, rigOf(res), query.size);
+    const { energy } = await unitsOf(db, actorOf(res).id);
+    const { pdf, filename } = await budgetSheet(db, rigOf(res), query.size, energy);
     res.set({ 'Content-Disposition': `attachment; filename="${filename}"`, 'Cache-Control': 'private, no-store' }).type('pdf').send(pdf);
   }));
 

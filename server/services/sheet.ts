@@ -2,6 +2,7 @@ import type { Db } from '@/db/client';
 import { explainAssumptions } from '@/shared/energy/assumptions';
 import { project } from '@/shared/energy/project';
 import { routineOf } from '@/shared/routines';
+import type { EnergyUnit } from '@/shared/units';
 import type { RigAccess } from '../middleware/rig-access';
 import { svgToPng, weekChartSvg } from '../emails/chart';
 import { renderSheet, type SheetData, type SheetSize } from '../sheet/render';
@@ -23,8 +24,8 @@ async function hookUpPlanOf(db: Db, rig: RigAccess, hasInverter: boolean): Promi
   ];
 }
 
-/** The budget sheet of a rig as a PDF: the same model run as the Outlook, laid out for print. */
-export async function budgetSheet(db: Db, rig: RigAccess, size: SheetSize, now = new Date()): Promise<{ pdf: Buffer; filename: string }> {
+/** The budget sheet of a rig as a PDF: the same model run as the Outlook, laid out for print, its energy in the reader's unit. */
+export async function budgetSheet(db: Db, rig: RigAccess, size: SheetSize, energy: EnergyUnit, now = new Date()): Promise<{ pdf: Buffer; filename: string }> {
   const dto = await readRig(db, rig);
   const input = modelInput(dto.power, dto.loads);
   const p = project(input);
@@ -50,6 +51,7 @@ export async function budgetSheet(db: Db, rig: RigAccess, size: SheetSize, now =
     assumptions: explainAssumptions(dto.power, p.assumptions, p.horizonDays),
     chartPng,
     hookUp: await hookUpPlanOf(db, rig, dto.power.inverter !== null),
+    energy,
     madeAt: now,
   };
   const pdf = await renderSheet(data, size);

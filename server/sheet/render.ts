@@ -7,6 +7,7 @@ import type { Projection } from '@/shared/energy/project';
 import { FIX_WIRING_CAUTION, GENERAL_CAUTIONS, needsWiringCaution } from '@/shared/safety';
 import type { Load, RigPower } from '@/shared/schemas/projection';
 import { colors } from '@/shared/theme';
+import { type EnergyUnit, energyInText, formatEnergy } from '@/shared/units';
 
 const require_ = createRequire(__filename);
 const REGULAR = require_.resolve('@expo-google-fonts/nunito/400Regular/Nunito_400Regular.ttf');
@@ -23,6 +24,8 @@ export type SheetData = {
   chartPng: Buffer | null;
   /** The hook-up plan's lines where the rig has one (see hookUpPlanOf in services/sheet.ts). */
   hookUp: string[] | null;
+  /** The reader's energy unit: amp-hours, or watt-hours at the system voltage (shared/units.ts). */
+  energy: EnergyUnit;
   madeAt: Date;
 };
 
@@ -80,6 +83,8 @@ export function renderSheet(data: SheetData, size: SheetSize): Promise<Buffer> {
   };
 
   const { rig, projection: p } = data;
+  const energy = (ah: number, digits = 1) => formatEnergy(ah, data.energy, data.power.systemVoltage, digits);
+  const inText = (text: string) => energyInText(text, data.energy, data.power.systemVoltage);
   // Title and the headline figures.
   doc.font('bold').fontSize(22).fillColor(colors.night).text(`${rig.name}: budget sheet`, margin, margin, { width });
   para(`${rig.vehicle || 'Vehicle not given'} · ${rig.household} · version ${rig.version} · made ${data.madeAt.toISOString().slice(0, 16).replace('T', ' ')} UTC`, { color: colors.inkSoft });
@@ -94,7 +99,7 @@ export function renderSheet(data: SheetData, size: SheetSize): Promise<Buffer> {
       ['Days on your routine', p.routine.holds ? 'Holds: the week puts back what it uses' : days(p.routine.daysToCutoff, p.horizonDays)],
       [`Margin for a ${p.margin.plannedStayDays}-day stay`, `${STATE[p.margin.state]}${p.margin.days === null ? ' (the cut-off is beyond the horizon)' : ` (${p.margin.days >= 0 ? '+' : ''}${p.margin.days.toFixed(1)} days)`}`],
       ['Routine', `${data.routine.name}: ${data.routine.description}`],
-      ['A day', `${p.daily.consumptionAh.toFixed(1)} Ah used, ${p.daily.chargeAh.toFixed(1)} Ah put back`],
+      ['A day', `${energy(p.daily.consumptionAh)} used, ${energy(p.daily.chargeAh)} put back`],
       ['Cut-off', `${p.cutoffSocPercent} % state of charge`],
     ],
   );
@@ -135,26 +140,26 @@ export function renderSheet(data: SheetData, size: SheetSize): Promise<Buffer> {
         { title: 'Draw', share: 0.12, align: 'right' },
         { title: 'h/day', share: 0.1, align: 'right' },
         { title: 'Duty', share: 0.1, align: 'right' },
-        { title: 'Ah a day', share: 0.14, align: 'right' },
+        { title: `${data.energy} a day`, share: 0.14, align: 'right' },
         { title: 'Share', share: 0.14, align: 'right' },
       ],
-      installed.map(({ load, ahPerDay, share }) => [load.quantity > 1 ? `${load.name} ×${load.quantity}` : load.name, load.supply.toUpperCase(), draw(load), String(load.hoursPerDay), `${load.dutyPercent} %`, (ahPerDay ?? 0).toFixed(2), `${Math.round((share ?? 0) * 100)} %`]),
+      installed.map(({ load, ahPerDay, share }) => [load.quantity > 1 ? `${load.name} ×${load.quantity}` : load.name, load.supply.toUpperCase(), draw(load), String(load.hoursPerDay), `${load.dutyPercent} %`, energy(ahPerDay ?? 0, 2).replace(/ (Ah|Wh)$/, ''), `${Math.round((share ?? 0) * 100)} %`]),
     );
   } else para('No loads yet.');
-  para(`Standby a day: inverter idle ${p.standby.inverterIdleAh.toFixed(2)} Ah, key-off draw ${p.standby.keyOffAh.toFixed(2)} Ah, self-discharge ${p.standby.selfDischargeAh.toFixed(2)} Ah.`, { size: 9, color: colors.inkSoft });
+  para(`Standby a day: inverter idle ${energy(p.standby.inverterIdleAh, 2)}, key-off draw ${energy(p.standby.keyOffAh, 2)}, self-discharge ${energy(p.standby.selfDischargeAh, 2)}.`, { size: 9, color: colors.inkSoft });
   const candidates = data.loads.filter((l) => l.load.status === 'candidate');
   if (candidates.length) para(`Candidates, not counted above: ${candidates.map((c) => `${c.load.name} (${draw(c.load)}, ${c.load.hoursPerDay} h a day)`).join('; ')}.`, { size: 9 });
 
   if (p.warnings.length) {
     heading('Warnings');
-    p.warnings.forEach((w) => para(`▲ ${w.message}`, { color: colors.short }));
+    p.warnings.forEach((w) => para(`▲ ${inText(w.message)}`, { color: colors.short }));
   }
 
   heading('Fixes');
   if (!p.fixes.length) para('Nothing to fix: no change gains days.');
   p.fixes.forEach((f) => {
     para(`${FIX_TITLES[f.kind] ?? f.kind}: ${f.holds ? 'the routine holds' : `+${f.daysGainedRoutine.toFixed(1)} days on your routine`}${f.daysGainedParked > 0 ? `, +${f.daysGainedParked.toFixed(1)} days parked` : ''}`, { bold: true });
-    para(`${f.summary} Cost in convenience: ${f.convenience}`, { size: 9 });
+    para(inText(`${f.summary} Cost in convenience: ${f.convenience}`), { size: 9 });
     doc.moveDown(0.3);
   });
   if (needsWiringCaution(p.fixes)) para(FIX_WIRING_CAUTION, { size: 9, color: colors.tight });

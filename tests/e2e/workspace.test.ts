@@ -71,6 +71,18 @@ describe('the rig workspace', () => {
     await page.getByTestId('drains').getByText('Compressor fridge').waitFor();
     await shot(page, 'outlook-new-rig-wide');
 
+    // History states energy in the chosen unit too: the creation's battery in amp-hours, then in watt-hours.
+    await page.getByTestId('tab-History').click();
+    const created = page.getByTestId('history-rig-created');
+    expect(await created.textContent()).toMatch(/created the rig Kestrel \(\d+ Ah /);
+    await page.goto(BASE + '/settings');
+    const inWh = page.waitForResponse((r) => r.url().endsWith('/api/me/units') && r.request().method() === 'PUT');
+    await page.getByTestId('unit-energy-Wh').click();
+    expect((await inWh).status()).toBe(200);
+    await page.goBack();
+    await created.waitFor();
+    expect(await created.textContent()).toMatch(/created the rig Kestrel \([\d,]+ Wh /);
+
     // Deleting asks first, then the rig is gone.
     await page.getByTestId('tab-Power').click();
     await page.getByTestId('delete-rig').click();

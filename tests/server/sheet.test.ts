@@ -58,6 +58,27 @@ describe('GET /api/rigs/:rigId/sheet.pdf', () => {
     expect(text).toContain("The inverter maker's own fuse and cable instructions come first.");
   });
 
+  it("states energy in the reader's unit: watt-hours at the system voltage once the account chose them", async () => {
+    const outlook = (await fx.agents.owner.get(`/api/rigs/${wrenId}/outlook`)).body;
+    await fx.agents.owner.put('/api/me/units').send({ energy: 'Wh' }).expect(200);
+    try {
+      const res = await fx.agents.owner.get(`/api/rigs/${wrenId}/sheet.pdf`).buffer(true).parse(binary).expect(200);
+      const text = poppler('pdftotext', res.body).replace(/\s+/g, ' ');
+      // Wh = Ah × the nominal voltage (energy = charge × voltage); Wren is a 12 V rig.
+      const wh = (ah: number) => `${(ah * 12).toFixed(0)} Wh`;
+      expect(WREN.systemVoltage).toBe(12);
+      expect(text).toContain(`A day ${wh(outlook.daily.consumptionAh)} used, ${wh(outlook.daily.chargeAh)} put back`);
+      expect(text).toContain('Wh a day');
+      expect(text).toContain(`Standby a day: inverter idle ${wh(outlook.standby.inverterIdleAh)}`);
+      expect(text).not.toContain('Ah a day');
+    } finally {
+      await fx.agents.owner.put('/api/me/units').send({ energy: 'Ah' }).expect(200);
+    }
+    // Another reader of the same rig who never chose a unit reads amp-hours.
+    const member = poppler('pdftotext', (await fx.agents.member.get(`/api/rigs/${fx.rigId}/sheet.pdf`).buffer(true).parse(binary).expect(200)).body);
+    expect(member).toContain('Ah a day');
+  });
+
   it('prints on A4 by default and on Letter when asked', async () => {
     const a4 = await fx.agents.owner.get(`/api/rigs/${wrenId}/sheet.pdf`).buffer(true).parse(binary).expect(200);
     // ISO 216 A4 is 210 x 297 mm = 595.28 x 841.89 pt; US Letter is 8.5 x 11 in = 612 x 792 pt.

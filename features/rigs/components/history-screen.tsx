@@ -1,6 +1,7 @@
 import { ActivityIndicator, StyleSheet, Text, View } from 'react-native';
 
 import { formatDays, formatWhen } from '@/components/format';
+import { energyInText, useUnits } from '@/components/units';
 import { Body, Button, Card, Heading, Small } from '@/components/ui';
 import { colors, space, type } from '@/shared/theme';
 import { useHistoryQuery } from '../api/history';
@@ -13,6 +14,7 @@ export function HistoryScreen({ rigId }: { rigId: string }) {
   const outlook = useOutlookQuery(rigId);
   const rig = useRigQuery(rigId);
   const undo = useFixUndoMutation(rigId);
+  const { units } = useUnits();
   const horizon = outlook.data?.horizonDays ?? 14;
   if (history.isPending) return <ActivityIndicator color={colors.night} />;
   if (history.isError) return <Body style={{ color: colors.short }}>{history.error.message}</Body>;
@@ -28,7 +30,7 @@ export function HistoryScreen({ rigId }: { rigId: string }) {
           <View key={h.id} style={styles.row} testID={`history-${h.kind}`}>
             <View style={{ flex: 1, minWidth: 200, gap: 2 }}>
               <Text style={styles.summary}>
-                {h.actor.name} {h.summary}
+                {h.actor.name} {energyInText(h.summary, units, rig.data?.power.systemVoltage)}
               </Text>
               <Small>{formatWhen(h.at)}</Small>
               {h.undoable && rig.data?.permissions.edit ? (
