@@ -11,6 +11,17 @@ async function setEnergyOnAccount(page: Page, energy: 'Ah' | 'Wh') {
   expect(res.status()).toBe(200);
 }
 
+/** Deletes the seeded Wren's cable runs of these names through the API, as the signed-in owner. */
+async function removeRunsOfWren(page: Page, labels: string[]) {
+  const { rigs } = await (await page.request.get(BASE + '/api/rigs')).json();
+  const wren = rigs.find((r: { name: string }) => r.name === 'Wren');
+  const { cableRuns } = await (await page.request.get(`${BASE}/api/rigs/${wren.id}/cable-runs`)).json();
+  for (const run of cableRuns.filter((r: { label: string }) => labels.includes(r.label))) {
+    const res = await page.request.delete(`${BASE}/api/rigs/${wren.id}/cable-runs/${run.id}`, { headers: { Origin: BASE } });
+    expect(res.status()).toBe(204);
+  }
+}
+
 describe('the rig workspace', () => {
   it('a new traveller sets up a rig, sees the Outlook with its chart, tries a load, adopts it and sees it counted', async () => {
     const page = await chrome.page(WIDE);
@@ -183,6 +194,8 @@ describe('the rig workspace', () => {
 describe('cable runs on a rig', () => {
   it('adds a run on Wren, flags the fitted wire as too small, and shows the size by the units setting, with the cautions', async () => {
     const page = await chrome.signedIn('ines@example.org', WIDE);
+    // The runs this test adds to the seeded Wren are removed first, so a second run on the same database passes.
+    await removeRunsOfWren(page, ['Inverter feed', 'Feed from rating']);
     await page.getByTestId('open-Wren').click();
     await page.getByTestId('tab-Cable runs').click();
     await page.getByTestId('rig-cable-runs-screen').waitFor();
@@ -210,6 +223,7 @@ describe('cable runs on a rig', () => {
     await page.getByTestId('circuit-end-inverter').click();
     await page.getByTestId('run-submit').click();
     await expect.poll(() => page.getByTestId('run-Feed from rating').textContent()).toMatch(/31\.75 A \(the inverter at its 10\.5 V cut-out, continuous\)/);
+    await removeRunsOfWren(page, ['Inverter feed', 'Feed from rating']);
     await page.close();
   });
 });
