@@ -1,5 +1,6 @@
 import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
 import { cleanup, renderHook } from '@testing-library/react';
+import { File as NodeFile } from 'node:buffer';
 import { type ChildProcess, spawn } from 'node:child_process';
 import { once } from 'node:events';
 import { createInterface } from 'node:readline';
@@ -66,7 +67,8 @@ export function withApiHooks(env: Record<string, string> = {}) {
     headers.set('Origin', TEST_ORIGIN);
     const jar = signedIn ? jarOf(signedIn) : null;
     if (jar?.size) headers.set('Cookie', [...jar].map(([name, value]) => `${name}=${value}`).join('; '));
-    const res = await nodeFetch(input, { ...init, headers });
+    const body = init?.body instanceof FormData ? await asNodeFormData(init.body) : init?.body;
+    const res = await nodeFetch(input, { ...init, headers, body });
     if (jar) keepCookies(jar, res);
     return res;
   };
@@ -135,8 +137,10 @@ export function withApiHooks(env: Record<string, string> = {}) {
       loaders.push(async () => void Object.assign(mod, await importer()));
       return mod;
     },
-    /** Renders hooks as `person` with a fresh QueryClient; `client` is that client, to read its cache. */
-    render<R>(hook: () => R, person: Person = 'owner') {
+    /** Signs `person` in again through /api/auth/sign-in/email (after a test signed them out). */
+    signIn,
+    /** Renders hooks as `person` (null: nobody signed in) with a fresh QueryClient; `client` is that client, to read its cache. */
+    render<R>(hook: () => R, person: Person | null = 'owner') {
       signedIn = person;
       const client = freshQueryClient();
       const wrapper = ({ children }: { children: ReactNode }) => <QueryClientProvider client={client}>{children}</QueryClientProvider>;
@@ -144,6 +148,29 @@ export function withApiHooks(env: Record<string, string> = {}) {
     },
   };
 }
+
+/**
+ * jsdom's FormData as Node's fetch can send it, each file with its bytes, name and type: what a browser
+ * sends as multipart for an upload. (jsdom's File has no arrayBuffer(), hence its FileReader; Node's
+ * FormData is not a global under jsdom, hence the one Node's own Response makes.)
+ */
+async function asNodeFormData(form: FormData): Promise<FormData> {
+  const NodeFormData = (await new Response(new URLSearchParams()).formData()).constructor as typeof FormData;
+  const out = new NodeFormData();
+  for (const [key, value] of form) {
+    if (typeof value === 'string') out.append(key, value);
+    else out.append(key, new NodeFile([Buffer.from(await bytesOf(value))], value.name, { type: value.type }) as unknown as File);
+  }
+  return out;
+}
+
+const bytesOf = (blob: Blob) =>
+  new Promise<ArrayBuffer>((resolve, reject) => {
+    const reader = new FileReader();
+    reader.onload = () => resolve(reader.result as ArrayBuffer);
+    reader.onerror = () => reject(reader.error);
+    reader.readAsArrayBuffer(blob);
+  });
 
 /** The household server's first line: its port and household, or its failure. */
 async function firstLine(child: ChildProcess): Promise<{ port: number; fx: ServedHousehold }> {
