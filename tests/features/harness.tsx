@@ -48,9 +48,12 @@ export function freshQueryClient() {
  *       const { result, client } = api.render(() => notes.useNotesQuery(api.fx.rigId), 'member');
  *     });
  *
- * Every `render` makes a fresh QueryClient; the hooks it rendered are unmounted after each test.
+ * Every `render` makes a fresh QueryClient; the hooks it rendered are unmounted after each test. The
+ * server runs outside this process because jsdom's globals (its typed arrays among them) break the
+ * server's libraries: in-process, better-auth could not sign its e-mail verification tokens.
  */
 export function withApiHooks(env: Record<string, string> = {}) {
+  if (typeof document === 'undefined') throw new Error('a hook test runs under jsdom: start its file with // @vitest-environment jsdom');
   const fx = {} as ServedHousehold;
   const jars = new Map<Person, Map<string, string>>();
   const nodeFetch = globalThis.fetch;
@@ -127,10 +130,6 @@ export function withApiHooks(env: Record<string, string> = {}) {
   return {
     /** The household's people (with their e-mail addresses), its rig and its id: filled in before the first test. */
     fx,
-    /** The API's address (set before the first test). */
-    get base() {
-      return base;
-    },
     /** A feature's api module, loaded once the API's address is known (filled in before the first test). */
     load<M extends object>(importer: () => Promise<M>): M {
       const mod = {} as M;
