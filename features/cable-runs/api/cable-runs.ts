@@ -12,7 +12,7 @@ export const cableRunKeys = { rig: (rigId: string) => ['rigs', 'cable-runs', rig
 export const useCableRunsQuery = (rigId: string) =>
   useQuery({ queryKey: cableRunKeys.rig(rigId), queryFn: () => apiFetch<CableRunList>(`/api/rigs/${rigId}/cable-runs`).then((r) => r.cableRuns) });
 
-function useRunMutation<V>(rigId: string, fn: (v: V) => Promise<unknown>) {
+function useRunMutation<V, R>(rigId: string, fn: (v: V) => Promise<R>) {
   const client = useQueryClient();
   return useMutation({ mutationFn: fn, onSuccess: () => client.invalidateQueries({ queryKey: cableRunKeys.rig(rigId) }) });
 }

@@ -14,7 +14,7 @@ export const noteKeys = {
 export const notesQueryOptions = (rigId: string) => queryOptions({ queryKey: noteKeys.rig(rigId), queryFn: () => apiFetch<Notes>(`/api/rigs/${rigId}/notes`) });
 export const useNotesQuery = (rigId: string) => useQuery(notesQueryOptions(rigId));
 
-function useNoteMutation<V>(rigId: string, fn: (v: V) => Promise<unknown>) {
+function useNoteMutation<V, R>(rigId: string, fn: (v: V) => Promise<R>) {
   const client = useQueryClient();
   return useMutation({ mutationFn: fn, onSuccess: () => client.invalidateQueries({ queryKey: noteKeys.rig(rigId) }) });
 }

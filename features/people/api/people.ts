@@ -16,7 +16,7 @@ export const peopleQueryOptions = (rigId: string) =>
   queryOptions({ queryKey: peopleKeys.rig(rigId), queryFn: () => apiFetch<People>(`/api/rigs/${rigId}/people`) });
 export const usePeopleQuery = (rigId: string) => useQuery(peopleQueryOptions(rigId));
 
-function usePeopleMutation<V>(rigId: string, fn: (v: V) => Promise<unknown>) {
+function usePeopleMutation<V, R>(rigId: string, fn: (v: V) => Promise<R>) {
   const client = useQueryClient();
   return useMutation({ mutationFn: fn, onSuccess: () => client.invalidateQueries({ queryKey: peopleKeys.rig(rigId) }) });
 }
