@@ -1,4 +1,4 @@
-import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { hashKey, queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 
 import { apiFetch } from '@/lib/api-client';
 import type { InvitationSent, InvitationView, People } from '@/shared/api/people';
@@ -39,6 +39,8 @@ export function useInvitationAcceptMutation(invitationId: string) {
   const client = useQueryClient();
   return useMutation({
     mutationFn: () => apiFetch(`/api/invitations/${invitationId}/accept`, { method: 'POST', json: {} }),
-    onSuccess: () => client.invalidateQueries(),
+    // Joining changes what every screen may read; all but the invitation itself, which, used, would now answer 409
+    // and flash "already used" on the screen that is about to move on.
+    onSuccess: () => client.invalidateQueries({ predicate: (q) => q.queryHash !== hashKey(peopleKeys.invitation(invitationId)) }),
   });
 }
