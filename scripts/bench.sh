@@ -18,9 +18,7 @@ DATABASE_URL=postgres://keyoff@127.0.0.1:54329/keyoff_test npx tsx scripts/bench
 DATABASE_URL=postgres://keyoff@127.0.0.1:54329/keyoff_test npx tsx scripts/bench-upload.ts
 DATABASE_URL=postgres://keyoff@127.0.0.1:54329/keyoff_test npx tsx scripts/bench-web.ts
 start_maildev
-"$(ls -d /usr/lib/postgresql/*/bin | sort -V | tail -1)/psql" -qX -h 127.0.0.1 -p 54329 -U keyoff -d keyoff_bench \
-  -c "drop schema if exists public cascade; create schema public;" \
-  -c "do \$\$ declare s text; begin for s in select nspname from pg_namespace where nspname like 'pgboss%' loop execute format('drop schema %I cascade', s); end loop; end \$\$;" >/dev/null
+empty_db keyoff_bench
 DATABASE_URL=postgres://keyoff@127.0.0.1:54329/keyoff_bench npx tsx scripts/bench-reports.ts
 say "summary (also in bench-results/latest.json)"
 node -e '

@@ -43,6 +43,16 @@ start_db() {
   bash "$ROOT/scripts/db.sh" start
 }
 
+# Empties a database: its tables, and every job-queue schema (each test app makes one), one schema per
+# transaction so that a hundred left by earlier runs do not overflow PostgreSQL's lock table.
+empty_db() {
+  local psql
+  psql="$(ls -d /usr/lib/postgresql/*/bin | sort -V | tail -1)/psql"
+  "$psql" -qX -h 127.0.0.1 -p 54329 -U keyoff -d "$1" -c "set client_min_messages = warning; drop schema if exists public cascade; create schema public;" >/dev/null
+  "$psql" -qX -h 127.0.0.1 -p 54329 -U keyoff -d "$1" -c "set client_min_messages = warning;" \
+    -c "do \$\$ declare s text; begin for s in select nspname from pg_namespace where nspname like 'pgboss%' loop execute format('drop schema %I cascade', s); commit; end loop; end \$\$;" >/dev/null
+}
+
 # maildev on loopback only: SMTP 1025, web 1080.
 start_maildev() {
   if port_open 1025 && port_open 1080; then say "a mail catcher already answers on 1025/1080"; return; fi

@@ -10,9 +10,7 @@ ensure_deps
 start_db
 export DATABASE_URL=postgres://keyoff@127.0.0.1:54329/keyoff_test
 # A fresh test database every run: drop what the last run left, then migrate and seed.
-"$(ls -d /usr/lib/postgresql/*/bin | sort -V | tail -1)/psql" -qX -h 127.0.0.1 -p 54329 -U keyoff -d keyoff_test \
-  -c "drop schema if exists public cascade; create schema public;" \
-  -c "do \$\$ declare s text; begin for s in select nspname from pg_namespace where nspname like 'pgboss%' loop execute format('drop schema %I cascade', s); end loop; end \$\$;" >/dev/null
+empty_db keyoff_test
 (cd "$ROOT" && npx tsx scripts/seed.ts)
 start_maildev
 start_s3
