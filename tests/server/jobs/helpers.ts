@@ -53,13 +53,30 @@ export function privateMaildev(smtp: number, web: number) {
   return {
     base: `http://127.0.0.1:${web}`,
     async start() {
-      child = spawn('node_modules/.bin/maildev', ['--ip', '127.0.0.1', '--web-ip', '127.0.0.1', '--smtp', String(smtp), '--web', String(web), '--silent'], { stdio: 'ignore' });
-      await waitFor(async () => (await portOpen(smtp)) && (await portOpen(web)), 15_000, `maildev on ${smtp}`);
+      const c = spawn('node_modules/.bin/maildev', ['--ip', '127.0.0.1', '--web-ip', '127.0.0.1', '--smtp', String(smtp), '--web', String(web)], { stdio: ['ignore', 'pipe', 'pipe'] });
+      child = c;
+      // What it printed, for the error if it does not come up (a port taken, a crash).
+      let said = '';
+      c.stdout!.on('data', (d: Buffer) => (said += d));
+      c.stderr!.on('data', (d: Buffer) => (said += d));
+      let exited = false;
+      c.once('exit', () => (exited = true));
+      try {
+        await waitFor(async () => {
+          if (exited) throw new Error(`maildev on ${smtp} exited: ${said.trim()}`);
+          return (await portOpen(smtp)) && (await portOpen(web));
+        }, 30_000, `maildev on ${smtp}`);
+      } catch (err) {
+        throw new Error(`${(err as Error).message}; it said: ${said.trim() || 'nothing'}`);
+      }
+      c.stdout!.removeAllListeners('data').resume();
+      c.stderr!.removeAllListeners('data').resume();
     },
     async stop() {
       if (!child) return;
       const c = child;
       child = null;
+      if (c.exitCode !== null || c.signalCode !== null) return;
       await new Promise<void>((resolve) => {
         c.once('exit', () => resolve());
         c.kill('SIGTERM');
