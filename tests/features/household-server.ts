@@ -7,7 +7,7 @@ import { once } from 'node:events';
 import type { AddressInfo } from 'node:net';
 
 import { householdFixture } from '../server/helpers';
-import { makeTestApp } from '../server/test-app';
+import { closeTestApp, makeTestApp } from '../server/test-app';
 
 export type ServedHousehold = Pick<Awaited<ReturnType<typeof householdFixture>>, 'users' | 'rigId' | 'householdId'>;
 
@@ -24,8 +24,7 @@ async function main() {
   await once(process.stdin, 'end');
   server.closeAllConnections();
   await new Promise((resolve) => server.close(resolve));
-  await ctx.jobs.stop();
-  await ctx.db.destroy();
+  await closeTestApp(ctx);
 }
 
 main().catch((err) => {

@@ -2,7 +2,7 @@ import { afterAll, beforeAll } from 'vitest';
 
 import type { AppContext } from '@/server/context';
 import { householdFixture } from './helpers';
-import { makeTestApp } from './test-app';
+import { closeTestApp, makeTestApp } from './test-app';
 
 export type TestApp = Awaited<ReturnType<typeof makeTestApp>>;
 export type Household = Awaited<ReturnType<typeof householdFixture>> & {
@@ -34,8 +34,7 @@ export function withTestApp(options: TestAppOptions = {}): TestApp {
   });
   afterAll(async () => {
     if (!ctx.db) return; // makeTestApp failed: its error is the one to read
-    await ctx.jobs.stop();
-    await ctx.db.destroy();
+    await closeTestApp(ctx);
   });
   return ctx;
 }

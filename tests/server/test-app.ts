@@ -1,3 +1,4 @@
+import { sql } from 'kysely';
 import { pino } from 'pino';
 
 import { createApp } from '@/server/app';
@@ -34,4 +35,20 @@ export async function makeTestApp(env: Record<string, string> = {}, overrides: P
   await ctx.jobs.start();
   const app = createApp(ctx);
   return { ...ctx, app };
+}
+
+/**
+ * Stops a test app's queue, drops the queue's own schema (one per app; npm test also empties them all at its
+ * start, so a drop that has to wait on a lock is given up after two seconds) and closes its database pool.
+ */
+export async function closeTestApp(ctx: Pick<AppContext, 'jobs' | 'db' | 'config'>) {
+  await ctx.jobs.stop();
+  await ctx.db
+    .transaction()
+    .execute(async (trx) => {
+      await sql`set local lock_timeout = '2s'`.execute(trx);
+      await sql`drop schema if exists ${sql.id(ctx.config.JOBS_SCHEMA)} cascade`.execute(trx);
+    })
+    .catch(() => undefined);
+  await ctx.db.destroy();
 }

@@ -2,6 +2,7 @@ import { ActivityIndicator, StyleSheet, Text, View } from 'react-native';
 
 import { formatDays, formatWhen } from '@/components/format';
 import { energyInText, useUnits } from '@/components/units';
+import { useIsNarrow } from '@/components/use-layout';
 import { Body, Button, Card, Heading, Small } from '@/components/ui';
 import { colors, space, type } from '@/shared/theme';
 import { useHistoryQuery } from '../api/history';
@@ -15,6 +16,8 @@ export function HistoryScreen({ rigId }: { rigId: string }) {
   const rig = useRigQuery(rigId);
   const undo = useFixUndoMutation(rigId);
   const { units } = useUnits();
+  // On a phone the figures wrap under the summary: aligned with it on the left, not floated right.
+  const narrow = useIsNarrow();
   const horizon = outlook.data?.horizonDays ?? 14;
   if (history.isPending) return <ActivityIndicator color={colors.night} />;
   if (history.isError) return <Body style={{ color: colors.short }}>{history.error.message}</Body>;
@@ -37,7 +40,7 @@ export function HistoryScreen({ rigId }: { rigId: string }) {
                 <Button testID="history-undo" label="Undo this Fix" busy={undo.isPending && undo.variables === h.id} onPress={() => undo.mutate(h.id)} />
               ) : null}
             </View>
-            <View style={styles.days}>
+            <View style={[styles.days, narrow && { alignItems: 'flex-start' }]}>
               <Small>Days parked</Small>
               <Text style={[styles.figure, moved && (h.daysParkedAfter ?? Infinity) < (h.daysParkedBefore ?? Infinity) ? { color: colors.short } : null]}>
                 {moved ? `${formatDays(h.daysParkedBefore, horizon)} → ${formatDays(h.daysParkedAfter, horizon)}` : `${formatDays(h.daysParkedAfter, horizon)}${created ? '' : ' (no change)'}`}
