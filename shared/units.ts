@@ -10,9 +10,14 @@ export const DEFAULT_ENERGY_UNIT: EnergyUnit = 'Ah';
 /** Watt-hours of so many amp-hours at the rig's nominal voltage. */
 export const whOf = (ah: number, systemVoltage: number) => ah * systemVoltage;
 
+/** The number alone, for a column headed by its unit: "12.5", or whole watt-hours at the system voltage ("150"). */
+export function energyAmount(ah: number, energy: EnergyUnit, systemVoltage = 12, digits = 1): string {
+  return energy === 'Wh' ? whOf(ah, systemVoltage).toFixed(0) : ah.toFixed(digits);
+}
+
 /** Amp-hours as the person likes them: "12.5 Ah", or whole watt-hours at the system voltage ("150 Wh"). */
 export function formatEnergy(ah: number, energy: EnergyUnit, systemVoltage = 12, digits = 1): string {
-  return energy === 'Wh' ? `${whOf(ah, systemVoltage).toFixed(0)} Wh` : `${ah.toFixed(digits)} Ah`;
+  return `${energyAmount(ah, energy, systemVoltage, digits)} ${energy}`;
 }
 
 /**

@@ -7,7 +7,7 @@ import type { Projection } from '@/shared/energy/project';
 import { FIX_WIRING_CAUTION, GENERAL_CAUTIONS, needsWiringCaution } from '@/shared/safety';
 import type { Load, RigPower } from '@/shared/schemas/projection';
 import { colors } from '@/shared/theme';
-import { type EnergyUnit, energyInText, formatEnergy } from '@/shared/units';
+import { energyAmount, type EnergyUnit, energyInText, formatEnergy } from '@/shared/units';
 
 const require_ = createRequire(__filename);
 const REGULAR = require_.resolve('@expo-google-fonts/nunito/400Regular/Nunito_400Regular.ttf');
@@ -143,7 +143,7 @@ export function renderSheet(data: SheetData, size: SheetSize): Promise<Buffer> {
         { title: `${data.energy} a day`, share: 0.14, align: 'right' },
         { title: 'Share', share: 0.14, align: 'right' },
       ],
-      installed.map(({ load, ahPerDay, share }) => [load.quantity > 1 ? `${load.name} ×${load.quantity}` : load.name, load.supply.toUpperCase(), draw(load), String(load.hoursPerDay), `${load.dutyPercent} %`, energy(ahPerDay ?? 0, 2).replace(/ (Ah|Wh)$/, ''), `${Math.round((share ?? 0) * 100)} %`]),
+      installed.map(({ load, ahPerDay, share }) => [load.quantity > 1 ? `${load.name} ×${load.quantity}` : load.name, load.supply.toUpperCase(), draw(load), String(load.hoursPerDay), `${load.dutyPercent} %`, energyAmount(ahPerDay ?? 0, data.energy, data.power.systemVoltage, 2), `${Math.round((share ?? 0) * 100)} %`]),
     );
   } else para('No loads yet.');
   para(`Standby a day: inverter idle ${energy(p.standby.inverterIdleAh, 2)}, key-off draw ${energy(p.standby.keyOffAh, 2)}, self-discharge ${energy(p.standby.selfDischargeAh, 2)}.`, { size: 9, color: colors.inkSoft });

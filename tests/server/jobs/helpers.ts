@@ -2,7 +2,7 @@ import { spawn, type ChildProcess } from 'node:child_process';
 import { createConnection } from 'node:net';
 
 import type { AppContext } from '@/server/context';
-import { MAILDEV } from '../helpers';
+import { MAILDEV, type signIn, WREN_POWER } from '../helpers';
 
 export type MailDevFull = { id: string; subject: string; text: string; html: string; to: { address: string }[]; headers: Record<string, string>; attachments?: { contentId: string; contentType: string }[] };
 
@@ -83,4 +83,24 @@ export function privateMaildev(smtp: number, web: number) {
       });
     },
   };
+}
+
+// A rig whose margin the test moves with the planned stay alone: 400 Ah of AGM and a 45 W fridge at 35 %
+// lasts several days, so a stay of 1 day is Comfortable, one just under the days is Tight, one over is Short
+// (the thresholds in shared/energy/defaults.ts: Tight below max(1 day, a quarter of the stay)).
+const MARGIN_POWER = { ...WREN_POWER, battery: { chemistry: 'agm', capacityAh: 400 }, inverter: null };
+
+/** Creates that rig as the agent's (planned stay 1 day); `setStay` changes the stay and answers the Outlook. */
+export async function marginRig(agent: Awaited<ReturnType<typeof signIn>>, name: string) {
+  const created = await agent
+    .post('/api/rigs')
+    .send({ name, vehicle: 'test', power: { ...MARGIN_POWER, plannedStayDays: 1 }, loads: [{ name: 'Fridge', supply: 'dc', watts: 45, dutyPercent: 35, hoursPerDay: 24 }] })
+    .expect(201);
+  const rigId: string = created.body.id;
+  const setStay = async (days: number) => {
+    const rig = (await agent.get(`/api/rigs/${rigId}`).expect(200)).body;
+    await agent.patch(`/api/rigs/${rigId}`).send({ version: rig.version, power: { ...rig.power, plannedStayDays: days } }).expect(200);
+    return (await agent.get(`/api/rigs/${rigId}/outlook`).expect(200)).body;
+  };
+  return { rigId, setStay };
 }

@@ -2,32 +2,19 @@ import { beforeAll, describe, expect, it } from 'vitest';
 
 import { checkMargin, warningKey } from '@/server/jobs/margin';
 import { withTestApp } from '../fixtures';
-import { signIn, verifiedUser, WREN_POWER } from '../helpers';
-import { emailLog, mailsTo } from './helpers';
+import { signIn, verifiedUser } from '../helpers';
+import { emailLog, mailsTo, marginRig } from './helpers';
 
-// The same rig set-up as margin.test.ts (a 400 Ah AGM bank and a fridge; the planned stay alone moves the
-// margin), on an app whose workers do not run: the test calls each check itself.
-const POWER = { ...WREN_POWER, battery: { chemistry: 'agm', capacityAh: 400 }, inverter: null };
-
+// The same rig as margin.test.ts (marginRig: the planned stay alone moves the margin), on an app whose
+// workers do not run: the test calls each check itself.
 const ctx = withTestApp();
 let owner: { id: string; email: string };
-let agent: Awaited<ReturnType<typeof signIn>>;
 let rigId: string;
-
-async function setStay(days: number) {
-  const rig = (await agent.get(`/api/rigs/${rigId}`).expect(200)).body;
-  await agent.patch(`/api/rigs/${rigId}`).send({ version: rig.version, power: { ...rig.power, plannedStayDays: days } }).expect(200);
-  return (await agent.get(`/api/rigs/${rigId}/outlook`).expect(200)).body;
-}
+let setStay: Awaited<ReturnType<typeof marginRig>>['setStay'];
 
 beforeAll(async () => {
   owner = await verifiedUser(ctx, 'margin-retry');
-  agent = await signIn(ctx.app, owner.email);
-  const created = await agent
-    .post('/api/rigs')
-    .send({ name: 'Retry van', vehicle: 'test', power: { ...POWER, plannedStayDays: 1 }, loads: [{ name: 'Fridge', supply: 'dc', watts: 45, dutyPercent: 35, hoursPerDay: 24 }] })
-    .expect(201);
-  rigId = created.body.id;
+  ({ rigId, setStay } = await marginRig(await signIn(ctx.app, owner.email), 'Retry van'));
 });
 
 describe('a low-margin warning written by a later check of the same fall', () => {

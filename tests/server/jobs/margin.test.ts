@@ -2,24 +2,14 @@ import { beforeAll, describe, expect, it } from 'vitest';
 
 import { checkMargin, warningKey } from '@/server/jobs/margin';
 import { withTestApp } from '../fixtures';
-import { signIn, verifiedUser, WREN_POWER } from '../helpers';
-import { emailLog, mailsTo, waitFor } from './helpers';
+import { signIn, verifiedUser } from '../helpers';
+import { emailLog, mailsTo, marginRig, waitFor } from './helpers';
 
 let owner: { id: string; email: string };
 let member: { id: string; email: string };
 let agent: Awaited<ReturnType<typeof signIn>>;
 let rigId: string;
-
-// A rig whose margin the test moves with the planned stay alone: 400 Ah of AGM and a 45 W fridge at 35 %
-// lasts several days, so a stay of 1 day is Comfortable, one just under the days is Tight, one over is Short
-// (the thresholds in shared/energy/defaults.ts: Tight below max(1 day, a quarter of the stay)).
-const POWER = { ...WREN_POWER, battery: { chemistry: 'agm', capacityAh: 400 }, inverter: null };
-
-async function setStay(days: number) {
-  const rig = (await agent.get(`/api/rigs/${rigId}`).expect(200)).body;
-  await agent.patch(`/api/rigs/${rigId}`).send({ version: rig.version, power: { ...rig.power, plannedStayDays: days } }).expect(200);
-  return (await agent.get(`/api/rigs/${rigId}/outlook`).expect(200)).body;
-}
+let setStay: Awaited<ReturnType<typeof marginRig>>['setStay'];
 const warnings = async (email: string) => (await mailsTo(email)).filter((m) => /: margin (Tight|Short)/.test(m.subject));
 
 const ctx = withTestApp({ workers: true });
@@ -27,11 +17,7 @@ beforeAll(async () => {
   owner = await verifiedUser(ctx, 'margin-owner');
   member = await verifiedUser(ctx, 'margin-member');
   agent = await signIn(ctx.app, owner.email);
-  const created = await agent
-    .post('/api/rigs')
-    .send({ name: 'Margin van', vehicle: 'test', power: { ...POWER, plannedStayDays: 1 }, loads: [{ name: 'Fridge', supply: 'dc', watts: 45, dutyPercent: 35, hoursPerDay: 24 }] })
-    .expect(201);
-  rigId = created.body.id;
+  ({ rigId, setStay } = await marginRig(agent, 'Margin van'));
   const householdId = (await agent.get(`/api/rigs/${rigId}`)).body.householdId;
   await ctx.auth.api.addMember({ body: { userId: member.id, role: 'member', organizationId: householdId } });
   // The member hears only of Short.
